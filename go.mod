@@ -1,0 +1,3 @@
+module upright
+
+go 1.26

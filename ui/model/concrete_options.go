@@ -1,0 +1,47 @@
+package model
+
+// ConcreteOptions are the concrete column choices.
+type ConcreteOptions struct {
+	FcMPa         float64 // specified compressive strength f'c, MPa; 0 means the default for the unit system (5,000 psi or 35 MPa)
+	BarGrade      int     // 60 or 80 (ASTM A615)
+	RhoMax        float64 // practical cap on the reinforcement ratio, e.g. 0.04
+	Transverse    string  // "ties", "spiral" or "all"
+	M1M2          float64 // end-moment ratio M1/M2, -1 (single curvature) to 1
+	BetaDns       float64 // sustained-load ratio; used when BetaFromLoads is false or the load has no split
+	BetaFromLoads bool    // derive βdns from the takedown's dead/live split
+	EIMethod      string  // "a" or "b" of ACI 318-19 6.6.4.4.4
+}
+
+func defaultConcreteOptions() ConcreteOptions {
+	return ConcreteOptions{
+		BarGrade: 60, RhoMax: 0.04, Transverse: "all", M1M2: -1,
+		BetaDns: 0.6, BetaFromLoads: true, EIMethod: "a",
+	}
+}
+
+func (c ConcreteOptions) validate() error {
+	if c.FcMPa != 0 && (!finite(c.FcMPa) || c.FcMPa < 27.5 || c.FcMPa > 69) {
+		return bad("f'c", c.FcMPa, "a concrete strength from 4,000 to 10,000 psi (27.6 to 69 MPa)")
+	}
+	if c.BarGrade != 60 && c.BarGrade != 80 {
+		return bad("bar grade", c.BarGrade, "60 or 80")
+	}
+	if !finite(c.RhoMax) || c.RhoMax < 0.01 || c.RhoMax > 0.08 {
+		return bad("rho-max", c.RhoMax, "a reinforcement ratio from 0.01 to 0.08 (ACI 318-19 10.6.1.1)")
+	}
+	switch c.Transverse {
+	case "ties", "spiral", "all":
+	default:
+		return bad("transverse", c.Transverse, "ties, spiral or all")
+	}
+	if !finite(c.M1M2) || c.M1M2 < -1 || c.M1M2 > 1 {
+		return bad("m1m2", c.M1M2, "an end-moment ratio M1/M2 from -1 (single curvature) to 1")
+	}
+	if !finite(c.BetaDns) || c.BetaDns < 0 || c.BetaDns > 1 {
+		return bad("beta-dns", c.BetaDns, "a sustained-load ratio from 0 to 1")
+	}
+	if c.EIMethod != "a" && c.EIMethod != "b" {
+		return bad("EI method", c.EIMethod, "a or b (ACI 318-19 6.6.4.4.4)")
+	}
+	return nil
+}

@@ -1,0 +1,86 @@
+package model
+
+// LoadMode says whether the axial load is typed in or taken down.
+type LoadMode string
+
+// The two ways of giving the load.
+const (
+	LoadDirect   LoadMode = "direct"   // a typed axial load: factored for LRFD, service for ASD
+	LoadTakedown LoadMode = "takedown" // from tributary area and floor loads
+)
+
+// Load is the axial load input.
+type Load struct {
+	Mode    LoadMode
+	DirectN float64 // typed axial load, N (factored for LRFD, service for ASD)
+
+	// Takedown inputs (Mode == LoadTakedown).
+	TributaryM2   float64 // tributary area per floor, m²
+	Floors        int     // floors carried below the roof (0 for a roof-only column)
+	FloorDeadKPa  float64 // superimposed dead load per floor incl. slab, kPa
+	FloorLiveKPa  float64 // unreduced floor live load, kPa
+	RoofDeadKPa   float64 // roof dead load, kPa
+	RoofLiveKPa   float64 // roof live load Lr, kPa
+	SnowKPa       float64 // roof snow load S, kPa
+	LiveReduction bool    // apply ASCE 7-22 4.7 live-load reduction
+	KLL           float64 // live load element factor of ASCE 7-22 Table 4.7-1 (4 interior column, 2 exterior without cantilever slab ...)
+	Occupancy     string  // "general", "assembly" (no reduction, 4.7.5), "storage" (heavy live load > 4.79 kPa, 4.7.3), "garage" (4.7.4)
+}
+
+// Combo is one load combination evaluated in the takedown.
+type Combo struct {
+	Name   string  // e.g. "1.2D + 1.6L + 0.5(Lr or S)" with its ASCE 7-22 number
+	Clause string  // e.g. "ASCE 7-22 2.3.1 combination 2"
+	D      float64 // factor on dead load
+	L      float64 // factor on floor live load
+	Lr     float64 // factor on roof live load
+	S      float64 // factor on snow
+	ValueN float64 // the combined axial load without column self-weight, N
+}
+
+// LoadSummary is the result of the takedown (or the typed load) that the
+// families and the demand calculation use.
+type LoadSummary struct {
+	Known bool // true when the dead/live split is known (takedown)
+
+	DeadN     float64 // service dead load, N
+	LiveN     float64 // service floor live load after reduction, N
+	LiveRawN  float64 // service floor live load before reduction, N
+	RoofLiveN float64 // service roof live load, N
+	SnowN     float64 // service snow load, N
+	Reduction float64 // live-load reduction multiplier applied (1 when none)
+
+	Combos    []Combo // every combination checked
+	Governing int     // index into Combos of the governing one; -1 for a typed load
+	DemandN   float64 // governing axial demand without self-weight, N
+
+	BetaDns float64 // ACI 318-19 βdns: factored sustained (dead) over total factored axial
+	Lambda  float64 // NDS 2018 time effect factor λ of the governing LRFD combination
+	CD      float64 // NDS 2018 load duration factor CD of the governing ASD combination
+
+	// StrengthPerService is α = (governing LRFD demand)/(governing ASD demand).
+	// Strength-design-only materials (concrete) divide φPn by α to compare
+	// with ASD service loads; 1.5 for a typed load (common practice for D+L).
+	StrengthPerService float64
+
+	DirectDeadFactor float64 // factor on self-weight added to a typed load (1.2 LRFD, 1.0 ASD)
+
+	Steps []Step // readable trace of the takedown
+}
+
+// Demand returns the governing axial demand, N, with selfN (service weight of
+// the column over its height) added as dead load to every combination.
+func (ls *LoadSummary) Demand(selfN float64) float64 {
+	if ls.Governing < 0 || len(ls.Combos) == 0 {
+		return ls.DemandN + ls.DirectDeadFactor*selfN
+	}
+	best := 0.0
+	for i := range ls.Combos {
+		c := &ls.Combos[i]
+		v := c.ValueN + c.D*selfN
+		if v > best {
+			best = v
+		}
+	}
+	return best
+}

@@ -1,0 +1,547 @@
+package cli
+
+import (
+	"context"
+	"encoding/json"
+	"errors"
+	"flag"
+	"fmt"
+	"io"
+	"math"
+	"strings"
+	"text/tabwriter"
+
+	"upright/ui/model"
+	"upright/ui/units"
+)
+
+// Version is the program's version, shown by --version and the about box.
+const Version = "0.1.0"
+
+// Commands lists the headless subcommands.
+var Commands = []string{"compare", "crossovers", "curve"}
+
+// IsCommand reports whether args start with a headless subcommand or a top-level flag.
+func IsCommand(args []string) bool {
+	if len(args) == 0 {
+		return false
+	}
+	switch args[0] {
+	case "--version", "-version", "version", "help", "-h", "--help":
+		return true
+	}
+	for _, c := range Commands {
+		if args[0] == c {
+			return true
+		}
+	}
+	return strings.HasPrefix(args[0], "-")
+}
+
+// LoadScheme reads a scheme file; set by the scheme-file package when linked in.
+var LoadScheme func(path string) (model.Scheme, error)
+
+// Run runs a headless command and returns the process exit status: 0 on
+// success, 1 on a failure while computing or writing, 2 on bad input.
+func Run(args []string, stdout, stderr io.Writer) int {
+	if len(args) == 0 {
+		usage(stderr)
+		return 2
+	}
+	var err error
+	switch args[0] {
+	case "--version", "-version", "version":
+		fmt.Fprintf(stdout, "upright %s\n", Version)
+		return 0
+	case "help", "-h", "--help":
+		usage(stdout)
+		return 0
+	case "compare":
+		err = runCompare(args[1:], stdout, stderr)
+	case "crossovers":
+		err = runCrossovers(args[1:], stdout, stderr)
+	case "curve":
+		err = runCurve(args[1:], stdout, stderr)
+	default:
+		if extra, ok := extraCommands[args[0]]; ok {
+			err = extra(args[1:], stdout, stderr)
+			break
+		}
+		fmt.Fprintf(stderr, "upright: unknown command %q; commands are %s\n", args[0], strings.Join(commandNames(), ", "))
+		return 2
+	}
+	if err == nil {
+		return 0
+	}
+	if errors.Is(err, flag.ErrHelp) {
+		return 0
+	}
+	fmt.Fprintf(stderr, "upright %s: %v\n", args[0], err)
+	var ue *UsageError
+	var fe *model.FieldError
+	if errors.As(err, &ue) || errors.As(err, &fe) || strings.Contains(err.Error(), "flag provided but not defined") || strings.Contains(err.Error(), "invalid") {
+		return 2
+	}
+	return 1
+}
+
+// extraCommands are commands registered by other packages (report).
+var extraCommands = map[string]func(args []string, stdout, stderr io.Writer) error{}
+
+// RegisterCommand adds a headless subcommand.
+func RegisterCommand(name string, run func(args []string, stdout, stderr io.Writer) error) {
+	extraCommands[name] = run
+}
+
+func commandNames() []string {
+	out := append([]string{}, Commands...)
+	for k := range extraCommands {
+		out = append(out, k)
+	}
+	return out
+}
+
+func usage(w io.Writer) {
+	fmt.Fprintf(w, `upright %s: column scheme comparison (steel, concrete, timber)
+
+  upright                       open the window
+  upright compare [flags]       lightest working size of each family at one length
+  upright crossovers [flags]    lengths where the answer changes
+  upright curve --designation NAME --from 1m --to 10m [flags]
+  upright --version
+
+Run "upright compare -h" for the scheme flags.
+%s
+`, Version, model.Caution)
+}
+
+// schemeFrom parses flags into a scheme, starting from --scheme or the default.
+func schemeFrom(f *schemeFlags, args []string) (model.Scheme, error) {
+	if err := f.fs.Parse(args); err != nil {
+		if errors.Is(err, flag.ErrHelp) {
+			return model.Scheme{}, err
+		}
+		return model.Scheme{}, usagef("%v", err)
+	}
+	if f.fs.NArg() > 0 {
+		return model.Scheme{}, usagef("unexpected argument %q; flags start with --", f.fs.Arg(0))
+	}
+	base := model.DefaultScheme()
+	if f.scheme != "" {
+		if LoadScheme == nil {
+			return base, usagef("--scheme %q: scheme files are not supported in this build", f.scheme)
+		}
+		sc, err := LoadScheme(f.scheme)
+		if err != nil {
+			return base, usagef("--scheme %q: %v", f.scheme, err)
+		}
+		base = sc
+	}
+	return f.build(base)
+}
+
+// Candidate is one candidate in the JSON output of compare.
+type Candidate struct {
+	Material    string         `json:"material"`
+	Family      string         `json:"family"`
+	Designation string         `json:"designation"`
+	OK          bool           `json:"ok"`
+	Permitted   bool           `json:"permitted"`
+	CapacityKN  float64        `json:"capacity_kN"`
+	DemandKN    float64        `json:"demand_kN"`
+	Utilization *float64       `json:"utilization"`
+	MassKgPerM  float64        `json:"mass_kg_per_m"`
+	MassKg      float64        `json:"mass_kg"`
+	FootprintMM [2]float64     `json:"footprint_mm"`
+	PlanAreaMM2 float64        `json:"plan_area_mm2"`
+	CarbonKg    float64        `json:"carbon_kgCO2e"`
+	Governing   string         `json:"governing"`
+	Slenderness float64        `json:"slenderness"`
+	Warnings    []string       `json:"warnings"`
+	Explanation string         `json:"explanation"`
+	Calc        map[string]any `json:"calc"`
+	Steps       []model.Step   `json:"steps"`
+}
+
+func round(x float64, digits int) float64 {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		return 0
+	}
+	p := math.Pow(10, float64(digits))
+	return math.Round(x*p) / p
+}
+
+// sanitize replaces NaN and Inf anywhere in a calc value with nil.
+func sanitize(v any) any {
+	switch x := v.(type) {
+	case float64:
+		if math.IsNaN(x) || math.IsInf(x, 0) {
+			return nil
+		}
+		return x
+	case float32:
+		return sanitize(float64(x))
+	case map[string]any:
+		out := make(map[string]any, len(x))
+		for k, e := range x {
+			out[k] = sanitize(e)
+		}
+		return out
+	case map[string]float64:
+		out := make(map[string]any, len(x))
+		for k, e := range x {
+			out[k] = sanitize(e)
+		}
+		return out
+	case []any:
+		out := make([]any, len(x))
+		for i, e := range x {
+			out[i] = sanitize(e)
+		}
+		return out
+	case []float64:
+		out := make([]any, len(x))
+		for i, e := range x {
+			out[i] = sanitize(e)
+		}
+		return out
+	case [][2]float64:
+		out := make([]any, len(x))
+		for i, e := range x {
+			out[i] = []any{sanitize(e[0]), sanitize(e[1])}
+		}
+		return out
+	}
+	return v
+}
+
+// NewCandidate builds the JSON object of one evaluated row, with its trace.
+func NewCandidate(m *model.Model, r *model.Row, s model.Setting) Candidate {
+	f := m.Families[r.Family]
+	d := m.Detail(r.Family, r.Index, s)
+	c := Candidate{
+		Material: f.Material(), Family: f.Name(), Designation: r.Static.Designation,
+		OK: r.OK, Permitted: r.Permitted,
+		CapacityKN: round(r.CapacityN/1e3, 2), DemandKN: round(r.DemandN/1e3, 2),
+		MassKgPerM: round(r.Static.MassKgPerM, 2), MassKg: round(r.Static.MassKgPerM*s.LengthMM/1000, 1),
+		FootprintMM: [2]float64{round(r.Static.FootprintMM[0], 1), round(r.Static.FootprintMM[1], 1)},
+		PlanAreaMM2: round(r.Static.PlanAreaMM2, 0), CarbonKg: round(r.CarbonKg, 1),
+		Governing: r.Governing, Slenderness: round(r.Slenderness, 1),
+		Warnings: d.Warnings, Explanation: d.Plain, Steps: d.Steps,
+	}
+	if c.Warnings == nil {
+		c.Warnings = []string{}
+	}
+	if !r.Permitted && r.Reason != "" {
+		c.Warnings = append(c.Warnings, r.Reason)
+	}
+	if r.Permitted && r.CapacityN > 0 && !math.IsInf(r.Util, 0) {
+		u := round(r.Util, 4)
+		c.Utilization = &u
+	}
+	calc, _ := sanitize(d.Calc).(map[string]any)
+	if calc == nil {
+		calc = map[string]any{}
+	}
+	c.Calc = calc
+	for i := range c.Steps {
+		if math.IsNaN(c.Steps[i].Value) || math.IsInf(c.Steps[i].Value, 0) {
+			c.Steps[i].Value = 0
+		}
+	}
+	return c
+}
+
+// shownRows picks the rows compare reports: every candidate with all, else
+// each family's best working size, or its closest failing one when none works.
+func shownRows(res *model.Result, all bool) []*model.Row {
+	var out []*model.Row
+	for fi := range res.Families {
+		fr := &res.Families[fi]
+		if all {
+			for i := range fr.Rows {
+				out = append(out, &fr.Rows[i])
+			}
+			continue
+		}
+		if len(fr.Rows) > 0 {
+			out = append(out, &fr.Rows[0])
+		}
+	}
+	return out
+}
+
+func runCompare(args []string, stdout, stderr io.Writer) error {
+	f := newSchemeFlags("compare", stderr)
+	all := f.fs.Bool("all", false, "list every candidate, not only the lightest working size of each family")
+	asJSON := f.fs.Bool("json", false, "write JSON: an array with one object per candidate")
+	chart := f.fs.String("chart", "", "also write the chart to this file (.png, .svg or .pdf)")
+	sc, err := schemeFrom(f, args)
+	if err != nil {
+		return err
+	}
+	m, err := model.New(sc)
+	if err != nil {
+		return err
+	}
+	res, err := m.Evaluate(context.Background(), sc.Setting)
+	if err != nil {
+		return err
+	}
+	rows := shownRows(res, *all)
+	if *chart != "" {
+		if err := writeChart(m, res, *chart); err != nil {
+			return err
+		}
+	}
+	if *asJSON {
+		out := make([]Candidate, len(rows))
+		for i, r := range rows {
+			out[i] = NewCandidate(m, r, sc.Setting)
+		}
+		fmt.Fprintln(stderr, model.Caution)
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(out)
+	}
+	printHeader(stdout, m)
+	printTable(stdout, m, rows, units.System(sc.Units), sc.Setting)
+	fmt.Fprintf(stdout, "\n%s\n", model.Caution)
+	return nil
+}
+
+// WriteChartFunc renders the chart for compare --chart; set by the plots glue.
+var WriteChartFunc func(m *model.Model, res *model.Result, path string) error
+
+func writeChart(m *model.Model, res *model.Result, path string) error {
+	if WriteChartFunc == nil {
+		return usagef("--chart %q: charts are not available in this build", path)
+	}
+	return WriteChartFunc(m, res, path)
+}
+
+func endsText(s model.Setting) string {
+	if s.K > 0 {
+		return fmt.Sprintf("%s ends, K = %.2f typed", s.Ends, s.K)
+	}
+	return fmt.Sprintf("%s ends (recommended design K of each material)", s.Ends)
+}
+
+func printHeader(w io.Writer, m *model.Model) {
+	sc := m.Scheme
+	sys := units.System(sc.Units)
+	s := sc.Setting
+	fmt.Fprintf(w, "Upright %s: %s\n", Version, sc.Name)
+	fmt.Fprintf(w, "Unbraced length %s (weak axis %s), %s, %s\n",
+		units.Length(s.LengthMM, sys), units.Length(s.WeakMM, sys), endsText(s), strings.ToUpper(string(s.Method)))
+	ls := m.Loads
+	if ls.Governing >= 0 && ls.Governing < len(ls.Combos) {
+		c := ls.Combos[ls.Governing]
+		fmt.Fprintf(w, "Demand %s from the takedown, governed by %s (%s)", units.Force(ls.DemandN, sys), c.Name, c.Clause)
+	} else {
+		kind := "factored"
+		if s.Method == model.ASD {
+			kind = "service"
+		}
+		fmt.Fprintf(w, "Demand %s typed (%s)", units.Force(ls.DemandN, sys), kind)
+	}
+	if sc.SelfWeight {
+		fmt.Fprint(w, ", plus each column's self-weight")
+	}
+	fmt.Fprintf(w, "; ranked by %s\n\n", sc.Metric)
+}
+
+func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System, s model.Setting) {
+	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+	fu := "kip"
+	wu := "lb/ft"
+	if sys == units.SI {
+		fu, wu = "kN", "kg/m"
+	}
+	fmt.Fprintf(tw, "Status\tFamily\tSize\tPlan\tWeight (%s)\tCapacity (%s)\tDemand (%s)\tUtil\tGoverning\tSlenderness\n", wu, fu, fu)
+	for _, r := range rows {
+		status := "OK"
+		if !r.OK {
+			status = "FAILS"
+			if !r.Permitted {
+				status = "NOT PERMITTED"
+			}
+		}
+		capV, _ := units.ForceValue(r.CapacityN, sys)
+		demV, _ := units.ForceValue(r.DemandN, sys)
+		wt := r.Static.MassKgPerM
+		if sys == units.US {
+			wt /= units.KgmPerPlf
+		}
+		util := "—"
+		if !math.IsInf(r.Util, 0) {
+			util = fmt.Sprintf("%.2f", r.Util)
+		}
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%.1f\t%.0f\t%.0f\t%s\t%s\t%.0f\n", status, m.Families[r.Family].Name(), r.Static.Designation,
+			units.PlanSize(r.Static.FootprintMM, sys), wt, capV, demV, util, r.Governing, r.Slenderness)
+	}
+	tw.Flush()
+}
+
+func runCrossovers(args []string, stdout, stderr io.Writer) error {
+	f := newSchemeFlags("crossovers", stderr)
+	asJSON := f.fs.Bool("json", false, "write JSON: an array of crossover objects")
+	from := f.fs.String("from", "", "start of the length range (default 0.5 m)")
+	to := f.fs.String("to", "", "end of the length range (default the larger of 12 m and twice --length)")
+	sc, err := schemeFrom(f, args)
+	if err != nil {
+		return err
+	}
+	r, err := rangeFlags(*from, *to, sc.Setting.LengthMM)
+	if err != nil {
+		return err
+	}
+	m, err := model.New(sc)
+	if err != nil {
+		return err
+	}
+	xs, err := m.Crossovers(context.Background(), sc.Setting, r, nil)
+	if err != nil {
+		return err
+	}
+	if *asJSON {
+		fmt.Fprintln(stderr, model.Caution)
+		if xs == nil {
+			xs = []model.Crossover{}
+		}
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(xs)
+	}
+	sys := units.System(sc.Units)
+	printHeader(stdout, m)
+	fmt.Fprintf(stdout, "Crossovers from %s to %s (each length is the last at which the first answer still holds, to ±%.0f mm)\n\n",
+		units.Length(r.FromMM, sys), units.Length(r.ToMM, sys), model.ToleranceMM)
+	tw := tabwriter.NewWriter(stdout, 2, 4, 2, ' ', 0)
+	fmt.Fprintln(tw, "Length\tKind\tFamily\tWhat changes")
+	for _, x := range xs {
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\n", units.Length(x.LengthMM, sys), x.Kind, x.Family, DescribeCrossover(x))
+	}
+	tw.Flush()
+	if len(xs) == 0 {
+		fmt.Fprintln(stdout, "No crossovers in this range: every answer holds throughout.")
+	}
+	fmt.Fprintf(stdout, "\n%s\n", model.Caution)
+	return nil
+}
+
+// DescribeCrossover says in words what changes at a crossover.
+func DescribeCrossover(x model.Crossover) string {
+	switch x.Kind {
+	case model.KindReach:
+		return x.From + " stops carrying the demand"
+	case model.KindSize:
+		if x.To == "" {
+			return x.From + " is the last working " + x.Family + " size"
+		}
+		return x.From + " → " + x.To
+	case model.KindFamily:
+		if x.To == "" {
+			return "best overall " + x.From + " (" + x.FromDesignation + "): nothing works beyond"
+		}
+		return "best overall " + x.From + " (" + x.FromDesignation + ") → " + x.To + " (" + x.ToDesignation + ")"
+	}
+	return x.From + " → " + x.To
+}
+
+func rangeFlags(from, to string, lengthMM float64) (model.Range, error) {
+	r := model.DefaultRange(lengthMM)
+	if from != "" {
+		v, err := units.ParseLength(from)
+		if err != nil {
+			return r, flagErr("from", from, err)
+		}
+		r.FromMM = v
+	}
+	if to != "" {
+		v, err := units.ParseLength(to)
+		if err != nil {
+			return r, flagErr("to", to, err)
+		}
+		r.ToMM = v
+	}
+	if r.FromMM < model.MinLengthMM || r.ToMM > model.MaxLengthMM || r.ToMM <= r.FromMM {
+		return r, usagef("--from %q --to %q: not accepted; give a range within 0.3 m to 30 m with --from below --to", from, to)
+	}
+	return r, nil
+}
+
+// CurveJSON is the JSON output of the curve command.
+type CurveJSON struct {
+	Designation string           `json:"designation"`
+	Family      string           `json:"family"`
+	Material    string           `json:"material"`
+	Method      string           `json:"method"`
+	Points      []CurvePointJSON `json:"points"`
+}
+
+// CurvePointJSON is one sample of a curve.
+type CurvePointJSON struct {
+	LengthMM   float64 `json:"length_mm"`
+	CapacityKN float64 `json:"capacity_kN"`
+	DemandKN   float64 `json:"demand_kN"`
+	Permitted  bool    `json:"permitted"`
+	Mode       int     `json:"mode"`
+}
+
+func runCurve(args []string, stdout, stderr io.Writer) error {
+	f := newSchemeFlags("curve", stderr)
+	asJSON := f.fs.Bool("json", false, "write JSON")
+	des := f.fs.String("designation", "", "candidate to trace, e.g. W12X65")
+	from := f.fs.String("from", "1m", "start length")
+	to := f.fs.String("to", "10m", "end length")
+	sc, err := schemeFrom(f, args)
+	if err != nil {
+		return err
+	}
+	if *des == "" {
+		return usagef("--designation: required; give a candidate's designation as compare --all lists it, e.g. W12X65")
+	}
+	r, err := rangeFlags(*from, *to, sc.Setting.LengthMM)
+	if err != nil {
+		return err
+	}
+	m, err := model.New(sc)
+	if err != nil {
+		return err
+	}
+	fi, i, ok := m.Find(*des)
+	if !ok {
+		return usagef("--designation %q: no such candidate among the materials switched on; run compare --all to list them", *des)
+	}
+	pts := m.Curve(fi, i, sc.Setting, r)
+	fam := m.Families[fi]
+	if *asJSON {
+		out := CurveJSON{Designation: *des, Family: fam.Name(), Material: fam.Material(), Method: string(sc.Setting.Method)}
+		for _, p := range pts {
+			out.Points = append(out.Points, CurvePointJSON{LengthMM: round(p.LengthMM, 1), CapacityKN: round(p.CapacityN/1e3, 3),
+				DemandKN: round(p.DemandN/1e3, 3), Permitted: p.Permitted, Mode: p.Mode})
+		}
+		fmt.Fprintln(stderr, model.Caution)
+		enc := json.NewEncoder(stdout)
+		enc.SetIndent("", "  ")
+		return enc.Encode(out)
+	}
+	sys := units.System(sc.Units)
+	fmt.Fprintf(stdout, "%s (%s, %s), %s\n", *des, fam.Name(), fam.Material(), strings.ToUpper(string(sc.Setting.Method)))
+	tw := tabwriter.NewWriter(stdout, 2, 4, 2, ' ', 0)
+	_, fu := units.ForceValue(0, sys)
+	fmt.Fprintf(tw, "Length\tCapacity (%s)\tDemand (%s)\n", fu, fu)
+	for _, p := range pts {
+		c, _ := units.ForceValue(p.CapacityN, sys)
+		d, _ := units.ForceValue(p.DemandN, sys)
+		cs := fmt.Sprintf("%.1f", c)
+		if !p.Permitted {
+			cs = "not permitted"
+		}
+		fmt.Fprintf(tw, "%s\t%s\t%.1f\n", units.Length(p.LengthMM, sys), cs, d)
+	}
+	tw.Flush()
+	fmt.Fprintf(stdout, "\n%s\n", model.Caution)
+	return nil
+}

@@ -1,0 +1,449 @@
+// Package cli implements Upright's headless commands: compare, crossovers,
+// curve and report. They drive the same Fyne-free model as the window.
+package cli
+
+import (
+	"flag"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+	"strings"
+
+	"upright/ui/model"
+	"upright/ui/units"
+)
+
+// UsageError is a bad flag value: it names the flag, the value and what is accepted.
+type UsageError struct{ Msg string }
+
+func (e *UsageError) Error() string { return e.Msg }
+
+func usagef(format string, a ...any) error { return &UsageError{fmt.Sprintf(format, a...)} }
+
+// schemeFlags holds the raw text of every scheme flag, parsed after flag.Parse.
+type schemeFlags struct {
+	fs *flag.FlagSet
+
+	scheme, length, ends, k, weak, load, method, materials, units, rank string
+	selfWeight                                                          bool
+
+	tributary, floors, dead, live, roofDead, roofLive, snow, kll, occupancy string
+	noReduction                                                             bool
+
+	fy, steelFamilies string
+
+	fc, barGrade, rhoMax, m1m2, betaDns, ei, transverse string
+
+	species, grade, timberProducts, fire, fireSides, duration string
+	wet, incised, hot                                         bool
+}
+
+func newSchemeFlags(name string, out io.Writer) *schemeFlags {
+	f := &schemeFlags{fs: flag.NewFlagSet(name, flag.ContinueOnError)}
+	fs := f.fs
+	fs.SetOutput(out)
+	fs.StringVar(&f.scheme, "scheme", "", "scheme file to start from (flags given override it)")
+	fs.StringVar(&f.length, "length", "", `unbraced length, e.g. 4.2m, 4200mm, 14ft, 14'-6", 168in`)
+	fs.StringVar(&f.ends, "ends", "", "end conditions: pinned-pinned, fixed-fixed, fixed-pinned, fixed-guided, pinned-guided, fixed-free")
+	fs.StringVar(&f.k, "k", "", "effective-length factor typed in (overrides --ends' recommended value)")
+	fs.StringVar(&f.weak, "weak-length", "", "weak-axis unbraced length (a brace); defaults to --length")
+	fs.StringVar(&f.load, "load", "", "axial load, e.g. 1800kN, 400kip (factored for LRFD, service for ASD)")
+	fs.StringVar(&f.method, "method", "", "lrfd or asd (default lrfd)")
+	fs.StringVar(&f.materials, "materials", "", "comma list of "+strings.Join(model.Materials(), ", ")+" (default all)")
+	fs.StringVar(&f.units, "units", "", "units shown: us or si (default us)")
+	fs.StringVar(&f.rank, "rank", "", "ranking metric: weight, footprint or carbon (default weight)")
+	fs.BoolVar(&f.selfWeight, "self-weight", true, "add the column's own weight to the demand")
+
+	fs.StringVar(&f.tributary, "tributary", "", "tributary area per floor for the takedown, e.g. 60m2, 650ft2")
+	fs.StringVar(&f.floors, "floors", "", "floors carried below the roof (takedown)")
+	fs.StringVar(&f.dead, "dead", "", "floor dead load incl. slab, e.g. 4.0kPa, 85psf")
+	fs.StringVar(&f.live, "live", "", "floor live load (unreduced), e.g. 3.0kPa, 50psf")
+	fs.StringVar(&f.roofDead, "roof-dead", "", "roof dead load")
+	fs.StringVar(&f.roofLive, "roof-live", "", "roof live load Lr")
+	fs.StringVar(&f.snow, "snow", "", "roof snow load S")
+	fs.StringVar(&f.kll, "kll", "", "live load element factor KLL (ASCE 7-22 Table 4.7-1; default 4, interior column)")
+	fs.StringVar(&f.occupancy, "occupancy", "", "general, assembly, storage or garage (live-load reduction limits)")
+	fs.BoolVar(&f.noReduction, "no-reduction", false, "do not reduce floor live load")
+
+	fs.StringVar(&f.fy, "fy", "", "steel yield stress for every steel family, e.g. 50ksi, 345MPa (default: each family's grade)")
+	fs.StringVar(&f.steelFamilies, "steel-families", "", "comma list of W, HP, HSS square, HSS rectangular, HSS round, Pipe")
+
+	fs.StringVar(&f.fc, "fc", "", "concrete f'c, e.g. 5000psi, 35MPa")
+	fs.StringVar(&f.barGrade, "bar-grade", "", "reinforcing bar grade: 60 or 80")
+	fs.StringVar(&f.rhoMax, "rho-max", "", "largest reinforcement ratio, e.g. 0.04 or 4%")
+	fs.StringVar(&f.m1m2, "m1m2", "", "end-moment ratio M1/M2, -1 (single curvature) to 1")
+	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1 (default from the takedown, else 0.6)")
+	fs.StringVar(&f.ei, "ei", "", "(EI)eff expression of ACI 318-19 6.6.4.4.4: a or b")
+	fs.StringVar(&f.transverse, "transverse", "", "concrete columns: ties, spiral or all")
+
+	fs.StringVar(&f.species, "species", "", "sawn timber species: DF-L, SP, HF, SPF")
+	fs.StringVar(&f.grade, "grade", "", "sawn timber grade: SS, No.1, No.2")
+	fs.StringVar(&f.timberProducts, "timber", "", "timber products: sawn, glulam or sawn,glulam")
+	fs.BoolVar(&f.wet, "wet", false, "timber in wet service")
+	fs.BoolVar(&f.incised, "incised", false, "incised sawn lumber")
+	fs.BoolVar(&f.hot, "hot", false, "timber at sustained temperature 100 to 125 °F")
+	fs.StringVar(&f.fire, "fire", "", "timber fire exposure: none, 1h, 1.5h, 2h")
+	fs.StringVar(&f.fireSides, "fire-sides", "", "timber sides exposed to fire: 3 or 4")
+	fs.StringVar(&f.duration, "duration", "", "ASD load duration: permanent, ten-years, two-months, seven-days, ten-minutes")
+	return f
+}
+
+func (f *schemeFlags) set(name string) bool {
+	found := false
+	f.fs.Visit(func(fl *flag.Flag) {
+		if fl.Name == name {
+			found = true
+		}
+	})
+	return found
+}
+
+func parseNumber(flagName, s, accepted string, lo, hi float64) (float64, error) {
+	v, err := strconv.ParseFloat(strings.TrimSpace(s), 64)
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) || v < lo || v > hi {
+		return 0, usagef("--%s %q: not accepted; give %s", flagName, s, accepted)
+	}
+	return v, nil
+}
+
+func flagErr(flagName, value string, err error) error {
+	if pe, ok := err.(*units.ParseError); ok {
+		return usagef("--%s %q: not accepted; give %s", flagName, value, pe.Accepted)
+	}
+	return usagef("--%s %q: %v", flagName, value, err)
+}
+
+// build turns the parsed flags into a scheme, starting from base.
+func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
+	sc := base
+	s := &sc.Setting
+	lengthSet := false
+	if f.length != "" {
+		v, err := units.ParseLength(f.length)
+		if err != nil {
+			return sc, flagErr("length", f.length, err)
+		}
+		if v < model.MinLengthMM || v > model.MaxLengthMM {
+			return sc, usagef("--length %q: not accepted; give a length from 0.3 m (1 ft) to 30 m (98 ft)", f.length)
+		}
+		s.LengthMM = v
+		s.WeakMM = v
+		lengthSet = true
+	}
+	if f.weak != "" {
+		v, err := units.ParseLength(f.weak)
+		if err != nil {
+			return sc, flagErr("weak-length", f.weak, err)
+		}
+		if v <= 0 || v > s.LengthMM*1.000001 {
+			return sc, usagef("--weak-length %q: not accepted; give a length greater than zero and no longer than --length (%s)", f.weak, units.Length(s.LengthMM, units.SI))
+		}
+		s.WeakMM = v
+	} else if lengthSet {
+		s.WeakMM = s.LengthMM
+	}
+	if f.ends != "" {
+		e := model.EndCondition(strings.ToLower(f.ends))
+		if !e.Valid() {
+			return sc, usagef("--ends %q: not accepted; give one of pinned-pinned, fixed-fixed, fixed-pinned, fixed-guided, pinned-guided, fixed-free", f.ends)
+		}
+		s.Ends = e
+		s.K = 0
+	}
+	if f.k != "" {
+		v, err := parseNumber("k", f.k, "an effective-length factor from 0.5 to 10", 0.5, 10)
+		if err != nil {
+			return sc, err
+		}
+		s.K = v
+	}
+	if f.method != "" {
+		m := model.Method(strings.ToLower(f.method))
+		if m != model.LRFD && m != model.ASD {
+			return sc, usagef("--method %q: not accepted; give lrfd or asd", f.method)
+		}
+		s.Method = m
+	}
+	if f.materials != "" {
+		sc.Materials = nil
+		for _, m := range strings.Split(f.materials, ",") {
+			m = strings.ToLower(strings.TrimSpace(m))
+			ok := false
+			for _, known := range model.Materials() {
+				ok = ok || known == m
+			}
+			if !ok {
+				return sc, usagef("--materials %q: %q is not accepted; give a comma list of %s", f.materials, m, strings.Join(model.Materials(), ", "))
+			}
+			sc.Materials = append(sc.Materials, m)
+		}
+	}
+	if f.units != "" {
+		u := model.Units(strings.ToLower(f.units))
+		if u != model.US && u != model.SI {
+			return sc, usagef("--units %q: not accepted; give us or si", f.units)
+		}
+		sc.Units = u
+	}
+	if f.rank != "" {
+		r := model.Metric(strings.ToLower(f.rank))
+		if r != model.ByWeight && r != model.ByFootprint && r != model.ByCarbon {
+			return sc, usagef("--rank %q: not accepted; give weight, footprint or carbon", f.rank)
+		}
+		sc.Metric = r
+	}
+	if f.set("self-weight") {
+		sc.SelfWeight = f.selfWeight
+	}
+	if err := f.buildLoad(&sc); err != nil {
+		return sc, err
+	}
+	if err := f.buildMaterials(&sc); err != nil {
+		return sc, err
+	}
+	if err := sc.Validate(); err != nil {
+		if fe, ok := err.(*model.FieldError); ok {
+			return sc, usagef("%s %q: not accepted; give %s", fe.Field, fe.Value, fe.Accepted)
+		}
+		return sc, err
+	}
+	return sc, nil
+}
+
+func (f *schemeFlags) buildLoad(sc *model.Scheme) error {
+	takedown := f.tributary != "" || f.floors != "" || f.dead != "" || f.live != "" ||
+		f.roofDead != "" || f.roofLive != "" || f.snow != ""
+	if f.load != "" && takedown {
+		return usagef("--load %q: give either --load or the takedown flags (--tributary, --floors, --dead, ...), not both", f.load)
+	}
+	if f.load != "" {
+		v, err := units.ParseForce(f.load)
+		if err != nil {
+			return flagErr("load", f.load, err)
+		}
+		if v <= 0 {
+			return usagef("--load %q: not accepted; give an axial load greater than zero", f.load)
+		}
+		sc.Load = model.Load{Mode: model.LoadDirect, DirectN: v}
+		return nil
+	}
+	if !takedown {
+		return nil
+	}
+	l := sc.Load
+	if l.Mode != model.LoadTakedown {
+		l = model.Load{Mode: model.LoadTakedown, LiveReduction: true, KLL: 4, Occupancy: "general"}
+	}
+	l.Mode = model.LoadTakedown
+	pressure := func(name, s string, dst *float64) error {
+		if s == "" {
+			return nil
+		}
+		v, err := units.ParsePressure(s)
+		if err != nil {
+			return flagErr(name, s, err)
+		}
+		*dst = v
+		return nil
+	}
+	if f.tributary != "" {
+		v, err := units.ParseArea(f.tributary)
+		if err != nil {
+			return flagErr("tributary", f.tributary, err)
+		}
+		l.TributaryM2 = v
+	}
+	if f.floors != "" {
+		v, err := parseNumber("floors", f.floors, "a whole number of floors from 0 to 100", 0, 100)
+		if err != nil || v != math.Trunc(v) {
+			return usagef("--floors %q: not accepted; give a whole number of floors from 0 to 100", f.floors)
+		}
+		l.Floors = int(v)
+	}
+	for _, p := range []struct {
+		name, s string
+		dst     *float64
+	}{{"dead", f.dead, &l.FloorDeadKPa}, {"live", f.live, &l.FloorLiveKPa}, {"roof-dead", f.roofDead, &l.RoofDeadKPa},
+		{"roof-live", f.roofLive, &l.RoofLiveKPa}, {"snow", f.snow, &l.SnowKPa}} {
+		if err := pressure(p.name, p.s, p.dst); err != nil {
+			return err
+		}
+	}
+	if f.kll != "" {
+		v, err := parseNumber("kll", f.kll, "a live load element factor KLL from 1 to 4 (ASCE 7-22 Table 4.7-1)", 1, 4)
+		if err != nil {
+			return err
+		}
+		l.KLL = v
+	}
+	if f.occupancy != "" {
+		l.Occupancy = strings.ToLower(f.occupancy)
+	}
+	if f.set("no-reduction") {
+		l.LiveReduction = !f.noReduction
+	}
+	sc.Load = l
+	return nil
+}
+
+func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
+	if f.fy != "" {
+		v, err := units.ParseStress(f.fy)
+		if err != nil {
+			return flagErr("fy", f.fy, err)
+		}
+		sc.Steel.FyMPa = v
+	}
+	if f.steelFamilies != "" {
+		sc.Steel.Families = nil
+		for _, s := range strings.Split(f.steelFamilies, ",") {
+			sc.Steel.Families = append(sc.Steel.Families, strings.TrimSpace(s))
+		}
+	}
+	c := &sc.Concrete
+	if f.fc != "" {
+		v, err := units.ParseStress(f.fc)
+		if err != nil {
+			// A bare number: psi when above 1000, else MPa.
+			if n, e2 := strconv.ParseFloat(f.fc, 64); e2 == nil && n > 0 {
+				if n >= 1000 {
+					v = n * units.MPaPerKsi / 1000
+				} else {
+					v = n
+				}
+			} else {
+				return flagErr("fc", f.fc, err)
+			}
+		}
+		c.FcMPa = v
+	}
+	if f.barGrade != "" {
+		switch f.barGrade {
+		case "60", "80":
+			c.BarGrade, _ = strconv.Atoi(f.barGrade)
+		default:
+			return usagef("--bar-grade %q: not accepted; give 60 or 80", f.barGrade)
+		}
+	}
+	if f.rhoMax != "" {
+		s := strings.TrimSpace(f.rhoMax)
+		scale := 1.0
+		if strings.HasSuffix(s, "%") {
+			s, scale = strings.TrimSuffix(s, "%"), 0.01
+		}
+		v, err := parseNumber("rho-max", s, "a reinforcement ratio from 0.01 to 0.08 (1% to 8%)", 0, 100)
+		if err != nil {
+			return usagef("--rho-max %q: not accepted; give a reinforcement ratio from 0.01 to 0.08 (1%% to 8%%)", f.rhoMax)
+		}
+		v *= scale
+		if v < 0.01 || v > 0.08 {
+			return usagef("--rho-max %q: not accepted; give a reinforcement ratio from 0.01 to 0.08 (1%% to 8%%, ACI 318-19 10.6.1.1)", f.rhoMax)
+		}
+		c.RhoMax = v
+	}
+	if f.m1m2 != "" {
+		v, err := parseNumber("m1m2", f.m1m2, "an end-moment ratio M1/M2 from -1 (single curvature) to 1", -1, 1)
+		if err != nil {
+			return err
+		}
+		c.M1M2 = v
+	}
+	if f.betaDns != "" {
+		v, err := parseNumber("beta-dns", f.betaDns, "a sustained-load ratio from 0 to 1", 0, 1)
+		if err != nil {
+			return err
+		}
+		c.BetaDns = v
+		c.BetaFromLoads = false
+	}
+	if f.ei != "" {
+		e := strings.ToLower(f.ei)
+		if e != "a" && e != "b" {
+			return usagef("--ei %q: not accepted; give a or b (ACI 318-19 6.6.4.4.4)", f.ei)
+		}
+		c.EIMethod = e
+	}
+	if f.transverse != "" {
+		t := strings.ToLower(f.transverse)
+		if t != "ties" && t != "spiral" && t != "all" {
+			return usagef("--transverse %q: not accepted; give ties, spiral or all", f.transverse)
+		}
+		c.Transverse = t
+	}
+	t := &sc.Timber
+	if f.species != "" {
+		sp := strings.ToUpper(f.species)
+		switch sp {
+		case "DF-L", "DFL", "SP", "HF", "SPF":
+			if sp == "DFL" {
+				sp = "DF-L"
+			}
+			t.Species = sp
+		default:
+			return usagef("--species %q: not accepted; give DF-L, SP, HF or SPF", f.species)
+		}
+	}
+	if f.grade != "" {
+		g := strings.ToLower(strings.ReplaceAll(f.grade, " ", ""))
+		switch g {
+		case "ss", "selectstructural":
+			t.Grade = "SS"
+		case "no.1", "no1", "1":
+			t.Grade = "No.1"
+		case "no.2", "no2", "2":
+			t.Grade = "No.2"
+		default:
+			return usagef("--grade %q: not accepted; give SS, No.1 or No.2", f.grade)
+		}
+	}
+	if f.timberProducts != "" {
+		t.Sawn, t.Glulam = false, false
+		for _, p := range strings.Split(f.timberProducts, ",") {
+			switch strings.ToLower(strings.TrimSpace(p)) {
+			case "sawn":
+				t.Sawn = true
+			case "glulam":
+				t.Glulam = true
+			default:
+				return usagef("--timber %q: not accepted; give sawn, glulam or sawn,glulam", f.timberProducts)
+			}
+		}
+	}
+	if f.set("wet") {
+		t.Wet = f.wet
+	}
+	if f.set("incised") {
+		t.Incised = f.incised
+	}
+	if f.set("hot") {
+		t.Hot = f.hot
+	}
+	if f.fire != "" {
+		fr := strings.ToLower(f.fire)
+		switch fr {
+		case "none", "0", "0h":
+			t.Fire = "none"
+		case "1h", "1", "60min":
+			t.Fire = "1h"
+		case "1.5h", "1.5", "90min":
+			t.Fire = "1.5h"
+		case "2h", "2", "120min":
+			t.Fire = "2h"
+		default:
+			return usagef("--fire %q: not accepted; give none, 1h, 1.5h or 2h", f.fire)
+		}
+	}
+	if f.fireSides != "" {
+		switch f.fireSides {
+		case "3", "4":
+			t.FireSides, _ = strconv.Atoi(f.fireSides)
+		default:
+			return usagef("--fire-sides %q: not accepted; give 3 or 4", f.fireSides)
+		}
+	}
+	if f.duration != "" {
+		t.Duration = strings.ToLower(f.duration)
+	}
+	return nil
+}

@@ -66,6 +66,14 @@ type LoadSummary struct {
 	DirectDeadFactor float64 // factor on self-weight added to a typed load (1.2 LRFD, 1.0 ASD)
 
 	Steps []Step // readable trace of the takedown
+
+	// Added with the takedown (all zero or nil for a typed load).
+	Method         Method    // the method Combos, Governing and DemandN belong to
+	Duration       []float64 // NDS 2018 λ (LRFD, Table N3) or CD (ASD, Table 2.3.2) of each entry of Combos
+	OtherCombos    []Combo   // the other method's combinations, evaluated for α, λ and CD
+	OtherGoverning int       // index into OtherCombos of the governing one; -1 when there are none
+	LRFDN          float64   // governing LRFD combination without self-weight, N
+	ASDN           float64   // governing ASD combination without self-weight, N
 }
 
 // Demand returns the governing axial demand, N, with selfN (service weight of

@@ -23,7 +23,7 @@ type Load struct {
 	RoofLiveKPa   float64 // roof live load Lr, kPa
 	SnowKPa       float64 // roof snow load S, kPa
 	LiveReduction bool    // apply ASCE 7-22 4.7 live-load reduction
-	KLL           float64 // live load element factor of ASCE 7-22 Table 4.7-1 (4 interior column, 2 exterior without cantilever slab ...)
+	KLL           float64 // live load element factor of ASCE 7-22 Table 4.7-1 (4 for interior and exterior columns without cantilever slabs)
 	Occupancy     string  // "general", "assembly" (no reduction, 4.7.5), "storage" (heavy live load > 4.79 kPa, 4.7.3), "garage" (4.7.4)
 }
 

@@ -31,10 +31,10 @@ func newFake(name string, p0, l0, mass []float64) *fakeFamily {
 	return f
 }
 
-func (f *fakeFamily) Material() string       { return "fake" }
-func (f *fakeFamily) Name() string           { return f.name }
-func (f *fakeFamily) Len() int               { return len(f.p0) }
-func (f *fakeFamily) Static(i int) *Static   { return &f.stats[i] }
+func (f *fakeFamily) Material() string     { return "fake" }
+func (f *fakeFamily) Name() string         { return f.name }
+func (f *fakeFamily) Len() int             { return len(f.p0) }
+func (f *fakeFamily) Static(i int) *Static { return &f.stats[i] }
 func (f *fakeFamily) Detail(i int, s Setting) Detail {
 	return Detail{Quick: f.Quick(i, s), Calc: map[string]any{"P0": f.p0[i]}}
 }

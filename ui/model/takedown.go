@@ -327,8 +327,15 @@ func takedown(l Load, m Method) LoadSummary {
 	// ACI 318-19 6.6.4.4.4: βdns = factored sustained (dead) / total factored axial.
 	ls.BetaDns = lc[lg].D * ls.DeadN / ls.LRFDN
 	ls.StrengthPerService = ls.LRFDN / ls.ASDN
-	ls.Lambda = lf[lg]
-	ls.CD = af[ag]
+	// NDS 2018 2.3.2 and N3.3: wood is checked for each combination with its
+	// own duration factor, so the combination with the largest load/factor
+	// governs timber even when its load is not the largest. Its factor is
+	// applied to the governing demand (conservative).
+	lw, aw := woodGoverning(lc, lf), woodGoverning(ac, af)
+	ls.Lambda = lf[lw]
+	ls.CD = af[aw]
+	lg0, ag0 := lg, ag
+	lg, ag = lw, aw
 	steps = append(steps,
 		Step{lc[lg].Clause, "Pu", "governing LRFD: " + lc[lg].Name, ls.LRFDN, "N"},
 		Step{ac[ag].Clause, "Pa", "governing ASD: " + ac[ag].Name, ls.ASDN, "N"},
@@ -337,6 +344,7 @@ func takedown(l Load, m Method) LoadSummary {
 		Step{"NDS 2018 Table N3", "λ", "time effect factor of " + lc[lg].Name, ls.Lambda, ""},
 		Step{"NDS 2018 Table 2.3.2", "CD", "load duration factor of " + ac[ag].Name, ls.CD, ""},
 	)
+	lg, ag = lg0, ag0
 	if m == LRFD {
 		ls.Combos, ls.Duration, ls.Governing = lc, lf, lg
 		ls.OtherCombos, ls.OtherGoverning = ac, ag
@@ -348,4 +356,16 @@ func takedown(l Load, m Method) LoadSummary {
 	ls.DirectDeadFactor = ls.Combos[ls.Governing].D
 	ls.Steps = steps
 	return ls
+}
+
+// woodGoverning returns the index of the combination with the largest load
+// divided by its duration factor (λ or CD).
+func woodGoverning(cs []Combo, f []float64) int {
+	best, at := -1.0, 0
+	for i := range cs {
+		if f[i] > 0 && cs[i].ValueN/f[i] > best {
+			best, at = cs[i].ValueN/f[i], i
+		}
+	}
+	return at
 }

@@ -92,9 +92,9 @@ func TestTakedownCombinations(t *testing.T) {
 			load:    usTakedown(4, 400, 100, 50, 20, 20, 0),
 			lrfdGov: "LRFD 2: 1.2D + 1.6L + 0.5Lr", lrfdKip: 261.6,
 			asdGov: "ASD 2: D + L", asdKip: 203,
-			alpha: 261.6 / 203, beta: 201.6 / 261.6, lambda: 0.8, cd: 1.0,
+			alpha: 261.6 / 203, beta: 201.6 / 261.6, lambda: 0.6, cd: 1.0,
 			src: "hand calc: D = (4×100+20)×400 = 168 k, Lo = 80 k × (0.25+15/√6400 = 0.4375) = 35 k, Lr = 8 k; " +
-				"ASCE 7-22 2.3.1-2 1.2×168+1.6×35+0.5×8 = 261.6 k, 2.4.1-2 168+35 = 203 k; NDS 2018 Table N3 λ 0.8, Table 2.3.2 CD 1.0",
+				"ASCE 7-22 2.3.1-2 1.2×168+1.6×35+0.5×8 = 261.6 k, 2.4.1-2 168+35 = 203 k; wood: 1.4D/0.6 = 392 k > 261.6/0.8 = 327 k so NDS 2018 Table N3 λ 0.6 governs timber; Table 2.3.2 CD 1.0",
 		},
 		{
 			name: "heavy dead, light live: 1.4D governs",
@@ -105,9 +105,9 @@ func TestTakedownCombinations(t *testing.T) {
 			}(),
 			lrfdGov: "LRFD 1: 1.4D", lrfdKip: 352.8,
 			asdGov: "ASD 2: D + L", asdKip: 268,
-			alpha: 352.8 / 268, beta: 1, lambda: 0.6, cd: 1.0,
+			alpha: 352.8 / 268, beta: 1, lambda: 0.6, cd: 0.9,
 			src: "hand calc: D = 630×400 = 252 k, L = 16 k; ASCE 7-22 2.3.1-1 1.4×252 = 352.8 k > 1.2×252+1.6×16 = 328 k; " +
-				"βdns = 1 (ACI 318-19 6.6.4.4.4, all dead); NDS 2018 Table N3 λ 0.6",
+				"βdns = 1 (ACI 318-19 6.6.4.4.4, all dead); NDS 2018 Table N3 λ 0.6; wood ASD: D/0.9 = 280 k > (D+L)/1.0 = 268 k so CD 0.9 (NDS 2018 2.3.2)",
 		},
 		{
 			name: "same dead, more live: 1.2D + 1.6L governs",
@@ -118,8 +118,9 @@ func TestTakedownCombinations(t *testing.T) {
 			}(),
 			lrfdGov: "LRFD 2: 1.2D + 1.6L + 0.5Lr", lrfdKip: 404.8,
 			asdGov: "ASD 2: D + L", asdKip: 316,
-			alpha: 404.8 / 316, beta: 302.4 / 404.8, lambda: 0.8, cd: 1.0,
-			src: "hand calc: D = 252 k, L = 64 k > D/8 so ASCE 7-22 2.3.1-2 1.2×252+1.6×64 = 404.8 k > 1.4D = 352.8 k",
+			alpha: 404.8 / 316, beta: 302.4 / 404.8, lambda: 0.6, cd: 1.0,
+			src: "hand calc: D = 252 k, L = 64 k > D/8 so ASCE 7-22 2.3.1-2 1.2×252+1.6×64 = 404.8 k > 1.4D = 352.8 k; " +
+				"wood: 1.4D/0.6 = 588 k > 404.8/0.8 = 506 k so λ 0.6 governs timber (NDS 2018 N3.3)",
 		},
 		{
 			name:    "heavy snow: snow combination governs",
@@ -135,9 +136,9 @@ func TestTakedownCombinations(t *testing.T) {
 			load:    usTakedown(1, 400, 80, 40, 20, 20, 10),
 			lrfdGov: "LRFD 3: 1.2D + 1.6Lr + L", lrfdKip: 70.8,
 			asdGov: "ASD 4: D + 0.75L + 0.75Lr", asdKip: 53.5,
-			alpha: 70.8 / 53.5, beta: 48 / 70.8, lambda: 0.8, cd: 1.25,
+			alpha: 70.8 / 53.5, beta: 48 / 70.8, lambda: 0.6, cd: 1.0,
 			src: "hand calc: S = 4 k; ASCE 7-22 2.3.1-3 48+1.6×8+10 = 70.8 k; 2.4.1-4 40+7.5+6 = 53.5 k; " +
-				"NDS 2018 Table 2.3.2 CD 1.25 (seven-day construction/roof live)",
+				"wood: 1.4D/0.6 = 93.3 k > 70.8/0.8 = 88.5 k (λ 0.6); (D+L)/1.0 = 50 k > 53.5/1.25 = 42.8 k (CD 1.0, NDS 2018 2.3.2)",
 		},
 		{
 			name: "storage: λ 0.7",

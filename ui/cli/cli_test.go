@@ -1,0 +1,151 @@
+package cli
+
+import (
+	"bytes"
+	"encoding/json"
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"upright/ui/model"
+	"upright/ui/units"
+)
+
+func run(args ...string) (code int, stdout, stderr string) {
+	var o, e bytes.Buffer
+	code = Run(args, &o, &e)
+	return code, o.String(), e.String()
+}
+
+func TestVersion(t *testing.T) {
+	code, out, _ := run("--version")
+	assert.Equal(t, 0, code)
+	assert.Equal(t, "upright "+Version+"\n", out)
+}
+
+func TestBadInputNamesFlagValueAndAccepted(t *testing.T) {
+	cases := []struct {
+		args []string
+		want []string // substrings of the message
+	}{
+		{[]string{"compare", "--length", "tall"}, []string{"--length", `"tall"`, "4.2m"}},
+		{[]string{"compare", "--length", "4.2"}, []string{"--length", "unit"}},
+		{[]string{"compare", "--length", "0m"}, []string{"--length", "0.3 m"}},
+		{[]string{"compare", "--length", "-3m"}, []string{"--length"}},
+		{[]string{"compare", "--length", "NaNm"}, []string{"--length"}},
+		{[]string{"compare", "--length", "500m"}, []string{"--length", "30 m"}},
+		{[]string{"compare", "--ends", "welded"}, []string{"--ends", `"welded"`, "pinned-pinned"}},
+		{[]string{"compare", "--k", "abc"}, []string{"--k", "0.5 to 10"}},
+		{[]string{"compare", "--k", "0"}, []string{"--k"}},
+		{[]string{"compare", "--load", "heavy"}, []string{"--load", "kN"}},
+		{[]string{"compare", "--load", "-5kN"}, []string{"--load", "greater than zero"}},
+		{[]string{"compare", "--load", "0kip"}, []string{"--load"}},
+		{[]string{"compare", "--method", "wsd"}, []string{"--method", "lrfd or asd"}},
+		{[]string{"compare", "--materials", "steel,adobe"}, []string{"--materials", "adobe"}},
+		{[]string{"compare", "--units", "cubits"}, []string{"--units"}},
+		{[]string{"compare", "--rank", "beauty"}, []string{"--rank"}},
+		{[]string{"compare", "--length", "4m", "--weak-length", "5m"}, []string{"--weak-length"}},
+		{[]string{"compare", "--tributary", "lots"}, []string{"--tributary", "m2"}},
+		{[]string{"compare", "--tributary", "60m2", "--floors", "2.5", "--dead", "4kPa", "--live", "3kPa"}, []string{"--floors"}},
+		{[]string{"compare", "--tributary", "60m2", "--dead", "heavy"}, []string{"--dead", "kPa"}},
+		{[]string{"compare", "--load", "1000kN", "--tributary", "60m2"}, []string{"--load", "not both"}},
+		{[]string{"compare", "--fc", "strong"}, []string{"--fc"}},
+		{[]string{"compare", "--rho-max", "12%"}, []string{"--rho-max", "0.08"}},
+		{[]string{"compare", "--m1m2", "3"}, []string{"--m1m2"}},
+		{[]string{"compare", "--beta-dns", "-1"}, []string{"--beta-dns"}},
+		{[]string{"compare", "--species", "oak"}, []string{"--species", "DF-L"}},
+		{[]string{"compare", "--grade", "premium"}, []string{"--grade"}},
+		{[]string{"compare", "--fire", "3h"}, []string{"--fire", "2h"}},
+		{[]string{"compare", "--nonsense"}, []string{"nonsense"}},
+		{[]string{"compare", "stray"}, []string{"stray"}},
+		{[]string{"frobnicate"}, []string{"unknown command"}},
+		{[]string{"curve", "--length", "4m"}, []string{"--designation"}},
+		{[]string{"crossovers", "--from", "5m", "--to", "2m"}, []string{"--from"}},
+	}
+	for _, c := range cases {
+		code, out, errOut := run(c.args...)
+		assert.Equal(t, 2, code, "%v: exit status", c.args)
+		assert.Empty(t, out, "%v: nothing on stdout", c.args)
+		for _, w := range c.want {
+			assert.Contains(t, errOut, w, "%v", c.args)
+		}
+		assert.NotContains(t, errOut, "panic")
+	}
+}
+
+func TestSchemeFromFlags(t *testing.T) {
+	f := newSchemeFlags("compare", &bytes.Buffer{})
+	sc, err := schemeFrom(f, []string{"--length", `14'-6"`, "--ends", "fixed-pinned", "--weak-length", "7ft",
+		"--load", "400kip", "--method", "asd", "--units", "si", "--rank", "carbon", "--self-weight=false",
+		"--fc", "6000psi", "--rho-max", "3%", "--m1m2", "0.5", "--beta-dns", "0.7", "--ei", "b", "--transverse", "spiral",
+		"--species", "SP", "--grade", "No.2", "--wet", "--fire", "1h", "--fire-sides", "3", "--fy", "50ksi"})
+	require.NoError(t, err)
+	s := sc.Setting
+	assert.InDelta(t, 14*304.8+6*25.4, s.LengthMM, 1e-9)
+	assert.InDelta(t, 7*304.8, s.WeakMM, 1e-9)
+	assert.Equal(t, model.FixedPinned, s.Ends)
+	assert.Equal(t, model.ASD, s.Method)
+	assert.InDelta(t, 400*units.NPerKip, sc.Load.DirectN, 1e-6)
+	assert.Equal(t, model.SI, sc.Units)
+	assert.Equal(t, model.ByCarbon, sc.Metric)
+	assert.False(t, sc.SelfWeight)
+	assert.InDelta(t, 6*units.MPaPerKsi, sc.Concrete.FcMPa, 1e-9)
+	assert.InDelta(t, 0.03, sc.Concrete.RhoMax, 1e-12)
+	assert.Equal(t, 0.5, sc.Concrete.M1M2)
+	assert.Equal(t, 0.7, sc.Concrete.BetaDns)
+	assert.False(t, sc.Concrete.BetaFromLoads)
+	assert.Equal(t, "b", sc.Concrete.EIMethod)
+	assert.Equal(t, "spiral", sc.Concrete.Transverse)
+	assert.Equal(t, "SP", sc.Timber.Species)
+	assert.Equal(t, "No.2", sc.Timber.Grade)
+	assert.True(t, sc.Timber.Wet)
+	assert.Equal(t, "1h", sc.Timber.Fire)
+	assert.Equal(t, 3, sc.Timber.FireSides)
+	assert.InDelta(t, 50*units.MPaPerKsi, sc.Steel.FyMPa, 1e-9)
+}
+
+func TestTakedownFlags(t *testing.T) {
+	f := newSchemeFlags("compare", &bytes.Buffer{})
+	sc, err := schemeFrom(f, []string{"--length", "4m", "--tributary", "60m2", "--floors", "3", "--dead", "4.0kPa",
+		"--live", "3.0kPa", "--roof-dead", "80psf", "--roof-live", "20psf", "--snow", "1.2kPa"})
+	require.NoError(t, err)
+	l := sc.Load
+	assert.Equal(t, model.LoadTakedown, l.Mode)
+	assert.Equal(t, 60.0, l.TributaryM2)
+	assert.Equal(t, 3, l.Floors)
+	assert.Equal(t, 4.0, l.FloorDeadKPa)
+	assert.InDelta(t, 80*units.KPaPerPsf, l.RoofDeadKPa, 1e-12)
+	assert.True(t, l.LiveReduction)
+}
+
+func TestCompareJSONShape(t *testing.T) {
+	if len(model.Materials()) == 0 {
+		t.Skip("no material registered")
+	}
+	code, out, errOut := run("compare", "--length", "4.5m", "--load", "2500kN", "--json")
+	require.Equal(t, 0, code, errOut)
+	assert.Contains(t, errOut, "licensed")
+	var arr []map[string]any
+	require.NoError(t, json.Unmarshal([]byte(out), &arr))
+	require.NotEmpty(t, arr)
+	for _, c := range arr {
+		for _, k := range []string{"material", "family", "designation", "ok", "capacity_kN", "demand_kN", "utilization",
+			"mass_kg_per_m", "footprint_mm", "governing", "slenderness", "warnings", "calc"} {
+			assert.Contains(t, c, k)
+		}
+		fp, ok := c["footprint_mm"].([]any)
+		require.True(t, ok)
+		assert.Len(t, fp, 2)
+	}
+	assert.NotContains(t, out, "NaN")
+	assert.NotContains(t, out, "Inf")
+}
+
+func TestComparePlainHasCaution(t *testing.T) {
+	code, out, errOut := run("compare", "--length", "4.5m", "--load", "2500kN")
+	require.Equal(t, 0, code, errOut)
+	assert.Contains(t, out, "licensed structural engineer")
+	assert.True(t, strings.Contains(out, "kip"))
+}

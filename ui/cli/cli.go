@@ -11,6 +11,8 @@ import (
 	"strings"
 	"text/tabwriter"
 
+	"upright/plots"
+	"upright/ui/chart"
 	"upright/ui/model"
 	"upright/ui/units"
 )
@@ -310,14 +312,16 @@ func runCompare(args []string, stdout, stderr io.Writer) error {
 	return nil
 }
 
-// WriteChartFunc renders the chart for compare --chart; set by the plots glue.
-var WriteChartFunc func(m *model.Model, res *model.Result, path string) error
-
 func writeChart(m *model.Model, res *model.Result, path string) error {
-	if WriteChartFunc == nil {
-		return usagef("--chart %q: charts are not available in this build", path)
+	if _, err := plots.FormatOf(path); err != nil {
+		return usagef("--chart %q: %v", path, err)
 	}
-	return WriteChartFunc(m, res, path)
+	xs, err := m.Crossovers(context.Background(), res.Setting, model.DefaultRange(res.Setting.LengthMM), nil)
+	if err != nil {
+		return err
+	}
+	ch := chart.NewBuilder(m).Chart(res, chart.Options{Crossovers: xs, Title: m.Scheme.Name})
+	return plots.SaveChart(path, &ch, plots.DefaultExportSize)
 }
 
 func endsText(s model.Setting) string {

@@ -1,0 +1,387 @@
+package model
+
+import (
+	"fmt"
+	"math"
+
+	"upright/timber"
+)
+
+func init() { Register("timber", 30, buildTimber) }
+
+// Conversions at the edge between the timber package (in, lb, psi) and the model (mm, N, MPa).
+const (
+	timberMMPerIn  = 25.4
+	timberNPerLb   = 4.4482216152605       // exact: 0.45359237 kg × 9.80665 m/s²
+	timberMPaPerPs = timberNPerLb / 645.16 // N per in² to N per mm²
+	timberGravity  = 9.80665               // m/s², for self-weight
+	timberFamSawn  = "Sawn lumber"         // family of 4x posts and posts and timbers
+	timberFamGlu   = "Glulam"              // family of glued laminated timber columns
+	timberKindSawn = "sawn-timber"         // carbon constituent kind, m³ per metre
+	timberKindGlu  = "glulam"              // carbon constituent kind, m³ per metre
+	timberModeFire = 10                    // added to the timber.Mode when the fire case governs
+	timberNotPerm  = "not permitted"       // Governing text when a candidate may not be used
+	timberFireNote = "fire: charred section has no resistance"
+)
+
+// timberFireGoverning is the Governing text, by timber.Mode, when the fire case governs.
+var timberFireGoverning = [...]string{
+	timber.NotPermitted:   timberFireNote,
+	timber.Crushing:       "fire: crushing of the charred section",
+	timber.Buckling:       "fire: buckling of the charred section",
+	timber.BucklingWeak:   "fire: buckling of the charred section about the weak axis",
+	timber.BucklingStrong: "fire: buckling of the charred section about the strong axis",
+}
+
+// timberFamily is one family of timber candidates, prepared for both design methods.
+type timberFamily struct {
+	name      string
+	asd, lrfd []*timber.Candidate
+	static    []Static
+	fire      bool
+	alphaLRFD float64 // LRFD design demand per fire-case (service) demand
+	selfW     bool
+	ls        LoadSummary
+}
+
+func buildTimber(sc *Scheme, ls LoadSummary) ([]Family, error) {
+	o := sc.Timber
+	if err := o.validate(); err != nil {
+		return nil, err
+	}
+	cd := timberDurationCD(o.Duration)
+	if cd == 0 {
+		cd = ls.CD
+	}
+	if cd == 0 {
+		cd = timber.CDTenYears
+	}
+	lambda := ls.Lambda
+	if lambda == 0 {
+		lambda = 0.8
+	}
+	sides := o.FireSides
+	if sides == 0 {
+		sides = 4
+	}
+	base := timber.Conditions{
+		CD: cd, Lambda: lambda, Wet: o.Wet, Hot: o.Hot, Incised: o.Incised,
+		Fire: timber.Fire{Hours: timberFireHours(o.Fire), Sides: sides},
+	}
+	alpha := ls.StrengthPerService
+	if !(alpha >= 1 && alpha <= 3) {
+		alpha = 1.5 // common practice: D + L factored by 1.2/1.6 over service is about 1.5
+	}
+	newFam := func(name string) *timberFamily {
+		return &timberFamily{name: name, fire: base.Fire.On(), alphaLRFD: alpha, selfW: sc.SelfWeight, ls: ls}
+	}
+	add := func(f *timberFamily, sec timber.Section, mat timber.Material, kind string) error {
+		ca, lr := base, base
+		ca.Method, lr.Method = timber.ASD, timber.LRFD
+		a, err := timber.NewCandidate(sec, mat, ca)
+		if err != nil {
+			return timberFieldErr(err, cd, lambda)
+		}
+		l, err := timber.NewCandidate(sec, mat, lr)
+		if err != nil {
+			return timberFieldErr(err, cd, lambda)
+		}
+		f.asd, f.lrfd = append(f.asd, a), append(f.lrfd, l)
+		areaM2 := sec.Area() * timberMMPerIn * timberMMPerIn * 1e-6
+		f.static = append(f.static, Static{
+			Material: "timber", Family: f.name, Designation: a.Designation(),
+			MassKgPerM:   a.MassKgPerM(),
+			FootprintMM:  [2]float64{sec.BMM(), sec.DMM()},
+			PlanAreaMM2:  sec.BMM() * sec.DMM(),
+			Constituents: []Constituent{{Kind: kind, Amount: areaM2}},
+		})
+		return nil
+	}
+
+	var out []Family
+	if o.Sawn {
+		f := newFam(timberFamSawn)
+		for _, sec := range timber.SawnSections() {
+			mat, err := timber.SawnMaterial(o.Species, o.Grade, sec)
+			if err != nil {
+				return nil, bad("species/grade", o.Species+" "+o.Grade, err.Error())
+			}
+			if err := add(f, sec, mat, timberKindSawn); err != nil {
+				return nil, err
+			}
+		}
+		out = append(out, f)
+	}
+	if o.Glulam {
+		f := newFam(timberFamGlu)
+		for _, series := range []timber.Series{timber.Western, timber.Southern} {
+			for _, sec := range timber.GlulamSections(series) {
+				for _, name := range timber.GlulamCombinations(series) {
+					if len(o.GlulamCombos) > 0 && !timberOneOf(name, o.GlulamCombos) {
+						continue
+					}
+					mat, err := timber.GlulamMaterial(name)
+					if err != nil {
+						return nil, bad("glulam combination", name, err.Error())
+					}
+					if err := add(f, sec, mat, timberKindGlu); err != nil {
+						return nil, err
+					}
+				}
+			}
+		}
+		if f.Len() > 0 {
+			out = append(out, f)
+		}
+	}
+	return out, nil
+}
+
+// timberFieldErr names the load-derived factor when the timber package rejects it.
+func timberFieldErr(err error, cd, lambda float64) error {
+	switch {
+	case cd != timber.CDPermanent && cd != timber.CDTenYears && cd != timber.CDTwoMonths && cd != timber.CDSevenDays && cd != timber.CDTenMinutes:
+		return bad("load duration CD", cd, "0.9, 1.0, 1.15, 1.25 or 1.6 (NDS 2018 Table 2.3.2)")
+	case lambda != 0.6 && lambda != 0.7 && lambda != 0.8 && lambda != 1.0:
+		return bad("time effect factor lambda", lambda, "0.6, 0.7, 0.8 or 1.0 (NDS 2018 Table N3)")
+	}
+	return err
+}
+
+func (f *timberFamily) Material() string     { return "timber" }
+func (f *timberFamily) Name() string         { return f.name }
+func (f *timberFamily) Len() int             { return len(f.asd) }
+func (f *timberFamily) Static(i int) *Static { return &f.static[i] }
+
+func (f *timberFamily) cand(i int, m Method) *timber.Candidate {
+	if m == ASD {
+		return f.asd[i]
+	}
+	return f.lrfd[i]
+}
+
+// alpha is the design demand per fire-case demand for the method.
+func (f *timberFamily) alpha(m Method) float64 {
+	if m == ASD {
+		return 1 // ASD demand is already the service load combination
+	}
+	return f.alphaLRFD
+}
+
+// timberGeometry turns a model setting into timber geometry: x (strong axis,
+// depth d) with LengthMM, y (weak axis, width b) with WeakMM.
+func timberGeometry(s Setting) timber.Geometry {
+	weak := s.WeakMM
+	if weak == 0 {
+		weak = s.LengthMM
+	}
+	g := timber.Geometry{LxIn: s.LengthMM / timberMMPerIn, LyIn: weak / timberMMPerIn, K: s.K}
+	switch s.Ends {
+	case FixedFixed:
+		g.Ends = timber.FixedFixed
+	case FixedPinned:
+		g.Ends = timber.FixedPinned
+	case FixedGuided:
+		g.Ends = timber.FixedGuided
+	case PinnedPinned:
+		g.Ends = timber.PinnedPinned
+	case FixedFree:
+		g.Ends = timber.FixedFree
+	case PinnedGuided:
+		g.Ends = timber.PinnedGuided
+	}
+	return g
+}
+
+// timberQuick converts a timber result to the model's Quick. With a fire
+// check, the fire-case strength times α (design demand per fire-case demand)
+// is the design-load equivalent; when it is lower it governs.
+func (f *timberFamily) timberQuick(tq *timber.Quick, m Method) Quick {
+	q := Quick{Slenderness: tq.LeD, Permitted: tq.Permitted, Reason: tq.Reason, Governing: timberNotPerm}
+	if !tq.Permitted {
+		return q
+	}
+	q.CapacityN = tq.Capacity * timberNPerLb
+	q.Governing = tq.Mode.String()
+	q.Mode = int(tq.Mode)
+	if f.fire {
+		fq := &tq.Fire
+		if !fq.Permitted {
+			q.CapacityN, q.Permitted, q.Reason = 0, false, fq.Reason
+			q.Governing, q.Mode = timberFireNote, timberModeFire
+			return q
+		}
+		if eq := fq.Capacity * timberNPerLb * f.alpha(m); eq < q.CapacityN {
+			q.CapacityN = eq
+			q.Governing = timberFireGoverning[fq.Mode]
+			q.Mode = timberModeFire + int(fq.Mode)
+		}
+	}
+	return q
+}
+
+func (f *timberFamily) Quick(i int, s Setting) Quick {
+	tq := f.cand(i, s.Method).Fast(timberGeometry(s))
+	return f.timberQuick(&tq, s.Method)
+}
+
+func (f *timberFamily) Detail(i int, s Setting) Detail {
+	k := f.cand(i, s.Method)
+	st := &f.static[i]
+	selfN := 0.0
+	if f.selfW {
+		selfN = st.MassKgPerM * Gravity * s.LengthMM / 1000
+	}
+	demandN := f.ls.Demand(selfN)
+	if !finite(demandN) || demandN < 0 {
+		demandN = 0
+	}
+	alpha := f.alpha(s.Method)
+	// Fire-case load: the service (ASD) combination. With a takedown it is
+	// the governing ASD combination plus self-weight; for a typed LRFD load
+	// the design demand over α.
+	fireN := demandN / alpha
+	if s.Method == LRFD && f.ls.Known && f.ls.ASDN > 0 {
+		fireN = f.ls.ASDN + selfN
+	}
+	r, err := k.Full(timberGeometry(s), timber.Demand{Design: demandN / timberNPerLb, Fire: fireN / timberNPerLb})
+	if err != nil {
+		return Detail{
+			Quick:    Quick{Governing: timberNotPerm, Reason: err.Error()},
+			Warnings: []string{err.Error()},
+			Calc:     map[string]any{"error": err.Error()},
+			Plain:    "This column could not be checked: " + err.Error(),
+		}
+	}
+	d := Detail{Quick: f.timberQuick(&r.Quick, s.Method), Warnings: r.Warnings, Plain: r.Plain}
+
+	factors := map[string]float64{}
+	for _, x := range r.FcFactors {
+		factors[x.Key()] = x.Value
+	}
+	for _, x := range r.EminFactors {
+		factors[x.Key()] = x.Value
+	}
+	mpa := func(psi float64) float64 { return psi * timberMPaPerPs }
+	kn := func(lb float64) float64 { return lb * timberNPerLb / 1000 }
+	calc := map[string]any{
+		"designation":    r.Designation,
+		"product":        r.Section.Product.String(),
+		"method":         k.Conditions().Method.String(),
+		"b_mm":           r.Section.BMM(),
+		"d_mm":           r.Section.DMM(),
+		"area_mm2":       r.Area * timberMMPerIn * timberMMPerIn,
+		"species":        timber.SpeciesName(r.Material.Species),
+		"grade":          r.Material.Grade,
+		"table":          r.Material.Table,
+		"Fc_MPa":         mpa(r.Material.Fc),
+		"E_MPa":          mpa(r.Material.E),
+		"Emin_MPa":       mpa(r.Material.Emin),
+		"G":              r.Material.G,
+		"factors":        factors,
+		"Fc_star_MPa":    mpa(r.FcStar),
+		"Emin_adj_MPa":   mpa(r.EminAdj),
+		"Ke":             r.Ke,
+		"Ke_source":      r.KeSource,
+		"le_x_mm":        r.LeX * timberMMPerIn,
+		"le_y_mm":        r.LeY * timberMMPerIn,
+		"le_d_x":         r.LeDX,
+		"le_d_y":         r.LeDY,
+		"le_d":           r.LeD,
+		"le_d_limit":     timber.LeDLimit,
+		"FcE_MPa":        mpa(r.FcE),
+		"c":              r.C,
+		"Cp":             r.Cp,
+		"Fc_adj_MPa":     mpa(r.FcAdj),
+		"capacity_kN":    kn(r.Capacity),
+		"permitted":      r.Permitted,
+		"mode":           r.Mode.String(),
+		"mc_percent":     r.MC,
+		"density_kg_m3":  r.DensityKgM3,
+		"mass_kg_m":      r.MassKgPerM,
+		"self_weight_kN": selfN / 1000,
+		"demand_kN":      demandN / 1000,
+	}
+	for _, x := range r.Steps {
+		d.Steps = append(d.Steps, timberStep(x))
+	}
+	if demandN > 0 {
+		d.Steps = append(d.Steps, Step{
+			Clause: "ASCE 7-22 2.3/2.4 via the load summary", Quantity: "demand",
+			Formula: "governing axial demand including self-weight", Value: demandN / 1000, Unit: "kN",
+		})
+	}
+	if fr := r.Fire; fr != nil {
+		fire := map[string]any{
+			"hours":                fr.Hours,
+			"sides":                fr.Sides,
+			"protected":            fr.Protected,
+			"aeff_mm":              fr.Aeff * timberMMPerIn,
+			"b_mm":                 fr.B * timberMMPerIn,
+			"d_mm":                 fr.D * timberMMPerIn,
+			"area_mm2":             fr.Area * timberMMPerIn * timberMMPerIn,
+			"K_Fc":                 fr.KFc,
+			"K_FcE":                fr.KFcE,
+			"CF":                   fr.CF,
+			"Fc_fire_MPa":          mpa(fr.FcStar),
+			"Emin_fire_MPa":        mpa(fr.EminFire),
+			"le_d":                 fr.LeD,
+			"FcE_MPa":              mpa(fr.FcE),
+			"Cp":                   fr.Cp,
+			"capacity_kN":          kn(fr.Capacity),
+			"permitted":            fr.Permitted,
+			"reason":               fr.Reason,
+			"demand_kN":            fireN / 1000,
+			"alpha":                alpha,
+			"design_equivalent_kN": kn(fr.Capacity) * alpha,
+			"meaning":              fr.Meaning,
+		}
+		calc["fire"] = fire
+		d.Steps = append(d.Steps,
+			Step{Clause: "NDS 2018 16.2.2 (load taken as the service combination)", Quantity: "fire demand",
+				Formula: timberFireDemandWords(s.Method, f.ls.Known, alpha), Value: fireN / 1000, Unit: "kN"},
+			Step{Clause: "NDS 2018 16.2.2", Quantity: "α·P_fire",
+				Formula: "fire-case strength on the design-load scale, compared with the design capacity", Value: kn(fr.Capacity) * alpha, Unit: "kN"},
+		)
+		if d.Mode >= timberModeFire {
+			d.Warnings = append(d.Warnings, fmt.Sprintf("The %s h fire case governs the capacity shown: the charred section must carry the service load on its own.", timberHours(fr.Hours)))
+		}
+	}
+	d.Calc = calc
+	return d
+}
+
+func timberFireDemandWords(m Method, known bool, alpha float64) string {
+	switch {
+	case m == ASD:
+		return "the ASD design demand (service loads)"
+	case known:
+		return "governing ASD combination of the takedown plus self-weight"
+	}
+	return fmt.Sprintf("design demand / α, α = %.2f (design per service load)", alpha)
+}
+
+func timberHours(h float64) string {
+	if h == math.Trunc(h) {
+		return fmt.Sprintf("%.0f", h)
+	}
+	return fmt.Sprintf("%.1f", h)
+}
+
+// timberStep converts one trace line to SI.
+func timberStep(s timber.Step) Step {
+	out := Step{Clause: s.Clause, Quantity: s.Quantity, Formula: s.Formula, Value: s.Value, Unit: s.Unit}
+	switch s.Unit {
+	case "in":
+		out.Value, out.Unit = s.Value*timberMMPerIn, "mm"
+	case "in2":
+		out.Value, out.Unit = s.Value*timberMMPerIn*timberMMPerIn, "mm2"
+	case "psi":
+		out.Value, out.Unit = s.Value*timberMPaPerPs, "MPa"
+	case "lb":
+		out.Value, out.Unit = s.Value*timberNPerLb/1000, "kN"
+	case "in/h":
+		out.Value, out.Unit = s.Value*timberMMPerIn, "mm/h"
+	}
+	return out
+}

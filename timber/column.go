@@ -150,7 +150,7 @@ func NewCandidate(sec Section, mat Material, cond Conditions) (*Candidate, error
 			return nil, fmt.Errorf("timber: material %q %s = %v not accepted; use a value above 0 and at most %v", mat.Name, v.name, v.x, v.max)
 		}
 	}
-	if (mat.Product == Glulam) != (sec.Product == Glulam) || (mat.Product == Glulam && mat.Series != sec.Series) {
+	if mat.Product != sec.Product || (mat.Product == Glulam && mat.Series != sec.Series) {
 		return nil, fmt.Errorf("timber: material %q (%s %s) does not fit section %q (%s %s)", mat.Name, mat.Series, mat.Product, sec.Name, sec.Series, sec.Product)
 	}
 	cond, err := cond.normalized()

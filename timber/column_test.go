@@ -496,6 +496,9 @@ func TestBadInputs(t *testing.T) {
 	gm, _ := GlulamMaterial("Comb. 2 DF")
 	_, err = NewCandidate(s, gm, Conditions{Method: ASD})
 	assert.ErrorContains(t, err, "does not fit")
+	s4, _ := SawnSection(4, 4)
+	_, err = NewCandidate(s4, m, Conditions{Method: ASD}) // Table 4D values on a 4x4
+	assert.ErrorContains(t, err, "does not fit")
 
 	k := mustSawn(t, 8, 8, DouglasFirLarch, No1, Conditions{Method: ASD})
 	for _, c := range []struct {

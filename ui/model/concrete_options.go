@@ -10,6 +10,11 @@ type ConcreteOptions struct {
 	BetaDns       float64 // sustained-load ratio; used when BetaFromLoads is false or the load has no split
 	BetaFromLoads bool    // derive βdns from the takedown's dead/live split
 	EIMethod      string  // "a" or "b" of ACI 318-19 6.6.4.4.4
+	// SecondOrderCap also holds the moment magnifier to 1.4 (ACI 318-19
+	// 6.2.5.3: second-order moment at most 1.4 times first-order). Off by
+	// default: the strength is where the magnified minimum moment meets the
+	// interaction diagram, and a magnifier above 1.4 is a warning.
+	SecondOrderCap bool
 }
 
 func defaultConcreteOptions() ConcreteOptions {

@@ -43,8 +43,12 @@ func (s *Section) phi(epsT float64) float64 {
 // Whitney block of 0.85f'c over a = β1c (22.2.2.4), elastic–perfectly
 // plastic bars at their real positions (20.2.2.1) and the concrete displaced
 // by bars inside the block subtracted. c ≤ 0 gives uniform tension
-// (−fy·Ast) and c = +Inf uniform compression (P0 of Eq. 22.4.2.2).
+// (−fy·Ast) and c = +Inf uniform compression (P0 of Eq. 22.4.2.2). An axis
+// other than AxisX or AxisY gives the zero Point.
 func (s *Section) PointAt(ax Axis, c float64) Point {
+	if ax != AxisX && ax != AxisY {
+		return Point{}
+	}
 	if math.IsNaN(c) || c <= 0 {
 		return Point{C: 0, EpsT: math.Inf(1), Pn: -s.FyMPa * s.AstMM2, Phi: 0.90}
 	}
@@ -226,9 +230,10 @@ func (d *diagram) mcap(p float64) float64 {
 
 // PhiMnAt returns the moment capacity φMn, N·mm, of the φ-reduced
 // interaction diagram about an axis at a factored axial load pu, N. It is
-// 0 above φPn,max or below zero axial load (the table covers compression only).
+// 0 above φPn,max, below zero axial load (the table covers compression
+// only) or for an unknown axis.
 func (s *Section) PhiMnAt(ax Axis, pu float64) float64 {
-	if !(pu >= 0) || pu > s.PhiPnMax*(1+1e-12) {
+	if (ax != AxisX && ax != AxisY) || !(pu >= 0) || pu > s.PhiPnMax*(1+1e-12) {
 		return 0
 	}
 	return s.diag[ax].mcap(pu)
@@ -236,7 +241,10 @@ func (s *Section) PhiMnAt(ax Axis, pu float64) float64 {
 
 // Diagram returns a copy of the nominal interaction-diagram points about an
 // axis, from uniform tension to uniform compression; multiply by Phi for
-// the design diagram.
+// the design diagram. An unknown axis gives nil.
 func (s *Section) Diagram(ax Axis) []Point {
+	if ax != AxisX && ax != AxisY {
+		return nil
+	}
 	return append([]Point(nil), s.diag[ax].points...)
 }

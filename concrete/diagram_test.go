@@ -246,3 +246,12 @@ func TestIndependentFibreCheck(t *testing.T) {
 	assert.Greater(t, checked, 30)
 	t.Logf("%d strengths checked; largest difference %.3f%% short, %.3f%% slender", checked, 100*worst[false], 100*worst[true])
 }
+
+func TestUnknownAxisDoesNotPanic(t *testing.T) {
+	sq := square16(t)
+	c := pinned(3000)
+	assert.Equal(t, Point{}, sq.PointAt(Axis(5), 100))
+	assert.Zero(t, sq.PhiMnAt(Axis(-1), 1e6))
+	assert.Nil(t, sq.Diagram(Axis(2)))
+	assert.Equal(t, Magnification{}, sq.Magnify(Axis(3), 1e6, 3000, &c))
+}

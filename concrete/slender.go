@@ -242,7 +242,11 @@ func delta(pu, pc float64) float64 {
 
 // Magnify returns the magnifier about an axis at a factored load pu, N,
 // for an unbraced length lu, mm, and the conditions' K, βdns and EI method.
+// An unknown axis gives the zero Magnification.
 func (s *Section) Magnify(ax Axis, pu, lu float64, c *Conditions) Magnification {
+	if ax != AxisX && ax != AxisY {
+		return Magnification{}
+	}
 	k := c.KFactor()
 	pc := s.pc(ax, k*lu, c)
 	d := delta(pu, pc)

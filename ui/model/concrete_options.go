@@ -10,17 +10,18 @@ type ConcreteOptions struct {
 	BetaDns       float64 // sustained-load ratio; used when BetaFromLoads is false or the load has no split
 	BetaFromLoads bool    // derive βdns from the takedown's dead/live split
 	EIMethod      string  // "a" or "b" of ACI 318-19 6.6.4.4.4
-	// SecondOrderCap also holds the moment magnifier to 1.4 (ACI 318-19
-	// 6.2.5.3: second-order moment at most 1.4 times first-order). Off by
-	// default: the strength is where the magnified minimum moment meets the
-	// interaction diagram, and a magnifier above 1.4 is a warning.
+	// SecondOrderCap holds the moment magnifier to 1.4 (ACI 318-19 6.2.5.3:
+	// total moment with second-order effects at most 1.4 times the
+	// first-order moment). On by default, as the code requires; switching it
+	// off shows where the magnified minimum moment alone meets the
+	// interaction diagram, with a warning whenever δ exceeds 1.4.
 	SecondOrderCap bool
 }
 
 func defaultConcreteOptions() ConcreteOptions {
 	return ConcreteOptions{
 		BarGrade: 60, RhoMax: 0.04, Transverse: "all", M1M2: -1,
-		BetaDns: 0.6, BetaFromLoads: true, EIMethod: "a",
+		BetaDns: 0.6, BetaFromLoads: true, EIMethod: "a", SecondOrderCap: true,
 	}
 }
 

@@ -229,7 +229,9 @@ func TestConcreteSecondOrderCap(t *testing.T) {
 	sc := DefaultScheme()
 	sc.Concrete.SecondOrderCap = true
 	s := Setting{LengthMM: 6000, WeakMM: 6000, Ends: PinnedPinned, Method: LRFD}
-	off := concreteFamilies(t, DefaultScheme(), typedLoads(t, LRFD))[0]
+	offSc := DefaultScheme()
+	offSc.Concrete.SecondOrderCap = false
+	off := concreteFamilies(t, offSc, typedLoads(t, LRFD))[0]
 	for _, f := range concreteFamilies(t, sc, typedLoads(t, LRFD))[:1] {
 		for i := 0; i < f.Len(); i++ {
 			d := f.Detail(i, s)

@@ -136,7 +136,7 @@ func (b *Builder) Chart(res *model.Result, opt Options) plots.Chart {
 		ch.Demand = append(ch.Demand, plots.Point{X: x, Y: y})
 	}
 	if m.Scheme.SelfWeight {
-		ch.DemandLabel = "Demand (self-weight added per candidate)"
+		ch.DemandLabel = "Demand (+ self-weight)"
 	} else {
 		ch.DemandLabel = "Demand"
 	}
@@ -163,7 +163,9 @@ func (b *Builder) Chart(res *model.Result, opt Options) plots.Chart {
 		}
 		cx, _ := units.LengthValue(L, sys)
 		cy, _ := units.ForceValue(q.CapacityN, sys)
-		label := c.From
+		// Reaches stay unlabelled rings (the legend names the curves); a change
+		// of best family is labelled with the family taking over.
+		label := ""
 		if c.Kind == model.KindFamily {
 			label = "→ " + c.To
 			if c.To == "" {

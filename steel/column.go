@@ -9,10 +9,7 @@ import (
 // for local buckling (AISC 360-22 B4.1 and E7.1), with everything that does
 // not depend on the column's length worked out in advance.
 type element struct {
-	name    string  // e.g. "flange", "web", "wall b", "wall h"
-	ratio   string  // e.g. "bf/2tf", "h/tw", "b/t"
-	b21     string  // the Table B4.1a case, e.g. "Table B4.1a case 1"
-	e71     string  // the Table E7.1 case, e.g. "Table E7.1 case (c)"
+	*elementKind
 	count   float64 // how many such elements the section has
 	b, t    float64 // width and thickness, in
 	lambda  float64 // width-to-thickness ratio λ
@@ -22,6 +19,25 @@ type element struct {
 	fcrLim  float64 // Fcr above which the element is reduced: Fy (λr/λ)², ksi
 	slender bool    // λ > λr: the element is slender (Table B4.1a)
 }
+
+// elementKind names a kind of plate element and the table rows that
+// govern it; kept apart from element so that the fast path touches only
+// numbers.
+type elementKind struct {
+	name  string // e.g. "flange", "web", "wall b", "wall h"
+	ratio string // e.g. "bf/2tf", "h/tw", "b/t"
+	b21   string // the Table B4.1a case, e.g. "Table B4.1a case 1"
+	e71   string // the Table E7.1 case, e.g. "Table E7.1 case (c)"
+}
+
+// The element kinds of the catalogue's sections.
+var (
+	kindFlange = &elementKind{"flange", "bf/2tf", "Table B4.1a case 1", "Table E7.1 case (c)"}
+	kindWeb    = &elementKind{"web", "h/tw", "Table B4.1a case 5", "Table E7.1 case (a)"}
+	kindWall   = &elementKind{"wall", "b/t", "Table B4.1a case 6", "Table E7.1 case (b)"}
+	kindWallB  = &elementKind{"wall b", "b/t", "Table B4.1a case 6", "Table E7.1 case (b)"}
+	kindWallH  = &elementKind{"wall h", "h/t", "Table B4.1a case 6", "Table E7.1 case (b)"}
+)
 
 // loss returns the area the element group loses to local buckling at the
 // critical stress fcr, in² (AISC 360-22 Eq. E7-2 and E7-3).
@@ -50,6 +66,7 @@ type Column struct {
 	ezw, ezg float64 // π² E Cw/(Ix+Iy) and G J/(Ix+Iy) (Eq. E4-2); torsion false for closed sections
 	torsion  bool
 	sym      bool // rx = ry by symmetry (square, round): the axis is not named
+	round    bool // round HSS or pipe: Ae does not depend on Fcr (E7.2)
 	elems    [2]element
 	nElem    int
 	aeRound  float64 // round HSS and pipe: effective area of Eq. E7-6/E7-7, in²
@@ -84,23 +101,18 @@ func NewColumn(s *Shape, fy float64) (Column, error) {
 		c.ezw = pe * s.Cw / (s.Ix + s.Iy)
 		c.ezg = G * s.J / (s.Ix + s.Iy)
 		// Table B4.1a case 1: flanges of rolled I-shapes; Table E7.1 case (c).
-		c.addElement(element{name: "flange", ratio: "bf/2tf", b21: "Table B4.1a case 1", e71: "Table E7.1 case (c)",
-			count: 4, b: s.Bf / 2, t: s.Tf, lambda: s.FlangeBT, lambdaR: 0.56 * rootEF, c1: 0.22})
+		c.addElement(element{elementKind: kindFlange, count: 4, b: s.Bf / 2, t: s.Tf, lambda: s.FlangeBT, lambdaR: 0.56 * rootEF, c1: 0.22})
 		// Table B4.1a case 5: webs of doubly symmetric I-shapes; Table E7.1 case (a).
-		c.addElement(element{name: "web", ratio: "h/tw", b21: "Table B4.1a case 5", e71: "Table E7.1 case (a)",
-			count: 1, b: s.WebHT * s.Tw, t: s.Tw, lambda: s.WebHT, lambdaR: 1.49 * rootEF, c1: 0.18})
+		c.addElement(element{elementKind: kindWeb, count: 1, b: s.WebHT * s.Tw, t: s.Tw, lambda: s.WebHT, lambdaR: 1.49 * rootEF, c1: 0.18})
 	case HSSSquare:
 		c.sym = true
 		// Table B4.1a case 6: walls of rectangular HSS; Table E7.1 case (b).
-		c.addElement(element{name: "wall", ratio: "b/t", b21: "Table B4.1a case 6", e71: "Table E7.1 case (b)",
-			count: 4, b: s.WallBT * s.Tdes, t: s.Tdes, lambda: s.WallBT, lambdaR: 1.40 * rootEF, c1: 0.20})
+		c.addElement(element{elementKind: kindWall, count: 4, b: s.WallBT * s.Tdes, t: s.Tdes, lambda: s.WallBT, lambdaR: 1.40 * rootEF, c1: 0.20})
 	case HSSRect:
-		c.addElement(element{name: "wall b", ratio: "b/t", b21: "Table B4.1a case 6", e71: "Table E7.1 case (b)",
-			count: 2, b: s.WallBT * s.Tdes, t: s.Tdes, lambda: s.WallBT, lambdaR: 1.40 * rootEF, c1: 0.20})
-		c.addElement(element{name: "wall h", ratio: "h/t", b21: "Table B4.1a case 6", e71: "Table E7.1 case (b)",
-			count: 2, b: s.WallHT * s.Tdes, t: s.Tdes, lambda: s.WallHT, lambdaR: 1.40 * rootEF, c1: 0.20})
+		c.addElement(element{elementKind: kindWallB, count: 2, b: s.WallBT * s.Tdes, t: s.Tdes, lambda: s.WallBT, lambdaR: 1.40 * rootEF, c1: 0.20})
+		c.addElement(element{elementKind: kindWallH, count: 2, b: s.WallHT * s.Tdes, t: s.Tdes, lambda: s.WallHT, lambdaR: 1.40 * rootEF, c1: 0.20})
 	case HSSRound, Pipe:
-		c.sym = true
+		c.sym, c.round = true, true
 		c.aeRound = s.A
 		lr := 0.11 * E / c.fy // Table B4.1a case 9
 		switch {
@@ -311,7 +323,7 @@ var ln0658 = math.Log(0.658)
 // effectiveArea returns Ae at critical stress fcr (AISC 360-22 E7.1 and
 // E7.2); Ag when no element is slender.
 func (c *Column) effectiveArea(fcr float64) float64 {
-	if c.Shape.Family.Round() {
+	if c.round {
 		return c.aeRound
 	}
 	ae := c.ag

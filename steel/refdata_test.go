@@ -8,6 +8,8 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"github.com/stretchr/testify/assert"
 )
 
 // refPath is the AISC Shapes Database v16.0 extract kept beside the
@@ -199,4 +201,33 @@ func TestCatalogAgainstReference(t *testing.T) {
 		}
 	}
 	t.Logf("%d reference shapes checked against %d catalogue shapes", checked, len(Catalog()))
+}
+
+// TestTorsionConstantsAgainstReference checks J and Cw of the rolled
+// shapes, worked from the dimensions (J by the fillet formula of AISC
+// Design Guide 9, Cw = tf bf³ ho²/24), against the AISC Shapes Database
+// v16.0: Cw within 2 %, J within 11 % (the fillet term of J runs high on
+// thin webs and on HP shapes; J enters only Eq. E4-2, and
+// TestStrengthAgainstIndependentCalculation, which uses the tabulated J,
+// still agrees within 1 %). HSS: J within 1 %. Pipe is left out: several of
+// its tabulated I and J contradict the database's own OD and tdes (see
+// refAreaColumn and refSection).
+func TestTorsionConstantsAgainstReference(t *testing.T) {
+	ref := loadReference(t)
+	for _, r := range ref {
+		fam, ok := inScope(r)
+		if !ok {
+			continue
+		}
+		s, err := Lookup(r.label)
+		if err != nil {
+			continue
+		}
+		if fam.IShaped() {
+			assert.InEpsilon(t, r.get("Cw"), s.Cw, 0.02, "%s Cw", r.label)
+			assert.InEpsilon(t, r.get("J"), s.J, 0.11, "%s J", r.label)
+		} else if fam != Pipe {
+			assert.InEpsilon(t, r.get("J"), s.J, 0.01, "%s J", r.label)
+		}
+	}
 }

@@ -96,6 +96,13 @@ type Shape struct {
 	DT       float64 // round HSS and pipe: D/t
 }
 
+// KgPerMPerLbPerFt converts a weight in lb/ft to a mass in kg/m.
+const KgPerMPerLbPerFt = 0.45359237 / 0.3048
+
+// MassKgPerM returns the mass per metre of column, kg/m, from the published
+// nominal weight.
+func (s *Shape) MassKgPerM() float64 { return s.Weight * KgPerMPerLbPerFt }
+
 // FootprintIn returns the plan dimensions in inches: d × bf for W and HP,
 // B × H for square and rectangular HSS, OD × OD for round HSS and pipe.
 func (s *Shape) FootprintIn() [2]float64 {

@@ -35,6 +35,7 @@ func TestPublishedStrengths(t *testing.T) {
 		{"W14X90", 1e-9, 1e-9, LRFD, 1190, "AISC Manual Table 4-1a, W14X90 at Lc = 0, φcPn = φFyAg (from memory)"},
 		{"HSS8X8X1/2", 1e-9, 1e-9, LRFD, 608, "AISC Manual Table 4-4, HSS8X8X1/2 at Lc = 0, φcPn (from memory)"},
 		{"HSS8X8X1/2", 1e-9, 1e-9, ASD, 404, "AISC Manual Table 4-4, HSS8X8X1/2 at Lc = 0, Pn/Ωc (from memory)"},
+		{"HSS12X8X1/2", 1e-9, 1e-9, LRFD, 774, "AISC Manual Table 4-3, HSS12X8X1/2 at Lc = 0, φcPn (from memory)"},
 		{"Pipe6STD", 1e-9, 1e-9, LRFD, 164, "AISC Manual Table 4-6, Pipe 6 Std. at Lc = 0, φcPn (from memory)"},
 	}
 	for _, r := range rows {

@@ -107,11 +107,11 @@ type Quick struct {
 
 // Step is one line of a calculation trace.
 type Step struct {
-	Clause   string  // the code clause or equation, e.g. "AISC 360-22 Eq. E3-2"
-	Quantity string  // what is computed, e.g. "Fcr"
-	Formula  string  // the expression in words or symbols
-	Value    float64 // the result
-	Unit     string  // SI unit of Value ("MPa", "mm", "kN", "mm2", "" for ratios)
+	Clause   string  `json:"clause"`   // the code clause or equation, e.g. "AISC 360-22 Eq. E3-2"
+	Quantity string  `json:"quantity"` // what is computed, e.g. "Fcr"
+	Formula  string  `json:"formula"`  // the expression in words or symbols
+	Value    float64 `json:"value"`    // the result
+	Unit     string  `json:"unit"`     // SI unit of Value ("MPa", "mm", "kN", "mm2", "" for ratios)
 }
 
 // Detail is a candidate's full result at one setting, with its trace.

@@ -91,6 +91,14 @@ func saveData(path string, data []byte) error {
 	return nil
 }
 
+// WriteFileAtomic replaces the file at path with data the way Save does
+// (temporary file in the same directory, flush, rename, flush the
+// directory), so that a failure leaves any previous file intact. The
+// report and CSV exports use it.
+func WriteFileAtomic(path string, data []byte) error {
+	return saveData(path, data)
+}
+
 // Hooks through which tests inject failures into writeAtomic.
 var (
 	writeFile = func(f *os.File, b []byte) (int, error) { return f.Write(b) }

@@ -1,0 +1,116 @@
+package cli
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+
+	"upright/ui/model"
+	"upright/ui/report"
+	"upright/ui/schemefile"
+)
+
+// init links scheme files (--scheme on every command) and registers the
+// commands that write files: report (the client PDF), table (the candidate
+// table as CSV) and scheme (the scheme built from the flags, as a file).
+func init() {
+	LoadScheme = schemefile.Load
+	RegisterCommand("report", runReport)
+	RegisterCommand("table", runTable)
+	RegisterCommand("scheme", runScheme)
+	// IsCommand only knows the names in Commands; until it also consults the
+	// registered commands, list these here so main runs them headless.
+	Commands = append(Commands, "report", "table", "scheme")
+}
+
+// buildModel parses the scheme flags (starting from --scheme) and builds the model.
+func buildModel(f *schemeFlags, args []string) (*model.Model, error) {
+	sc, err := schemeFrom(f, args)
+	if err != nil {
+		return nil, err
+	}
+	return model.New(sc)
+}
+
+// runReport writes the client report: upright report [scheme flags] --out report.pdf.
+func runReport(args []string, stdout, stderr io.Writer) error {
+	f := newSchemeFlags("report", stderr)
+	out := f.fs.String("out", "", "PDF file to write (required), e.g. report.pdf")
+	top := f.fs.Int("top", report.DefaultTopN, "working sizes listed per family, 1 to 50")
+	from := f.fs.String("from", "", "start of the chart and crossover range (default 0.5 m)")
+	to := f.fs.String("to", "", "end of the chart and crossover range (default the larger of 12 m and twice --length)")
+	m, err := buildModel(f, args)
+	if err != nil {
+		return err
+	}
+	if *out == "" {
+		return usagef("--out: required; give the PDF file to write, e.g. --out report.pdf")
+	}
+	if *top < 1 || *top > 50 {
+		return usagef("--top %d: not accepted; give 1 to 50 sizes per family", *top)
+	}
+	r, err := rangeFlags(*from, *to, m.Scheme.Setting.LengthMM)
+	if err != nil {
+		return err
+	}
+	var buf bytes.Buffer
+	if err := report.Write(&buf, m, report.Options{Version: Version, TopN: *top, Range: r}); err != nil {
+		return err
+	}
+	if err := schemefile.WriteFileAtomic(*out, buf.Bytes()); err != nil {
+		return err
+	}
+	fmt.Fprintf(stdout, "wrote %s (%d bytes)\n%s\n", *out, buf.Len(), model.Caution)
+	return nil
+}
+
+// runTable writes the candidate table as CSV: upright table [scheme flags] [--csv out.csv] [--all].
+func runTable(args []string, stdout, stderr io.Writer) error {
+	f := newSchemeFlags("table", stderr)
+	out := f.fs.String("csv", "", "CSV file to write; absent or - writes to standard output")
+	all := f.fs.Bool("all", false, "every candidate, not only the sizes that work")
+	m, err := buildModel(f, args)
+	if err != nil {
+		return err
+	}
+	var buf bytes.Buffer
+	if err := report.WriteCSV(&buf, m, report.CSVOptions{All: *all}); err != nil {
+		return err
+	}
+	if *out == "" || *out == "-" {
+		_, err := stdout.Write(buf.Bytes())
+		return err
+	}
+	if err := schemefile.WriteFileAtomic(*out, buf.Bytes()); err != nil {
+		return err
+	}
+	fmt.Fprintf(stdout, "wrote %s\n", *out)
+	return nil
+}
+
+// runScheme writes the scheme the flags describe: upright scheme [scheme flags] --out file.upright.json.
+func runScheme(args []string, stdout, stderr io.Writer) error {
+	f := newSchemeFlags("scheme", stderr)
+	out := f.fs.String("out", "", "scheme file to write (required), e.g. tower"+schemefile.Extension)
+	name := f.fs.String("name", "", "the scheme's name")
+	sc, err := schemeFrom(f, args)
+	if err != nil {
+		return err
+	}
+	if *out == "" {
+		return usagef("--out: required; give the scheme file to write, e.g. --out tower%s", schemefile.Extension)
+	}
+	if *name != "" {
+		sc.Name = *name
+	}
+	if err := schemefile.Save(*out, sc); err != nil {
+		var fe *schemefile.Error
+		if errors.As(err, &fe) && fe.Field != "" {
+			return usagef("%v", err)
+		}
+		return err
+	}
+	fmt.Fprintf(stdout, "wrote %s\n", *out)
+	return nil
+}

@@ -149,3 +149,18 @@ func TestComparePlainHasCaution(t *testing.T) {
 	assert.Contains(t, out, "licensed structural engineer")
 	assert.True(t, strings.Contains(out, "kip"))
 }
+
+func TestCarbonAndMagnifierFlags(t *testing.T) {
+	f := newSchemeFlags("compare", &bytes.Buffer{})
+	sc, err := schemeFrom(f, []string{"--carbon", "concrete=300,rolled-steel=1.1", "--limit-magnifier=false", "--rank", "carbon"})
+	require.NoError(t, err)
+	assert.Equal(t, 300.0, sc.Carbon["concrete"])
+	assert.Equal(t, 1.1, sc.Carbon["rolled-steel"])
+	assert.Equal(t, model.DefaultCarbon()["glulam"], sc.Carbon["glulam"], "other factors keep their defaults")
+	assert.False(t, sc.Concrete.SecondOrderCap)
+	for _, bad := range []string{"adobe=3", "concrete", "concrete=-1", "concrete=lots"} {
+		code, _, errOut := run("compare", "--carbon", bad)
+		assert.Equal(t, 2, code, bad)
+		assert.Contains(t, errOut, "--carbon", bad)
+	}
+}

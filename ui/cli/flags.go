@@ -37,6 +37,9 @@ type schemeFlags struct {
 
 	species, grade, timberProducts, fire, fireSides, duration string
 	wet, incised, hot                                         bool
+
+	carbon     string
+	limitDelta bool
 }
 
 func newSchemeFlags(name string, out io.Writer) *schemeFlags {
@@ -76,6 +79,8 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1 (default from the takedown, else 0.6)")
 	fs.StringVar(&f.ei, "ei", "", "(EI)eff expression of ACI 318-19 6.6.4.4.4: a or b")
 	fs.StringVar(&f.transverse, "transverse", "", "concrete columns: ties, spiral or all")
+	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "hold the concrete moment magnifier to 1.4 (ACI 318-19 6.2.5.3)")
+	fs.StringVar(&f.carbon, "carbon", "", "embodied-carbon factors to change, e.g. concrete=300,rolled-steel=1.1 (kinds: "+carbonKindList()+")")
 
 	fs.StringVar(&f.species, "species", "", "sawn timber species: DF-L, SP, HF, SPF")
 	fs.StringVar(&f.grade, "grade", "", "sawn timber grade: SS, No.1, No.2")
@@ -192,6 +197,11 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 			return sc, usagef("--rank %q: not accepted; give weight, footprint or carbon", f.rank)
 		}
 		sc.Metric = r
+	}
+	if f.carbon != "" {
+		if err := f.buildCarbon(&sc); err != nil {
+			return sc, err
+		}
 	}
 	if f.set("self-weight") {
 		sc.SelfWeight = f.selfWeight
@@ -364,6 +374,9 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 		}
 		c.EIMethod = e
 	}
+	if f.set("limit-magnifier") {
+		c.SecondOrderCap = f.limitDelta
+	}
 	if f.transverse != "" {
 		t := strings.ToLower(f.transverse)
 		if t != "ties" && t != "spiral" && t != "all" {
@@ -445,5 +458,40 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 	if f.duration != "" {
 		t.Duration = strings.ToLower(f.duration)
 	}
+	return nil
+}
+
+func carbonKindList() string {
+	var names []string
+	for _, k := range model.CarbonKinds {
+		names = append(names, k.Key)
+	}
+	return strings.Join(names, ", ")
+}
+
+// buildCarbon applies --carbon kind=value pairs to the scheme's factors.
+func (f *schemeFlags) buildCarbon(sc *model.Scheme) error {
+	cf := model.CarbonFactors{}
+	for k, v := range sc.Carbon {
+		cf[k] = v
+	}
+	for _, pair := range strings.Split(f.carbon, ",") {
+		kv := strings.SplitN(strings.TrimSpace(pair), "=", 2)
+		known := false
+		if len(kv) == 2 {
+			for _, k := range model.CarbonKinds {
+				known = known || k.Key == kv[0]
+			}
+		}
+		if !known {
+			return usagef("--carbon %q: %q is not accepted; give kind=value pairs with kinds %s", f.carbon, pair, carbonKindList())
+		}
+		v, err := parseNumber("carbon", kv[1], "a non-negative factor below 10,000 (kg CO2e per kg or per m³)", 0, 10000)
+		if err != nil {
+			return err
+		}
+		cf[kv[0]] = v
+	}
+	sc.Carbon = cf
 	return nil
 }

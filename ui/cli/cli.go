@@ -37,6 +37,9 @@ func IsCommand(args []string) bool {
 			return true
 		}
 	}
+	if _, ok := extraCommands[args[0]]; ok {
+		return true
+	}
 	return strings.HasPrefix(args[0], "-")
 }
 

@@ -150,22 +150,22 @@ func TestBadFiles(t *testing.T) {
 		{"newer version", repl(`"version": 1`, `"version": 2`), "version", 3, "format version 2 is newer than this program reads (version 1)"},
 		{"version zero", repl(`"version": 1`, `"version": 0`), "version", 3, "0 is not a format version"},
 		{"version as text", repl(`"version": 1`, `"version": "1"`), "version", 3, "expected a whole number"},
-		{"unknown field", repl(`"length": "13 ft"`, `"lenght": "13 ft"`), "setting.lenght", 8, "unknown field; the fields of setting are length, weak_axis_length"},
+		{"unknown field", repl(`"length": "18 ft"`, `"lenght": "18 ft"`), "setting.lenght", 8, "unknown field; the fields of setting are length, weak_axis_length"},
 		{"unknown top-level field", repl(`"self_weight": true,`, `"self_weight": true, "colour": "red",`), "colour", 0, "unknown field; the fields of the top level are"},
 		{"missing field", repl(`"duration": null`, `"fire_sides_again": 4`), "timber.fire_sides_again", 0, "unknown field"},
 		{"missing field 2", repl(`,
     "duration": null`, ``), "timber.duration", 0, "missing field (in timber)"},
-		{"duplicate key", repl(`"floors": 3,`, `"floors": 3, "floors": 4,`), "", 19, `the key "floors" appears twice`},
-		{"wrong type", repl(`"length": "13 ft"`, `"length": 13`), "setting.length", 8, "expected a string; found a number; give a length with its unit"},
-		{"no unit", repl(`"length": "13 ft"`, `"length": "13"`), "setting.length", 8, "a unit is required"},
-		{"bad unit", repl(`"floor_live": "50 psf"`, `"floor_live": "50 furlongs"`), "load.takedown.floor_live", 21, `cannot read "50 furlongs" as a pressure`},
-		{"huge number", repl(`"length": "13 ft"`, `"length": "1e400 ft"`), "setting.length", 8, "cannot read"},
-		{"length out of range", repl(`"length": "13 ft"`, `"length": "0.5 ft"`), "setting.length", 8, `"0.5 ft" is not accepted; give a length from 0.3 m (1 ft) to 30 m (98 ft)`},
-		{"weak axis longer", repl(`"weak_axis_length": "13 ft"`, `"weak_axis_length": "14 ft"`), "setting.weak_axis_length", 9, "no longer than the unbraced length"},
-		{"live out of range", repl(`"floor_live": "50 psf"`, `"floor_live": "900 psf"`), "load.takedown.floor_live", 21, "an unreduced floor live load from 0 to 30 kPa"},
+		{"duplicate key", repl(`"floors": 2,`, `"floors": 2, "floors": 4,`), "", 19, `the key "floors" appears twice`},
+		{"wrong type", repl(`"length": "18 ft"`, `"length": 13`), "setting.length", 8, "expected a string; found a number; give a length with its unit"},
+		{"no unit", repl(`"length": "18 ft"`, `"length": "13"`), "setting.length", 8, "a unit is required"},
+		{"bad unit", repl(`"floor_live": "60 psf"`, `"floor_live": "50 furlongs"`), "load.takedown.floor_live", 21, `cannot read "50 furlongs" as a pressure`},
+		{"huge number", repl(`"length": "18 ft"`, `"length": "1e400 ft"`), "setting.length", 8, "cannot read"},
+		{"length out of range", repl(`"length": "18 ft"`, `"length": "0.5 ft"`), "setting.length", 8, `"0.5 ft" is not accepted; give a length from 0.3 m (1 ft) to 30 m (98 ft)`},
+		{"weak axis longer", repl(`"weak_axis_length": "18 ft"`, `"weak_axis_length": "19 ft"`), "setting.weak_axis_length", 9, "no longer than the unbraced length"},
+		{"live out of range", repl(`"floor_live": "60 psf"`, `"floor_live": "900 psf"`), "load.takedown.floor_live", 21, "an unreduced floor live load from 0 to 30 kPa"},
 		{"rho out of range", repl(`"rho_max": 0.04`, `"rho_max": 0.2`), "concrete.rho_max", 0, "0.2 is not accepted; give a reinforcement ratio from 0.01 to 0.08"},
 		{"bar grade", repl(`"bar_grade": 60`, `"bar_grade": 75`), "concrete.bar_grade", 0, "75 is not accepted; give 60 or 80"},
-		{"fractional floors", repl(`"floors": 3,`, `"floors": 2.5,`), "load.takedown.floors", 19, "2.5 is not accepted; give a whole number"},
+		{"fractional floors", repl(`"floors": 2,`, `"floors": 2.5,`), "load.takedown.floors", 19, "2.5 is not accepted; give a whole number"},
 		{"bad ends", repl(`"pinned-pinned"`, `"hinged"`), "setting.ends", 10, `"hinged" is not accepted`},
 		{"unknown material", repl(`"materials": [],`, `"materials": ["aluminium"],`), "materials", 31, `aluminium`},
 		{"unknown steel family", repl(`"families": [],`, `"families": ["W", "Channel"],`), "steel.families", 33, `"Channel" is not accepted`},
@@ -174,7 +174,7 @@ func TestBadFiles(t *testing.T) {
 		{"carbon unit", repl(`"354 kg CO2e/m³"`, `"354 kg CO2e/kg"`), "carbon.concrete", 0, "its unit must be kg CO2e/m³"},
 		{"carbon negative", repl(`"354 kg CO2e/m³"`, `"-354 kg CO2e/m³"`), "carbon.concrete", 0, "not accepted"},
 		{"unknown carbon kind", repl(`"glulam": "137 kg CO2e/m³"`, `"glulam": "137 kg CO2e/m³", "aluminium": "8 kg CO2e/kg"`), "carbon.aluminium", 0, "unknown field"},
-		{"name with tab", repl(`"Demo: four-storey`, `"Demo:\tfour-storey`), "name", 4, "control character"},
+		{"name with tab", repl(`"Demo: Alder Row`, `"Demo:\tAlder Row`), "name", 4, "control character"},
 		{"k as text", repl(`"k": null`, `"k": "1.0"`), "setting.k", 11, "expected a number or null"},
 		{"k out of range", repl(`"k": null`, `"k": 0.2`), "setting.k", 11, "0.2 is not accepted; give an effective-length factor from 0.5 to 10"},
 		{"deep nesting", strings.Repeat("[", 100) + strings.Repeat("]", 100), "", 1, "nesting deeper than"},
@@ -204,7 +204,7 @@ func TestBadFiles(t *testing.T) {
 
 func TestRangeErrorsKeepTheModelFieldError(t *testing.T) {
 	demo := string(demoBytes(t))
-	_, err := Unmarshal([]byte(strings.Replace(demo, `"snow": "25 psf"`, `"snow": "600 psf"`, 1)))
+	_, err := Unmarshal([]byte(strings.Replace(demo, `"snow": "30 psf"`, `"snow": "600 psf"`, 1)))
 	var me *model.FieldError
 	require.ErrorAs(t, err, &me)
 	assert.Equal(t, "snow", me.Field)
@@ -213,7 +213,7 @@ func TestRangeErrorsKeepTheModelFieldError(t *testing.T) {
 
 func TestErrorMessageShape(t *testing.T) {
 	demo := string(demoBytes(t))
-	_, err := Unmarshal([]byte(strings.Replace(demo, `"length": "13 ft"`, `"length": "0.5 ft"`, 1)))
+	_, err := Unmarshal([]byte(strings.Replace(demo, `"length": "18 ft"`, `"length": "0.5 ft"`, 1)))
 	require.Error(t, err)
 	assert.Equal(t, `line 8, column 15: setting.length: "0.5 ft" is not accepted; give a length from 0.3 m (1 ft) to 30 m (98 ft)`, err.Error())
 }
@@ -251,7 +251,7 @@ func TestLoadRefusesDirectoriesAndMissingFiles(t *testing.T) {
 func TestByteOrderMarkIsSkipped(t *testing.T) {
 	sc, err := Unmarshal(append([]byte("\xef\xbb\xbf"), demoBytes(t)...))
 	require.NoError(t, err)
-	assert.Equal(t, "Demo: four-storey studio building, interior column", sc.Name)
+	assert.Equal(t, "Demo: Alder Row Library, reading-room column", sc.Name)
 }
 
 func TestHandWrittenUnitsAreRead(t *testing.T) {
@@ -266,8 +266,8 @@ func TestHandWrittenUnitsAreRead(t *testing.T) {
 		{`"420 cm"`, 4200},
 		{`"4.2m"`, 4200},
 	} {
-		text := strings.Replace(demo, `"weak_axis_length": "13 ft"`, `"weak_axis_length": "3 m"`, 1)
-		text = strings.Replace(text, `"length": "13 ft"`, `"length": `+c.text, 1)
+		text := strings.Replace(demo, `"weak_axis_length": "18 ft"`, `"weak_axis_length": "3 m"`, 1)
+		text = strings.Replace(text, `"length": "18 ft"`, `"length": `+c.text, 1)
 		sc, err := Unmarshal([]byte(text))
 		require.NoError(t, err, c.text)
 		assert.InDelta(t, c.mm, sc.Setting.LengthMM, 1e-9, c.text)

@@ -19,9 +19,6 @@ func init() {
 	RegisterCommand("report", runReport)
 	RegisterCommand("table", runTable)
 	RegisterCommand("scheme", runScheme)
-	// IsCommand only knows the names in Commands; until it also consults the
-	// registered commands, list these here so main runs them headless.
-	Commands = append(Commands, "report", "table", "scheme")
 }
 
 // buildModel parses the scheme flags (starting from --scheme) and builds the model.

@@ -113,6 +113,9 @@ func usage(w io.Writer) {
   upright compare [flags]       lightest working size of each family at one length
   upright crossovers [flags]    lengths where the answer changes
   upright curve --designation NAME --from 1m --to 10m [flags]
+  upright report --scheme FILE --out report.pdf
+  upright table [flags] --csv table.csv
+  upright scheme [flags] --out FILE     write the scheme built from the flags as a file
   upright --version
 
 Run "upright compare -h" for the scheme flags.

@@ -3,23 +3,57 @@
 package ui
 
 import (
+	"fmt"
+	"os"
+	"runtime/pprof"
+	"time"
+
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/app"
-	"fyne.io/fyne/v2/container"
-	"fyne.io/fyne/v2/widget"
 
-	"upright/ui/model"
+	"upright/ui/cli"
 )
 
-// Run opens the window and returns the exit status when it closes.
+// AppID is the application id; Fyne keeps the preferences under it.
+const AppID = "app.upright.columns"
+
+// Run opens the window and returns the exit status when it closes. It
+// opens on the last scheme and window size, or the demo scheme at the first start.
 func Run(args []string) int {
-	a := app.NewWithID("app.upright.columns")
-	w := a.NewWindow("Upright")
-	w.SetContent(container.NewVBox(
-		widget.NewLabel("Upright: column scheme comparison"),
-		widget.NewLabel(model.Caution),
-	))
-	w.Resize(fyne.NewSize(900, 600))
-	w.ShowAndRun()
+	if len(args) > 0 {
+		fmt.Fprintf(os.Stderr, "upright: unexpected argument %q; run \"upright help\" for the commands\n", args[0])
+		return 2
+	}
+	if path := os.Getenv("UPRIGHT_CPUPROFILE"); path != "" {
+		if f, err := os.Create(path); err == nil {
+			if pprof.StartCPUProfile(f) == nil {
+				// Profiles the first 15 s, for looking at a drag by hand.
+				time.AfterFunc(15*time.Second, func() { pprof.StopCPUProfile(); f.Close() })
+			}
+		}
+	}
+	// The window changes widgets from other goroutines only through
+	// fyne.Do, so Fyne's per-call thread checks (costly: each one reads a
+	// goroutine id from a stack trace) are switched off.
+	app.SetMetadata(fyne.AppMetadata{ID: AppID, Name: "Upright", Version: cli.Version, Build: 1,
+		Migrations: map[string]bool{"fyneDo": true}})
+	a := app.NewWithID(AppID)
+	prefs := a.Preferences()
+	sc, err := savedScheme(prefs)
+	w := NewWindow(a, sc)
+	w.win.Resize(savedSize(prefs))
+	w.win.SetCloseIntercept(func() {
+		storeSize(prefs, w.win.Canvas().Size())
+		if w.st.HaveValid {
+			storeScheme(prefs, w.st.Valid)
+		}
+		w.closing.Store(true)
+		w.win.Close()
+	})
+	if err != nil {
+		w.status.SetText(err.Error())
+	}
+	w.win.ShowAndRun()
+	go w.eng.Close() // never block the exiting UI goroutine on a worker waiting for it
 	return 0
 }

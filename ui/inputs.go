@@ -1,0 +1,450 @@
+package ui
+
+import (
+	"errors"
+	"fmt"
+	"image/color"
+	"strings"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/layout"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+
+	"upright/ui/model"
+	"upright/ui/widgets"
+)
+
+// bannerColor is the pale red behind the invalid-input banner.
+var bannerColor = color.NRGBA{R: 0xfd, G: 0xe8, B: 0xe6, A: 0xff}
+
+// endSketchSpec is how the window draws one end condition.
+type endSketchSpec struct {
+	ends        model.EndCondition
+	bottom, top widgets.End
+	title, note string
+}
+
+// endSketchSpecs are the six idealized cases with their theoretical K
+// (the elastic buckling values; each material applies its own design value).
+var endSketchSpecs = []endSketchSpec{
+	{model.FixedFixed, widgets.Fixed, widgets.Fixed, "fixed–fixed", "K 0.5"},
+	{model.FixedPinned, widgets.Fixed, widgets.Pinned, "fixed–pinned", "K 0.7"},
+	{model.FixedGuided, widgets.Fixed, widgets.Guided, "fixed–guided", "K 1.0 · sways"},
+	{model.PinnedPinned, widgets.Pinned, widgets.Pinned, "pinned–pinned", "K 1.0"},
+	{model.FixedFree, widgets.Fixed, widgets.Free, "fixed–free", "K 2.0 · sways"},
+	{model.PinnedGuided, widgets.Pinned, widgets.Guided, "pinned–guided", "K 2.0 · sways"},
+}
+
+// Choice lists of the select widgets: what the user reads and the model value.
+var (
+	metricChoices = []choice{{"Lightest (weight)", string(model.ByWeight)}, {"Smallest plan footprint", string(model.ByFootprint)}, {"Least embodied carbon", string(model.ByCarbon)}}
+	kllChoices    = []choice{{"4: interior column, or exterior without cantilever slab", "4"}, {"3: edge column with cantilever slab", "3"}, {"2: corner column with cantilever slab", "2"}, {"1: other members", "1"}}
+	occChoices    = []choice{{"General (reducible)", model.OccGeneral}, {"Assembly (not reduced, ASCE 7-22 4.7.5)", model.OccAssembly}, {"Storage / heavy live load (4.7.3)", model.OccStorage}, {"Passenger-vehicle garage (4.7.4)", model.OccGarage}}
+)
+
+// choice pairs a label with the value it stands for.
+type choice struct{ label, value string }
+
+func labels(cs []choice) []string {
+	out := make([]string, len(cs))
+	for i, c := range cs {
+		out[i] = c.label
+	}
+	return out
+}
+
+func valueOf(cs []choice, label string) string {
+	for _, c := range cs {
+		if c.label == label {
+			return c.value
+		}
+	}
+	return ""
+}
+
+func labelOf(cs []choice, value string) string {
+	for _, c := range cs {
+		if c.value == value {
+			return c.label
+		}
+	}
+	if len(cs) > 0 {
+		return cs[0].label
+	}
+	return ""
+}
+
+// heading is a section title in the inputs panel.
+func heading(s string) fyne.CanvasObject {
+	l := widget.NewLabelWithStyle(s, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	l.SizeName = theme.SizeNameSubHeadingText
+	return container.NewVBox(widget.NewSeparator(), l)
+}
+
+// small is a muted wrapping note.
+func small(s string) *widget.Label {
+	l := widget.NewLabel(s)
+	l.Wrapping = fyne.TextWrapWord
+	l.SizeName = theme.SizeNameCaptionText
+	return l
+}
+
+// newField makes the text input of a field spec.
+func (w *Window) newField(id string) *field {
+	spec := specByID(id)
+	f := &field{spec: spec, entry: widget.NewEntry()}
+	f.entry.AlwaysShowValidationError = true
+	// The state holds each field's problem; the entry shows it (and
+	// showFieldErrors sets it again once the state has taken the text).
+	f.entry.Validator = func(string) error {
+		if msg := w.st.FieldError(id); msg != "" {
+			return errors.New(msg)
+		}
+		return nil
+	}
+	if spec.blank != "" {
+		f.entry.SetPlaceHolder(spec.blank)
+	}
+	f.err = widget.NewLabel("")
+	f.err.Wrapping = fyne.TextWrapWord
+	f.err.Importance = widget.DangerImportance
+	f.err.SizeName = theme.SizeNameCaptionText
+	f.err.Hide()
+	f.entry.OnChanged = func(s string) {
+		if w.quiet > 0 {
+			return
+		}
+		out := w.st.SetText(id, s)
+		if id == "length" {
+			w.syncSlider()
+		}
+		if id == "length" || id == "weak-axis length" {
+			w.setEntryQuiet(w.fields["weak-axis length"], w.st.Text("weak-axis length"))
+			w.setEntryQuiet(w.fields["length"], w.st.Text("length"))
+		}
+		w.after(out)
+	}
+	lbl := widget.NewLabel(spec.label)
+	f.box = container.NewVBox(lbl, f.entry, f.err)
+	if w.fields == nil {
+		w.fields = map[string]*field{}
+	}
+	w.fields[id] = f
+	return f
+}
+
+// setEntryQuiet sets an entry's text without treating it as typing; it
+// leaves an entry with the focus alone so typing is not disturbed.
+func (w *Window) setEntryQuiet(f *field, text string) {
+	if f == nil || f.entry.Text == text {
+		return
+	}
+	if c := w.win.Canvas(); c != nil && c.Focused() == f.entry {
+		return
+	}
+	w.quiet++
+	f.entry.SetText(text)
+	w.quiet--
+}
+
+// showFieldErrors puts each field's problem under it.
+func (w *Window) showFieldErrors() {
+	for id, f := range w.fields {
+		msg := w.st.FieldError(id)
+		if msg == "" {
+			f.err.Hide()
+			f.entry.SetValidationError(nil)
+			continue
+		}
+		f.err.SetText(msg)
+		f.err.Show()
+		f.entry.SetValidationError(errors.New(msg))
+	}
+	if msg := w.st.FieldError("materials"); msg != "" {
+		w.matProblem.SetText(msg)
+		w.matProblem.Show()
+	} else {
+		w.matProblem.Hide()
+	}
+	w.opts.showProblems(w)
+}
+
+// change applies a choice made by a widget unless the window is setting it.
+func (w *Window) change(fn func(sc *model.Scheme)) {
+	if w.quiet > 0 {
+		return
+	}
+	w.after(w.st.Update(fn))
+}
+
+// buildInputs makes the inputs panel: column, load, design, materials.
+func (w *Window) buildInputs() fyne.CanvasObject {
+	// Column: ends, K, weak axis. The length itself sits under the chart.
+	w.sketches = map[model.EndCondition]*widgets.EndSketch{}
+	var tiles []fyne.CanvasObject
+	for _, sp := range endSketchSpecs {
+		sp := sp
+		s := widgets.NewEndSketch(sp.bottom, sp.top, sp.title, sp.note, func() {
+			w.change(func(sc *model.Scheme) { sc.Setting.Ends = sp.ends })
+			w.syncSketches()
+		})
+		w.sketches[sp.ends] = s
+		tiles = append(tiles, s)
+	}
+	sketchGrid := container.NewGridWithColumns(3, tiles...)
+	kField := w.newField("K")
+	w.weakCheck = widget.NewCheck("Weak axis braced at a shorter length", func(on bool) {
+		if w.quiet > 0 {
+			return
+		}
+		out := w.st.SetWeakBraced(on)
+		w.syncWeak()
+		w.after(out)
+	})
+	weak := w.newField("weak-axis length")
+	column := container.NewVBox(
+		heading("Column"),
+		widget.NewLabel("End conditions (bottom–top)"),
+		sketchGrid,
+		small("K under each sketch is the ideal value; each material applies its own recommended design K. A typed K overrides both."),
+		kField.box,
+		w.weakCheck,
+		weak.box,
+		small("A weak-axis brace keeps its fraction of the height as the length changes."),
+	)
+
+	// Load.
+	w.loadMode = widget.NewRadioGroup([]string{"Typed axial load", "Load takedown"}, func(s string) {
+		w.change(func(sc *model.Scheme) {
+			if s == "Load takedown" {
+				sc.Load.Mode = model.LoadTakedown
+			} else {
+				sc.Load.Mode = model.LoadDirect
+			}
+		})
+		w.syncLoadMode()
+	})
+	w.loadMode.Horizontal = true
+	w.loadMode.Required = true
+	load := w.newField("load")
+	w.directHint = small("")
+	w.directBox = container.NewVBox(load.box, w.directHint)
+	var td []fyne.CanvasObject
+	for _, id := range []string{"tributary", "floors", "dead", "live", "roof-dead", "roof-live", "snow"} {
+		td = append(td, w.newField(id).box)
+	}
+	w.liveRed = widget.NewCheck("Reduce floor live load (ASCE 7-22 4.7)", func(on bool) {
+		w.change(func(sc *model.Scheme) { sc.Load.LiveReduction = on })
+	})
+	w.kll = widget.NewSelect(labels(kllChoices), func(s string) {
+		w.change(func(sc *model.Scheme) {
+			var v float64
+			fmt.Sscanf(valueOf(kllChoices, s), "%g", &v)
+			sc.Load.KLL = v
+		})
+	})
+	w.occupancy = widget.NewSelect(labels(occChoices), func(s string) {
+		w.change(func(sc *model.Scheme) { sc.Load.Occupancy = valueOf(occChoices, s) })
+	})
+	td = append(td, w.liveRed, widget.NewLabel("Live load element factor KLL"), w.kll, widget.NewLabel("Occupancy"), w.occupancy)
+	w.takedownBox = container.NewVBox(td...)
+	w.selfWeight = widget.NewCheck("Add the column's own weight", func(on bool) {
+		w.change(func(sc *model.Scheme) { sc.SelfWeight = on })
+	})
+	w.loadSummary = widget.NewLabel("")
+	w.loadSummary.Wrapping = fyne.TextWrapWord
+	loadBox := container.NewVBox(heading("Load"), w.loadMode, w.directBox, w.takedownBox, w.selfWeight, w.loadSummary)
+
+	// Design.
+	w.method = widget.NewRadioGroup([]string{"LRFD", "ASD"}, func(s string) {
+		w.change(func(sc *model.Scheme) { sc.Setting.Method = model.Method(strings.ToLower(s)) })
+		w.syncLoadMode()
+	})
+	w.method.Horizontal = true
+	w.method.Required = true
+	w.metric = widget.NewSelect(labels(metricChoices), func(s string) {
+		w.change(func(sc *model.Scheme) { sc.Metric = model.Metric(valueOf(metricChoices, s)) })
+	})
+	w.unitsRadio = widget.NewRadioGroup([]string{"US customary", "SI"}, func(s string) {
+		if w.quiet > 0 {
+			return
+		}
+		out := w.st.Update(func(sc *model.Scheme) {
+			if s == "SI" {
+				sc.Units = model.SI
+			} else {
+				sc.Units = model.US
+			}
+		})
+		w.syncTexts()
+		w.configureSlider()
+		w.after(out)
+	})
+	w.unitsRadio.Horizontal = true
+	w.unitsRadio.Required = true
+	design := container.NewVBox(heading("Design"),
+		container.NewBorder(nil, nil, widget.NewLabel("Method"), nil, w.method),
+		container.NewBorder(nil, nil, widget.NewLabel("Rank by"), nil, w.metric),
+		container.NewBorder(nil, nil, widget.NewLabel("Units"), nil, w.unitsRadio),
+	)
+
+	// Materials.
+	w.matChecks = map[string]*widget.Check{}
+	w.matProblem = widget.NewLabel("")
+	w.matProblem.Importance = widget.DangerImportance
+	w.matProblem.Wrapping = fyne.TextWrapWord
+	w.matProblem.Hide()
+	mats := container.NewVBox(heading("Materials"), w.matProblem)
+	acc := widget.NewAccordion()
+	acc.MultiOpen = true
+	for _, m := range model.Materials() {
+		m := m
+		c := widget.NewCheck(materialTitle(m)+" columns", func(on bool) {
+			if w.quiet > 0 {
+				return
+			}
+			w.after(w.st.SetMaterial(m, on))
+			w.opts.enable(w)
+		})
+		w.matChecks[m] = c
+		mats.Add(c)
+		if panel := w.opts.panel(w, m); panel != nil {
+			acc.Append(widget.NewAccordionItem(materialTitle(m)+" options", panel))
+		}
+	}
+	if len(model.Materials()) == 0 {
+		mats.Add(small("No materials are registered in this build."))
+	}
+	mats.Add(acc)
+	return container.NewVBox(column, loadBox, design, mats, layout.NewSpacer())
+}
+
+// materialTitle capitalises a material name.
+func materialTitle(m string) string {
+	if m == "" {
+		return m
+	}
+	return strings.ToUpper(m[:1]) + m[1:]
+}
+
+// syncInputs sets every input widget from the state.
+func (w *Window) syncInputs() {
+	w.quiet++
+	defer func() { w.quiet-- }()
+	d := &w.st.Draft
+	w.syncTexts()
+	w.syncSketches()
+	w.weakCheck.SetChecked(w.st.WeakBraced)
+	if d.Load.Mode == model.LoadTakedown {
+		w.loadMode.SetSelected("Load takedown")
+	} else {
+		w.loadMode.SetSelected("Typed axial load")
+	}
+	w.liveRed.SetChecked(d.Load.LiveReduction)
+	kll := d.Load.KLL
+	if kll == 0 {
+		kll = model.DefaultKLL
+	}
+	w.kll.SetSelected(labelOf(kllChoices, fmt.Sprintf("%g", kll)))
+	occ := d.Load.Occupancy
+	if occ == "" {
+		occ = model.OccGeneral
+	}
+	w.occupancy.SetSelected(labelOf(occChoices, occ))
+	w.selfWeight.SetChecked(d.SelfWeight)
+	w.method.SetSelected(strings.ToUpper(string(d.Setting.Method)))
+	w.metric.SetSelected(labelOf(metricChoices, string(d.Metric)))
+	if d.Units == model.SI {
+		w.unitsRadio.SetSelected("SI")
+	} else {
+		w.unitsRadio.SetSelected("US customary")
+	}
+	for m, c := range w.matChecks {
+		c.SetChecked(w.st.MaterialOn(m))
+	}
+	w.opts.sync(w)
+	w.syncWeak()
+	w.syncLoadMode()
+	w.configureSlider()
+	w.showFieldErrors()
+}
+
+// syncTexts rewrites every entry from the state's text.
+func (w *Window) syncTexts() {
+	for id, f := range w.fields {
+		w.setEntryQuietForce(f, w.st.Text(id))
+	}
+}
+
+// setEntryQuietForce sets an entry's text without treating it as typing, even with the focus.
+func (w *Window) setEntryQuietForce(f *field, text string) {
+	if f.entry.Text == text {
+		return
+	}
+	w.quiet++
+	f.entry.SetText(text)
+	w.quiet--
+}
+
+func (w *Window) syncSketches() {
+	for e, s := range w.sketches {
+		s.SetSelected(e == w.st.Draft.Setting.Ends)
+	}
+}
+
+func (w *Window) syncWeak() {
+	if w.st.WeakBraced {
+		w.fields["weak-axis length"].entry.Enable()
+	} else {
+		w.fields["weak-axis length"].entry.Disable()
+	}
+}
+
+func (w *Window) syncLoadMode() {
+	if w.st.Draft.Load.Mode == model.LoadTakedown {
+		w.directBox.Hide()
+		w.takedownBox.Show()
+	} else {
+		w.takedownBox.Hide()
+		w.directBox.Show()
+	}
+	if w.st.Draft.Setting.Method == model.ASD {
+		w.directHint.SetText("ASD: give the service load (unfactored); a bare number is taken in the unit shown.")
+	} else {
+		w.directHint.SetText("LRFD: give the factored load; a bare number is taken in the unit shown.")
+	}
+	w.showFieldErrors()
+	w.updateBanner()
+}
+
+// updateLoadSummary says what demand the load gives and where it comes from.
+func (w *Window) updateLoadSummary() {
+	if w.snap == nil || w.snap.Model == nil {
+		w.loadSummary.SetText("")
+		return
+	}
+	m := w.snap.Model
+	sys := unitsOf(m)
+	ls := &m.Loads
+	var b strings.Builder
+	fmt.Fprintf(&b, "Demand %s", fmtForce(ls.DemandN, sys))
+	if ls.Governing >= 0 && ls.Governing < len(ls.Combos) {
+		c := ls.Combos[ls.Governing]
+		fmt.Fprintf(&b, " from %s (%s)", c.Name, c.Clause)
+		if ls.Reduction < 1 {
+			fmt.Fprintf(&b, "; floor live load × %.2f by reduction", ls.Reduction)
+		}
+	} else if m.Scheme.Setting.Method == model.ASD {
+		b.WriteString(", typed service load")
+	} else {
+		b.WriteString(", typed factored load")
+	}
+	if m.Scheme.SelfWeight {
+		b.WriteString(", plus each column's own weight.")
+	} else {
+		b.WriteString(".")
+	}
+	w.loadSummary.SetText(b.String())
+}

@@ -1,0 +1,136 @@
+package ui
+
+import (
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/dialog"
+	"fyne.io/fyne/v2/driver/desktop"
+	"fyne.io/fyne/v2/widget"
+
+	"upright/ui/cli"
+	"upright/ui/model"
+)
+
+// Keyboard shortcuts of the file actions.
+var (
+	shortcutOpen   = &desktop.CustomShortcut{KeyName: fyne.KeyO, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutSave   = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutExport = &desktop.CustomShortcut{KeyName: fyne.KeyE, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutLength = &desktop.CustomShortcut{KeyName: fyne.KeyL, Modifier: fyne.KeyModifierShortcutDefault}
+)
+
+// fileItem makes a file menu item that runs its hook, or says it is not available.
+func fileItem(label string, sc fyne.Shortcut, available bool, run func()) *fyne.MenuItem {
+	it := fyne.NewMenuItem(label, run)
+	it.Shortcut = sc
+	if !available {
+		it.Label = label + " (not available in this build)"
+		it.Disabled = true
+	}
+	return it
+}
+
+// mainMenu builds the File and Help menus.
+func (w *Window) mainMenu() *fyne.MainMenu {
+	file := fyne.NewMenu("File",
+		fileItem("Open scheme…", shortcutOpen, OpenHook != nil, w.Open),
+		fileItem("Save scheme…", shortcutSave, SaveHook != nil, w.Save),
+		fileItem("Export report…", shortcutExport, ExportHook != nil, w.Export),
+		fyne.NewMenuItemSeparator(),
+		fyne.NewMenuItem("Start again from the demo scheme", func() { w.LoadScheme(DemoScheme()) }),
+	)
+	help := fyne.NewMenu("Help",
+		fyne.NewMenuItem("Cautions", w.ShowCautions),
+		fyne.NewMenuItem("Keyboard", w.showKeys),
+		fyne.NewMenuItem("About Upright", w.ShowAbout),
+	)
+	return fyne.NewMainMenu(file, help)
+}
+
+// addShortcuts registers the shortcuts on the canvas too, for drivers without a main menu.
+func (w *Window) addShortcuts() {
+	c := w.win.Canvas()
+	c.AddShortcut(shortcutOpen, func(fyne.Shortcut) { w.Open() })
+	c.AddShortcut(shortcutSave, func(fyne.Shortcut) { w.Save() })
+	c.AddShortcut(shortcutExport, func(fyne.Shortcut) { w.Export() })
+	c.AddShortcut(shortcutLength, func(fyne.Shortcut) { c.Focus(w.slider) })
+}
+
+// notAvailable tells the user a file action is not in this build.
+func (w *Window) notAvailable(what string) {
+	dialog.ShowInformation("Not available", what+" is not available in this build.", w.win)
+}
+
+// Open runs OpenHook, or says it is not available.
+func (w *Window) Open() {
+	if OpenHook == nil {
+		w.notAvailable("Opening scheme files")
+		return
+	}
+	OpenHook(w.win, w.LoadScheme)
+}
+
+// Save runs SaveHook with the last valid scheme, or says it is not available.
+func (w *Window) Save() {
+	if SaveHook == nil {
+		w.notAvailable("Saving scheme files")
+		return
+	}
+	SaveHook(w.win, w.st.Valid)
+}
+
+// Export runs ExportHook with what the window shows, or says it is not available.
+func (w *Window) Export() {
+	if ExportHook == nil {
+		w.notAvailable("Exporting a report")
+		return
+	}
+	ex := Export{Scheme: w.st.Valid, Pinned: append([]string(nil), w.pinned...), Selected: w.selected}
+	if w.snap != nil {
+		ex.Model, ex.Result = w.snap.Model, w.snap.Result
+	}
+	if w.xsGen == w.st.SchemeGen {
+		ex.Crossovers = append([]model.Crossover(nil), w.xsAll...)
+	}
+	ExportHook(w.win, ex)
+}
+
+// LoadScheme replaces the inputs with a scheme (a file opened, the demo).
+func (w *Window) LoadScheme(sc model.Scheme) {
+	out := w.st.Load(sc)
+	w.pinned, w.selected = nil, ""
+	w.syncInputs()
+	w.updateTitle()
+	w.after(out)
+	if out.Submit {
+		w.xsStatus.SetText("Finding crossovers…")
+	}
+}
+
+// ShowCautions shows the full caution text.
+func (w *Window) ShowCautions() {
+	l := widget.NewLabel(model.CautionFull)
+	l.Wrapping = fyne.TextWrapWord
+	s := container.NewVScroll(l)
+	s.SetMinSize(fyne.NewSize(620, 380))
+	dialog.ShowCustom("Cautions", "Close", s, w.win)
+}
+
+// ShowAbout shows the version.
+func (w *Window) ShowAbout() {
+	l := widget.NewLabel("Upright " + cli.Version + "\n\nColumn schemes compared side by side: steel (AISC 360-22), reinforced concrete (ACI 318-19) and timber (NDS 2018), with loads by ASCE 7-22.\n\n" + model.Caution)
+	l.Wrapping = fyne.TextWrapWord
+	box := container.NewGridWrap(fyne.NewSize(460, 200), l)
+	dialog.ShowCustom("About Upright", "Close", box, w.win)
+}
+
+func (w *Window) showKeys() {
+	l := widget.NewLabel("Tab / Shift+Tab   move between inputs\n" +
+		"Ctrl+L   go to the length slider\n" +
+		"← →   move the length by 1 in (25 mm)\n" +
+		"Page Up / Page Down   by 1 ft (250 mm)\n" +
+		"Home / End   to the ends of the range\n" +
+		"Space   choose the focused end condition\n" +
+		"Ctrl+O / Ctrl+S / Ctrl+E   open, save, export")
+	dialog.ShowCustom("Keyboard", "Close", l, w.win)
+}

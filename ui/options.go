@@ -1,0 +1,204 @@
+package ui
+
+import (
+	"fmt"
+	"slices"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/widget"
+
+	"upright/ui/model"
+)
+
+// steelFamilies are the family names model.SteelOptions.Families accepts.
+var steelFamilies = []string{"W", "HP", "HSS square", "HSS rectangular", "HSS round", "Pipe"}
+
+// Choice lists of the material options.
+var (
+	barGradeChoices   = []choice{{"Grade 60 (420 MPa)", "60"}, {"Grade 80 (550 MPa)", "80"}}
+	transverseChoices = []choice{{"Tied and spiral columns", "all"}, {"Tied columns only", "ties"}, {"Spiral columns only", "spiral"}}
+	eiChoices         = []choice{{"Eq. (a): 0.4 Ec Ig / (1 + βdns)", "a"}, {"Eq. (b): (0.2 Ec Ig + Es Ise) / (1 + βdns)", "b"}}
+	speciesChoices    = []choice{{"Douglas fir-larch (DF-L)", "DF-L"}, {"Southern pine (SP)", "SP"}, {"Hem-fir (HF)", "HF"}, {"Spruce-pine-fir (SPF)", "SPF"}}
+	gradeChoices      = []choice{{"Select structural", "SS"}, {"No. 1", "No.1"}, {"No. 2", "No.2"}}
+	fireChoices       = []choice{{"No fire rating", "none"}, {"1 hour", "1h"}, {"1½ hours", "1.5h"}, {"2 hours", "2h"}}
+	sidesChoices      = []choice{{"4 sides exposed", "4"}, {"3 sides exposed", "3"}}
+	durationChoices   = []choice{{"From the loads", ""}, {"Permanent", "permanent"}, {"Ten years (occupancy live)", "ten-years"}, {"Two months (snow)", "two-months"}, {"Seven days (construction)", "seven-days"}, {"Ten minutes (wind, seismic)", "ten-minutes"}}
+)
+
+// materialWidgets are the option inputs of the materials the window knows.
+type materialWidgets struct {
+	steelFam      *widget.CheckGroup
+	steelProblem  *widget.Label
+	barGrade      *widget.Select
+	transverse    *widget.Select
+	eiMethod      *widget.Select
+	betaFromLoads *widget.Check
+	species       *widget.Select
+	grade         *widget.Select
+	sawn, glulam  *widget.Check
+	wet, incised  *widget.Check
+	hot           *widget.Check
+	fire          *widget.Select
+	fireSides     *widget.Select
+	duration      *widget.Select
+	timberProblem *widget.Label
+}
+
+func problemLabel() *widget.Label {
+	l := widget.NewLabel("")
+	l.Importance = widget.DangerImportance
+	l.Wrapping = fyne.TextWrapWord
+	l.Hide()
+	return l
+}
+
+func labelled(name string, o fyne.CanvasObject) fyne.CanvasObject {
+	return container.NewVBox(widget.NewLabel(name), o)
+}
+
+// panel returns the options of one material, or nil for a material without options here.
+func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
+	switch material {
+	case "steel":
+		o.steelFam = widget.NewCheckGroup(steelFamilies, func(sel []string) {
+			w.change(func(sc *model.Scheme) {
+				if len(sel) == len(steelFamilies) {
+					sc.Steel.Families = nil
+					return
+				}
+				fams := []string{}
+				for _, f := range steelFamilies { // keep the catalogue order
+					if slices.Contains(sel, f) {
+						fams = append(fams, f)
+					}
+				}
+				sc.Steel.Families = fams
+			})
+		})
+		o.steelProblem = problemLabel()
+		return container.NewVBox(w.newField("steel Fy").box, widget.NewLabel("Shape families"), o.steelFam, o.steelProblem)
+	case "concrete":
+		o.barGrade = widget.NewSelect(labels(barGradeChoices), func(s string) {
+			w.change(func(sc *model.Scheme) {
+				fmt.Sscanf(valueOf(barGradeChoices, s), "%d", &sc.Concrete.BarGrade)
+			})
+		})
+		o.transverse = widget.NewSelect(labels(transverseChoices), func(s string) {
+			w.change(func(sc *model.Scheme) { sc.Concrete.Transverse = valueOf(transverseChoices, s) })
+		})
+		o.eiMethod = widget.NewSelect(labels(eiChoices), func(s string) {
+			w.change(func(sc *model.Scheme) { sc.Concrete.EIMethod = valueOf(eiChoices, s) })
+		})
+		o.betaFromLoads = widget.NewCheck("βdns from the takedown's dead/live split", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Concrete.BetaFromLoads = on })
+		})
+		return container.NewVBox(
+			w.newField("f'c").box,
+			labelled("Reinforcing bars", o.barGrade),
+			w.newField("rho-max").box,
+			labelled("Transverse reinforcement", o.transverse),
+			w.newField("m1m2").box,
+			small("−1 is single curvature (the severe case); 1 is double curvature."),
+			o.betaFromLoads,
+			w.newField("beta-dns").box,
+			small("The typed βdns is used with a typed load or when the box above is off."),
+			labelled("Effective stiffness (ACI 318-19 6.6.4.4.4)", o.eiMethod),
+		)
+	case "timber":
+		o.species = widget.NewSelect(labels(speciesChoices), func(s string) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Species = valueOf(speciesChoices, s) })
+		})
+		o.grade = widget.NewSelect(labels(gradeChoices), func(s string) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Grade = valueOf(gradeChoices, s) })
+		})
+		o.sawn = widget.NewCheck("Sawn lumber and timbers", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Sawn = on })
+		})
+		o.glulam = widget.NewCheck("Glulam", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Glulam = on })
+		})
+		o.wet = widget.NewCheck("Wet service (CM)", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Wet = on })
+		})
+		o.incised = widget.NewCheck("Incised sawn lumber (Ci)", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Incised = on })
+		})
+		o.hot = widget.NewCheck("Sustained 100–125 °F (Ct)", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Hot = on })
+		})
+		o.fire = widget.NewSelect(labels(fireChoices), func(s string) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Fire = valueOf(fireChoices, s) })
+		})
+		o.fireSides = widget.NewSelect(labels(sidesChoices), func(s string) {
+			w.change(func(sc *model.Scheme) { fmt.Sscanf(valueOf(sidesChoices, s), "%d", &sc.Timber.FireSides) })
+		})
+		o.duration = widget.NewSelect(labels(durationChoices), func(s string) {
+			w.change(func(sc *model.Scheme) { sc.Timber.Duration = valueOf(durationChoices, s) })
+		})
+		o.timberProblem = problemLabel()
+		return container.NewVBox(
+			widget.NewLabel("Products"), o.sawn, o.glulam, o.timberProblem,
+			labelled("Sawn species", o.species),
+			labelled("Sawn grade", o.grade),
+			widget.NewLabel("Conditions"), o.wet, o.incised, o.hot,
+			labelled("Fire resistance", o.fire),
+			o.fireSides,
+			labelled("ASD load duration", o.duration),
+		)
+	}
+	return nil
+}
+
+// sync sets the option widgets from the draft.
+func (o *materialWidgets) sync(w *Window) {
+	d := &w.st.Draft
+	if o.steelFam != nil {
+		if len(d.Steel.Families) == 0 && d.Steel.Families == nil {
+			o.steelFam.SetSelected(append([]string(nil), steelFamilies...))
+		} else {
+			o.steelFam.SetSelected(append([]string(nil), d.Steel.Families...))
+		}
+	}
+	if o.barGrade != nil {
+		c := d.Concrete
+		o.barGrade.SetSelected(labelOf(barGradeChoices, fmt.Sprint(c.BarGrade)))
+		o.transverse.SetSelected(labelOf(transverseChoices, c.Transverse))
+		o.eiMethod.SetSelected(labelOf(eiChoices, c.EIMethod))
+		o.betaFromLoads.SetChecked(c.BetaFromLoads)
+	}
+	if o.species != nil {
+		t := d.Timber
+		o.species.SetSelected(labelOf(speciesChoices, t.Species))
+		o.grade.SetSelected(labelOf(gradeChoices, t.Grade))
+		o.sawn.SetChecked(t.Sawn)
+		o.glulam.SetChecked(t.Glulam)
+		o.wet.SetChecked(t.Wet)
+		o.incised.SetChecked(t.Incised)
+		o.hot.SetChecked(t.Hot)
+		o.fire.SetSelected(labelOf(fireChoices, t.Fire))
+		o.fireSides.SetSelected(labelOf(sidesChoices, fmt.Sprint(t.FireSides)))
+		o.duration.SetSelected(labelOf(durationChoices, t.Duration))
+	}
+}
+
+// enable is called when a material is switched on or off.
+func (o *materialWidgets) enable(w *Window) {}
+
+// showProblems shows the option problems the state found.
+func (o *materialWidgets) showProblems(w *Window) {
+	for _, p := range []struct {
+		l  *widget.Label
+		id string
+	}{{o.steelProblem, "steel families"}, {o.timberProblem, "timber products"}} {
+		if p.l == nil {
+			continue
+		}
+		if msg := w.st.FieldError(p.id); msg != "" {
+			p.l.SetText(msg)
+			p.l.Show()
+		} else {
+			p.l.Hide()
+		}
+	}
+}

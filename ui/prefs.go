@@ -1,0 +1,81 @@
+package ui
+
+import (
+	"encoding/json"
+	"fmt"
+
+	"fyne.io/fyne/v2"
+
+	"upright/ui/model"
+)
+
+// Preference keys.
+const (
+	prefScheme = "scheme.json"   // the last valid scheme, JSON
+	prefWidth  = "window.width"  // window width, device-independent pixels
+	prefHeight = "window.height" // window height
+)
+
+// Default and smallest window sizes.
+var (
+	defaultWindowSize = fyne.NewSize(1480, 920)
+	minWindowSize     = fyne.NewSize(900, 600)
+)
+
+// encodeScheme and decodeScheme store a scheme in the preferences. They use
+// encoding/json on model.Scheme until the scheme file format (ui/schemefile)
+// offers Marshal and Unmarshal.
+var (
+	encodeScheme = func(sc model.Scheme) ([]byte, error) { return json.Marshal(sc) }
+	decodeScheme = func(b []byte) (model.Scheme, error) {
+		sc := model.DefaultScheme()
+		err := json.Unmarshal(b, &sc)
+		return sc, err
+	}
+)
+
+// savedScheme returns the scheme stored by the last run, or the demo scheme
+// when there is none or it no longer validates; the error says why the
+// stored one was not used (nil when there was none).
+func savedScheme(p fyne.Preferences) (model.Scheme, error) {
+	s := p.String(prefScheme)
+	if s == "" {
+		return DemoScheme(), nil
+	}
+	sc, err := decodeScheme([]byte(s))
+	if err != nil {
+		return DemoScheme(), fmt.Errorf("the saved scheme could not be read (%v); opened the demo scheme", err)
+	}
+	if err := sc.Validate(); err != nil {
+		return DemoScheme(), fmt.Errorf("the saved scheme is no longer valid (%v); opened the demo scheme", err)
+	}
+	return sc, nil
+}
+
+// storeScheme writes the scheme to the preferences.
+func storeScheme(p fyne.Preferences, sc model.Scheme) {
+	b, err := encodeScheme(sc)
+	if err != nil {
+		return
+	}
+	p.SetString(prefScheme, string(b))
+}
+
+// savedSize returns the stored window size, or the default.
+func savedSize(p fyne.Preferences) fyne.Size {
+	w := float32(p.FloatWithFallback(prefWidth, float64(defaultWindowSize.Width)))
+	h := float32(p.FloatWithFallback(prefHeight, float64(defaultWindowSize.Height)))
+	if !(w >= minWindowSize.Width && w < 20000) || !(h >= minWindowSize.Height && h < 20000) {
+		return defaultWindowSize
+	}
+	return fyne.NewSize(w, h)
+}
+
+// storeSize writes the window size to the preferences.
+func storeSize(p fyne.Preferences, s fyne.Size) {
+	if s.Width < minWindowSize.Width || s.Height < minWindowSize.Height {
+		return
+	}
+	p.SetFloat(prefWidth, float64(s.Width))
+	p.SetFloat(prefHeight, float64(s.Height))
+}

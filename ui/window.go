@@ -1,0 +1,383 @@
+package ui
+
+import (
+	"fmt"
+	"image"
+	"log"
+	"os"
+	"strings"
+	"sync"
+	"sync/atomic"
+	"time"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/canvas"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/widget"
+
+	"upright/ui/model"
+	"upright/ui/units"
+	"upright/ui/widgets"
+)
+
+// Window is Upright's main window: the inputs, the chart with its length
+// slider and crossovers, the results table and the calculation view. Its
+// fields are touched only on the UI goroutine; the engine reaches it
+// through fyne.Do.
+type Window struct {
+	app fyne.App
+	win fyne.Window
+	st  *State
+	eng *Engine
+
+	reqGen     uint64 // the last request handed to the engine
+	appliedGen uint64 // the last snapshot shown
+	snap       *Snapshot
+	evalErr    error
+	xsAll      []model.Crossover
+	xs         []model.Crossover // the crossovers listed (filtered)
+	xsGen      uint64            // scheme generation xsAll belongs to
+	xsErr      error
+	allSteps   bool // list every size step among the crossovers
+
+	rows     []model.Row
+	sortCol  int
+	sortDesc bool
+	showAll  bool
+	pinned   []string
+	selected string
+	ctx      cellCtx
+
+	do     func(func()) // runs a function on the UI goroutine (fyne.Do)
+	doWait func(func()) // the same, waiting for it (fyne.DoAndWait)
+
+	mailMu     sync.Mutex
+	mailSnap   *Snapshot
+	mailQueued bool
+
+	quiet   int // >0 while the window sets widgets itself: change callbacks ignore it
+	closing atomic.Bool
+	// OnApplied, when set, is called after each snapshot is shown (tests, timing).
+	onApplied func(*Snapshot)
+	started   time.Time
+	submitted [64]time.Time // when each request was made, for UPRIGHT_TRACE
+	firstLog  sync.Once
+
+	// inputs
+	fields      map[string]*field
+	sketches    map[model.EndCondition]*widgets.EndSketch
+	weakCheck   *widget.Check
+	loadMode    *widget.RadioGroup
+	directBox   *fyne.Container
+	takedownBox *fyne.Container
+	directHint  *widget.Label
+	liveRed     *widget.Check
+	kll         *widget.Select
+	occupancy   *widget.Select
+	selfWeight  *widget.Check
+	method      *widget.RadioGroup
+	metric      *widget.Select
+	unitsRadio  *widget.RadioGroup
+	loadSummary *widget.Label
+	matChecks   map[string]*widget.Check
+	matProblem  *widget.Label
+	opts        materialWidgets
+
+	// chart and slider
+	chartRaster *canvas.Raster
+	front       *image.RGBA
+	frame       FrameInfo // where the data area lies in front
+	frames      int       // frames shown
+	markerLine  *canvas.Line
+	markerBox   *canvas.Rectangle
+	markerText  *canvas.Text
+	wantW       int
+	wantH       int
+	slider      *lengthSlider
+	sliderUnit  *widget.Label
+	rangeLabel  *widget.Label
+	xsList      *widget.List
+	xsStatus    *widget.Label
+	xsAllCheck  *widget.Check
+
+	// results
+	table       *liveTable
+	tableSys    units.System // units of the headers shown
+	tableMethod model.Method // method of the headers shown
+	tableNote   *widget.Label
+	showAllChk  *widget.Check
+
+	// calculation view
+	calcTitle *widget.Label
+	calcPlain *widget.Label
+	calcWarn  *widget.Label
+	pinButton *widget.Button
+	clearPins *widget.Button
+	steps     *liveTable
+	stepRows  []model.Step
+	loadSteps *liveTable
+	loadRows  []model.Step
+
+	// frame
+	banner     *fyne.Container
+	bannerText *widget.Label
+	status     *widget.Label
+}
+
+// processStart is when the package was initialised, close to the start of the process.
+var processStart = time.Now()
+
+// traceOn logs the delay of every snapshot when UPRIGHT_TRACE is set.
+var traceOn = os.Getenv("UPRIGHT_TRACE") != ""
+
+// field is one text input with its error line.
+type field struct {
+	spec  *fieldSpec
+	entry *widget.Entry
+	err   *widget.Label
+	box   *fyne.Container
+}
+
+// NewWindow builds the window on app a showing sc; it does not show it.
+func NewWindow(a fyne.App, sc model.Scheme) *Window {
+	return newWindow(a, sc, fyne.Do, fyne.DoAndWait)
+}
+
+// newWindow builds the window with the functions that carry the engine's
+// results onto the UI goroutine (fyne.Do and fyne.DoAndWait, or in tests a
+// lock shared with the test's own actions).
+func newWindow(a fyne.App, sc model.Scheme, do, doWait func(func())) *Window {
+	w := &Window{app: a, st: NewState(sc), sortCol: -1, started: time.Now(), do: do, doWait: doWait}
+	a.Settings().SetTheme(lightTheme{})
+	w.win = a.NewWindow("Upright")
+	w.eng = NewEngine()
+	w.eng.OnSnapshot = w.postSnapshot
+	w.eng.OnCrossovers = func(x *Crossovers) { w.do(func() { w.applyCrossovers(x) }) }
+	w.eng.OnFrame = w.takeFrame
+	w.win.SetContent(w.build())
+	w.win.SetMainMenu(w.mainMenu())
+	w.addShortcuts()
+	w.syncInputs()
+	w.updateTitle()
+	w.updateBanner()
+	w.submit()
+	return w
+}
+
+// Close stops the engine and closes the window.
+func (w *Window) Close() {
+	w.closing.Store(true)
+	w.eng.Close()
+	w.win.Close()
+}
+
+// build assembles the window's content.
+func (w *Window) build() fyne.CanvasObject {
+	inputs := w.buildInputs()
+	chartArea := w.buildChartArea()
+	results := w.buildResults()
+	calc := w.buildCalc()
+
+	w.bannerText = widget.NewLabel("")
+	w.bannerText.Wrapping = fyne.TextWrapWord
+	w.bannerText.Importance = widget.DangerImportance
+	w.bannerText.TextStyle = fyne.TextStyle{Bold: true}
+	bg := canvas.NewRectangle(bannerColor)
+	w.banner = container.NewStack(bg, w.bannerText)
+	w.banner.Hide()
+
+	lower := container.NewHSplit(results, calc)
+	lower.Offset = 0.64
+	mainSplit := container.NewVSplit(chartArea, lower)
+	mainSplit.Offset = 0.56
+	main := container.NewBorder(w.banner, nil, nil, nil, mainSplit)
+
+	side := container.NewVScroll(inputs)
+	side.SetMinSize(fyne.NewSize(330, 200))
+	split := container.NewHSplit(side, main)
+	split.Offset = 0.235
+
+	w.status = widget.NewLabel("")
+	w.status.Truncation = fyne.TextTruncateClip
+	caution := widget.NewLabel("⚠ " + model.Caution + "  (Help ▸ Cautions)")
+	caution.Importance = widget.WarningImportance
+	caution.Truncation = fyne.TextTruncateEllipsis
+	statusBar := container.NewBorder(nil, nil, nil, fixedWidth(380, w.status), caution)
+	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), statusBar), nil, nil, split)
+}
+
+// sys is the display system of the inputs.
+func (w *Window) sys() units.System { return w.st.Sys() }
+
+// submit hands the engine the valid scheme with the view choices.
+func (w *Window) submit() {
+	if !w.st.HaveValid {
+		return
+	}
+	w.reqGen++
+	if traceOn {
+		w.submitted[w.reqGen%uint64(len(w.submitted))] = time.Now()
+	}
+	scale := float32(1)
+	if c := w.win.Canvas(); c != nil {
+		scale = c.Scale()
+	}
+	w.eng.Submit(Request{
+		Gen: w.reqGen, SchemeGen: w.st.SchemeGen, Scheme: w.st.Valid, Range: w.st.Range,
+		Pinned: append([]string(nil), w.pinned...), Selected: w.selected,
+		Width: w.wantW, Height: w.wantH, DPI: chartDPI(scale),
+	})
+}
+
+// after handles the outcome of an input change: fields, banner, slider and engine.
+func (w *Window) after(out Outcome) {
+	w.showFieldErrors()
+	w.updateBanner()
+	if out.Rebuild {
+		w.xsStatus.SetText("Finding crossovers…")
+		w.configureSlider()
+		w.updateTitle()
+	}
+	if out.Submit {
+		w.placeMarker()
+		w.submit()
+	}
+}
+
+// postSnapshot hands a snapshot to the UI goroutine. Snapshots are
+// coalesced: while one is waiting to be shown a newer one replaces it, so
+// the UI goroutine never works through a backlog.
+func (w *Window) postSnapshot(s *Snapshot) {
+	w.mailMu.Lock()
+	w.mailSnap = s
+	queued := w.mailQueued
+	w.mailQueued = true
+	w.mailMu.Unlock()
+	if !queued {
+		w.do(func() {
+			w.mailMu.Lock()
+			s := w.mailSnap
+			w.mailSnap, w.mailQueued = nil, false
+			w.mailMu.Unlock()
+			if s != nil {
+				w.applySnapshot(s)
+			}
+		})
+	}
+}
+
+// applySnapshot shows an evaluated request; stale ones are dropped: older
+// than the one on screen, or of a scheme generation since replaced.
+func (w *Window) applySnapshot(s *Snapshot) {
+	if s.Gen <= w.appliedGen || s.SchemeGen != w.st.SchemeGen {
+		return
+	}
+	w.appliedGen = s.Gen
+	if s.Err != nil {
+		w.evalErr = s.Err
+		w.updateBanner()
+		return
+	}
+	w.evalErr = nil
+	newScheme := w.snap == nil || w.snap.SchemeGen != s.SchemeGen
+	w.snap = s
+	w.refreshRows()
+	w.updateCalc()
+	if newScheme {
+		w.updateLoadSummary()
+		w.updateLoadSteps()
+		storeScheme(w.app.Preferences(), w.st.Valid)
+	}
+	w.updateBanner()
+	n := 0
+	for i := range s.Result.Families {
+		n += len(s.Result.Families[i].Rows)
+	}
+	w.status.SetText(fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
+	w.firstLog.Do(func() {
+		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was built (%d candidates)",
+			float64(time.Since(processStart).Microseconds())/1000, float64(time.Since(w.started).Microseconds())/1000, n)
+	})
+	if traceOn {
+		log.Printf("trace: snapshot %d applied %.1f ms after submit (evaluated in %.1f ms), renders %d", s.Gen,
+			float64(time.Since(w.submitted[s.Gen%uint64(len(w.submitted))]).Microseconds())/1000, float64(s.Took.Microseconds())/1000, w.eng.Renders())
+	}
+	if w.onApplied != nil {
+		w.onApplied(s)
+	}
+}
+
+// applyCrossovers lists the crossovers of the current scheme generation.
+func (w *Window) applyCrossovers(x *Crossovers) {
+	if x.SchemeGen != w.st.SchemeGen {
+		return
+	}
+	w.xsGen, w.xsAll, w.xsErr = x.SchemeGen, x.List, x.Err
+	w.filterCrossovers()
+}
+
+// takeFrame copies a rendered chart into the window's image and shows it.
+// It runs on the engine's renderer goroutine and waits for the UI goroutine,
+// so the engine never draws into pixels the window is reading.
+func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
+	if w.closing.Load() {
+		return
+	}
+	w.doWait(func() {
+		b := img.Bounds()
+		if w.front == nil || w.front.Bounds() != b {
+			w.front = image.NewRGBA(b)
+		}
+		copy(w.front.Pix, img.Pix)
+		w.frame = info
+		w.frames++
+		w.chartRaster.Refresh()
+		w.placeMarker()
+	})
+}
+
+// updateTitle names the scheme in the window title.
+func (w *Window) updateTitle() {
+	name := strings.TrimSpace(w.st.Valid.Name)
+	if name == "" {
+		name = "Untitled scheme"
+	}
+	w.win.SetTitle("Upright — " + name)
+}
+
+// updateBanner shows, while the inputs are invalid, that the result on
+// screen is the last valid one and which fields to fix.
+func (w *Window) updateBanner() {
+	probs := w.st.Problems()
+	var msg string
+	switch {
+	case len(probs) > 0 && w.snap != nil:
+		var names []string
+		for _, p := range probs {
+			names = append(names, p.Label)
+		}
+		msg = "Showing the last valid result: fix " + strings.Join(names, ", ") + ". " + probs[0].Msg
+	case len(probs) > 0:
+		msg = "Nothing to show yet: fix " + probs[0].Label + ". " + probs[0].Msg
+	case w.evalErr != nil && w.snap != nil:
+		msg = "Showing the last valid result: this scheme could not be evaluated: " + w.evalErr.Error()
+	case w.evalErr != nil:
+		msg = "This scheme could not be evaluated: " + w.evalErr.Error()
+	case len(model.Materials()) == 0:
+		msg = "No materials are registered in this build, so there is nothing to compare."
+	}
+	w.bannerText.SetText(msg)
+	if msg == "" {
+		w.banner.Hide()
+	} else {
+		w.banner.Show()
+	}
+}
+
+// BannerText returns the banner's message; empty when hidden.
+func (w *Window) BannerText() string {
+	if !w.banner.Visible() {
+		return ""
+	}
+	return w.bannerText.Text
+}

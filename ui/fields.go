@@ -35,6 +35,7 @@ type fieldSpec struct {
 	q       quantity
 	psi     bool    // a stress shown in psi rather than ksi (f'c)
 	blank   string  // when non-empty, blank text is accepted and means the default; this says what it means
+	hint    string  // placeholder shown in a blank entry
 	blankOK float64 // the value blank text stands for
 	get     func(sc *model.Scheme) float64
 	set     func(sc *model.Scheme, v float64)
@@ -48,7 +49,7 @@ var fieldSpecs = []fieldSpec{
 	{id: "weak-axis length", label: "Weak-axis unbraced length", q: qLength,
 		get: func(sc *model.Scheme) float64 { return sc.Setting.WeakMM },
 		set: func(sc *model.Scheme, v float64) { sc.Setting.WeakMM = v }},
-	{id: "K", label: "Typed K", q: qNumber, blank: "blank uses the end condition's recommended K", blankOK: 0,
+	{id: "K", label: "Typed K", q: qNumber, blank: "blank uses the end condition's recommended K", hint: "recommended", blankOK: 0,
 		get: func(sc *model.Scheme) float64 { return sc.Setting.K },
 		set: func(sc *model.Scheme, v float64) { sc.Setting.K = v }},
 	{id: "load", label: "Axial load", q: qForce,
@@ -75,10 +76,10 @@ var fieldSpecs = []fieldSpec{
 	{id: "snow", label: "Roof snow load S", q: qPressure,
 		get: func(sc *model.Scheme) float64 { return sc.Load.SnowKPa },
 		set: func(sc *model.Scheme, v float64) { sc.Load.SnowKPa = v }},
-	{id: "steel Fy", label: "Steel Fy", q: qStress, blank: "blank keeps each family's own grade",
+	{id: "steel Fy", label: "Steel Fy", q: qStress, blank: "blank keeps each family's own grade", hint: "family grade",
 		get: func(sc *model.Scheme) float64 { return sc.Steel.FyMPa },
 		set: func(sc *model.Scheme, v float64) { sc.Steel.FyMPa = v }},
-	{id: "f'c", label: "Concrete f'c", q: qStress, psi: true, blank: "blank uses 5,000 psi (US) or 35 MPa (SI)",
+	{id: "f'c", label: "Concrete f'c", q: qStress, psi: true, blank: "blank uses 5,000 psi (US) or 35 MPa (SI)", hint: "5,000 psi / 35 MPa",
 		get: func(sc *model.Scheme) float64 { return sc.Concrete.FcMPa },
 		set: func(sc *model.Scheme, v float64) { sc.Concrete.FcMPa = v }},
 	{id: "rho-max", label: "Largest ρg", q: qRatio,

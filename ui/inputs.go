@@ -39,9 +39,9 @@ var endSketchSpecs = []endSketchSpec{
 
 // Choice lists of the select widgets: what the user reads and the model value.
 var (
-	metricChoices = []choice{{"Lightest (weight)", string(model.ByWeight)}, {"Smallest plan footprint", string(model.ByFootprint)}, {"Least embodied carbon", string(model.ByCarbon)}}
-	kllChoices    = []choice{{"4: interior column, or exterior without cantilever slab", "4"}, {"3: edge column with cantilever slab", "3"}, {"2: corner column with cantilever slab", "2"}, {"1: other members", "1"}}
-	occChoices    = []choice{{"General (reducible)", model.OccGeneral}, {"Assembly (not reduced, ASCE 7-22 4.7.5)", model.OccAssembly}, {"Storage / heavy live load (4.7.3)", model.OccStorage}, {"Passenger-vehicle garage (4.7.4)", model.OccGarage}}
+	metricChoices = []choice{{"Weight", string(model.ByWeight)}, {"Plan footprint", string(model.ByFootprint)}, {"Embodied carbon", string(model.ByCarbon)}}
+	kllChoices    = []choice{{"4: interior or exterior", "4"}, {"3: edge, cantilever slab", "3"}, {"2: corner, cantilever slab", "2"}, {"1: other", "1"}}
+	occChoices    = []choice{{"General", model.OccGeneral}, {"Assembly (4.7.5)", model.OccAssembly}, {"Storage (4.7.3)", model.OccStorage}, {"Garage (4.7.4)", model.OccGarage}}
 )
 
 // choice pairs a label with the value it stands for.
@@ -83,7 +83,14 @@ func heading(s string) fyne.CanvasObject {
 	return container.NewVBox(widget.NewSeparator(), l)
 }
 
-// small is a muted wrapping note.
+// row puts a label to the left of an input, as the text fields have it.
+func row(label string, o fyne.CanvasObject) fyne.CanvasObject {
+	l := widget.NewLabel(label)
+	l.Wrapping = fyne.TextWrapWord
+	return container.NewBorder(nil, nil, fixedWidth(labelWidth, l), nil, container.NewVBox(layout.NewSpacer(), o, layout.NewSpacer()))
+}
+
+// small is a wrapping note in small type.
 func small(s string) *widget.Label {
 	l := widget.NewLabel(s)
 	l.Wrapping = fyne.TextWrapWord
@@ -91,21 +98,19 @@ func small(s string) *widget.Label {
 	return l
 }
 
-// newField makes the text input of a field spec.
+// labelWidth is the width of the label column of the inputs panel.
+const labelWidth = 132
+
+// newField makes the text input of a field spec: its label to the left,
+// the entry to the right, and its problem (when there is one) below.
 func (w *Window) newField(id string) *field {
 	spec := specByID(id)
 	f := &field{spec: spec, entry: widget.NewEntry()}
+	// No Validator: the state holds each field's problem and
+	// showFieldErrors marks the entry (red border and icon) with it.
 	f.entry.AlwaysShowValidationError = true
-	// The state holds each field's problem; the entry shows it (and
-	// showFieldErrors sets it again once the state has taken the text).
-	f.entry.Validator = func(string) error {
-		if msg := w.st.FieldError(id); msg != "" {
-			return errors.New(msg)
-		}
-		return nil
-	}
-	if spec.blank != "" {
-		f.entry.SetPlaceHolder(spec.blank)
+	if spec.hint != "" {
+		f.entry.SetPlaceHolder(spec.hint)
 	}
 	f.err = widget.NewLabel("")
 	f.err.Wrapping = fyne.TextWrapWord
@@ -127,7 +132,8 @@ func (w *Window) newField(id string) *field {
 		w.after(out)
 	}
 	lbl := widget.NewLabel(spec.label)
-	f.box = container.NewVBox(lbl, f.entry, f.err)
+	lbl.Wrapping = fyne.TextWrapWord
+	f.box = container.NewVBox(container.NewBorder(nil, nil, fixedWidth(labelWidth, lbl), nil, container.NewVBox(layout.NewSpacer(), f.entry, layout.NewSpacer())), f.err)
 	if w.fields == nil {
 		w.fields = map[string]*field{}
 	}
@@ -248,7 +254,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 	w.occupancy = widget.NewSelect(labels(occChoices), func(s string) {
 		w.change(func(sc *model.Scheme) { sc.Load.Occupancy = valueOf(occChoices, s) })
 	})
-	td = append(td, w.liveRed, widget.NewLabel("Live load element factor KLL"), w.kll, widget.NewLabel("Occupancy"), w.occupancy)
+	td = append(td, w.liveRed, row("KLL", w.kll), row("Occupancy", w.occupancy))
 	w.takedownBox = container.NewVBox(td...)
 	w.selfWeight = widget.NewCheck("Add the column's own weight", func(on bool) {
 		w.change(func(sc *model.Scheme) { sc.SelfWeight = on })
@@ -267,7 +273,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 	w.metric = widget.NewSelect(labels(metricChoices), func(s string) {
 		w.change(func(sc *model.Scheme) { sc.Metric = model.Metric(valueOf(metricChoices, s)) })
 	})
-	w.unitsRadio = widget.NewRadioGroup([]string{"US customary", "SI"}, func(s string) {
+	w.unitsRadio = widget.NewRadioGroup([]string{"US", "SI"}, func(s string) {
 		if w.quiet > 0 {
 			return
 		}
@@ -285,9 +291,9 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 	w.unitsRadio.Horizontal = true
 	w.unitsRadio.Required = true
 	design := container.NewVBox(heading("Design"),
-		container.NewBorder(nil, nil, widget.NewLabel("Method"), nil, w.method),
-		container.NewBorder(nil, nil, widget.NewLabel("Rank by"), nil, w.metric),
-		container.NewBorder(nil, nil, widget.NewLabel("Units"), nil, w.unitsRadio),
+		row("Method", w.method),
+		row("Rank by", w.metric),
+		row("Units", w.unitsRadio),
 	)
 
 	// Materials.
@@ -359,7 +365,7 @@ func (w *Window) syncInputs() {
 	if d.Units == model.SI {
 		w.unitsRadio.SetSelected("SI")
 	} else {
-		w.unitsRadio.SetSelected("US customary")
+		w.unitsRadio.SetSelected("US")
 	}
 	for m, c := range w.matChecks {
 		c.SetChecked(w.st.MaterialOn(m))

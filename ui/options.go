@@ -8,23 +8,36 @@ import (
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/widget"
 
+	"upright/timber"
 	"upright/ui/model"
 )
 
 // steelFamilies are the family names model.SteelOptions.Families accepts.
-var steelFamilies = []string{"W", "HP", "HSS square", "HSS rectangular", "HSS round", "Pipe"}
+var steelFamilies = model.SteelFamilies
 
 // Choice lists of the material options.
 var (
-	barGradeChoices   = []choice{{"Grade 60 (420 MPa)", "60"}, {"Grade 80 (550 MPa)", "80"}}
-	transverseChoices = []choice{{"Tied and spiral columns", "all"}, {"Tied columns only", "ties"}, {"Spiral columns only", "spiral"}}
-	eiChoices         = []choice{{"Eq. (a): 0.4 Ec Ig / (1 + βdns)", "a"}, {"Eq. (b): (0.2 Ec Ig + Es Ise) / (1 + βdns)", "b"}}
-	speciesChoices    = []choice{{"Douglas fir-larch (DF-L)", "DF-L"}, {"Southern pine (SP)", "SP"}, {"Hem-fir (HF)", "HF"}, {"Spruce-pine-fir (SPF)", "SPF"}}
-	gradeChoices      = []choice{{"Select structural", "SS"}, {"No. 1", "No.1"}, {"No. 2", "No.2"}}
-	fireChoices       = []choice{{"No fire rating", "none"}, {"1 hour", "1h"}, {"1½ hours", "1.5h"}, {"2 hours", "2h"}}
+	barGradeChoices   = []choice{{"Grade 60", "60"}, {"Grade 80", "80"}}
+	transverseChoices = []choice{{"Tied and spiral", "all"}, {"Tied only", "ties"}, {"Spiral only", "spiral"}}
+	eiChoices         = []choice{{"(a) 0.4 Ec Ig", "a"}, {"(b) 0.2 Ec Ig + Es Ise", "b"}}
+	speciesChoices    = named(timber.SawnSpecies(), map[string]string{"DF-L": "Douglas fir-larch", "SP": "Southern pine", "HF": "Hem-fir", "SPF": "Spruce-pine-fir"})
+	gradeChoices      = named(timber.SawnGrades(), map[string]string{"SS": "Select structural", "No.1": "No. 1", "No.2": "No. 2"})
+	fireChoices       = []choice{{"None", "none"}, {"1 hour", "1h"}, {"1½ hours", "1.5h"}, {"2 hours", "2h"}}
 	sidesChoices      = []choice{{"4 sides exposed", "4"}, {"3 sides exposed", "3"}}
-	durationChoices   = []choice{{"From the loads", ""}, {"Permanent", "permanent"}, {"Ten years (occupancy live)", "ten-years"}, {"Two months (snow)", "two-months"}, {"Seven days (construction)", "seven-days"}, {"Ten minutes (wind, seismic)", "ten-minutes"}}
+	durationChoices   = []choice{{"From the loads", ""}, {"Permanent", "permanent"}, {"Ten years", "ten-years"}, {"Two months", "two-months"}, {"Seven days", "seven-days"}, {"Ten minutes", "ten-minutes"}}
 )
+
+// named pairs each value with its name, or the value itself when it has none.
+func named(values []string, names map[string]string) []choice {
+	out := make([]choice, len(values))
+	for i, v := range values {
+		out[i] = choice{v, v}
+		if n, ok := names[v]; ok {
+			out[i].label = n
+		}
+	}
+	return out
+}
 
 // materialWidgets are the option inputs of the materials the window knows.
 type materialWidgets struct {
@@ -34,9 +47,11 @@ type materialWidgets struct {
 	transverse    *widget.Select
 	eiMethod      *widget.Select
 	betaFromLoads *widget.Check
+	cap14         *widget.Check
 	species       *widget.Select
 	grade         *widget.Select
 	sawn, glulam  *widget.Check
+	combos        *widget.CheckGroup
 	wet, incised  *widget.Check
 	hot           *widget.Check
 	fire          *widget.Select
@@ -53,9 +68,7 @@ func problemLabel() *widget.Label {
 	return l
 }
 
-func labelled(name string, o fyne.CanvasObject) fyne.CanvasObject {
-	return container.NewVBox(widget.NewLabel(name), o)
-}
+func labelled(name string, o fyne.CanvasObject) fyne.CanvasObject { return row(name, o) }
 
 // panel returns the options of one material, or nil for a material without options here.
 func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
@@ -93,6 +106,9 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		o.betaFromLoads = widget.NewCheck("βdns from the takedown's dead/live split", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.BetaFromLoads = on })
 		})
+		o.cap14 = widget.NewCheck("Hold the moment magnifier to 1.4 (ACI 318-19 6.2.5.3)", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Concrete.SecondOrderCap = on })
+		})
 		return container.NewVBox(
 			w.newField("f'c").box,
 			labelled("Reinforcing bars", o.barGrade),
@@ -103,7 +119,8 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			o.betaFromLoads,
 			w.newField("beta-dns").box,
 			small("The typed βdns is used with a typed load or when the box above is off."),
-			labelled("Effective stiffness (ACI 318-19 6.6.4.4.4)", o.eiMethod),
+			labelled("(EI)eff, ACI 318-19 6.6.4.4.4", o.eiMethod),
+			o.cap14,
 		)
 	case "timber":
 		o.species = widget.NewSelect(labels(speciesChoices), func(s string) {
@@ -117,6 +134,22 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		})
 		o.glulam = widget.NewCheck("Glulam", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Timber.Glulam = on })
+		})
+		all := timber.GlulamCombinations(0)
+		o.combos = widget.NewCheckGroup(all, func(sel []string) {
+			w.change(func(sc *model.Scheme) {
+				if len(sel) == len(all) {
+					sc.Timber.GlulamCombos = nil
+					return
+				}
+				cs := []string{}
+				for _, c := range all { // keep the table order
+					if slices.Contains(sel, c) {
+						cs = append(cs, c)
+					}
+				}
+				sc.Timber.GlulamCombos = cs
+			})
 		})
 		o.wet = widget.NewCheck("Wet service (CM)", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Timber.Wet = on })
@@ -138,12 +171,13 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		})
 		o.timberProblem = problemLabel()
 		return container.NewVBox(
-			widget.NewLabel("Products"), o.sawn, o.glulam, o.timberProblem,
+			widget.NewLabel("Products"), o.sawn, o.glulam,
+			widget.NewLabel("Glulam combinations"), o.combos, o.timberProblem,
 			labelled("Sawn species", o.species),
 			labelled("Sawn grade", o.grade),
 			widget.NewLabel("Conditions"), o.wet, o.incised, o.hot,
 			labelled("Fire resistance", o.fire),
-			o.fireSides,
+			labelled("Exposure", o.fireSides),
 			labelled("ASD load duration", o.duration),
 		)
 	}
@@ -166,6 +200,7 @@ func (o *materialWidgets) sync(w *Window) {
 		o.transverse.SetSelected(labelOf(transverseChoices, c.Transverse))
 		o.eiMethod.SetSelected(labelOf(eiChoices, c.EIMethod))
 		o.betaFromLoads.SetChecked(c.BetaFromLoads)
+		o.cap14.SetChecked(c.SecondOrderCap)
 	}
 	if o.species != nil {
 		t := d.Timber
@@ -173,6 +208,11 @@ func (o *materialWidgets) sync(w *Window) {
 		o.grade.SetSelected(labelOf(gradeChoices, t.Grade))
 		o.sawn.SetChecked(t.Sawn)
 		o.glulam.SetChecked(t.Glulam)
+		if t.GlulamCombos == nil {
+			o.combos.SetSelected(append([]string(nil), o.combos.Options...))
+		} else {
+			o.combos.SetSelected(append([]string(nil), t.GlulamCombos...))
+		}
 		o.wet.SetChecked(t.Wet)
 		o.incised.SetChecked(t.Incised)
 		o.hot.SetChecked(t.Hot)

@@ -1,12 +1,12 @@
 package ui
 
 import (
-	"encoding/json"
 	"fmt"
 
 	"fyne.io/fyne/v2"
 
 	"upright/ui/model"
+	"upright/ui/schemefile"
 )
 
 // Preference keys.
@@ -22,16 +22,11 @@ var (
 	minWindowSize     = fyne.NewSize(900, 600)
 )
 
-// encodeScheme and decodeScheme store a scheme in the preferences. They use
-// encoding/json on model.Scheme until the scheme file format (ui/schemefile)
-// offers Marshal and Unmarshal.
+// encodeScheme and decodeScheme store a scheme in the preferences, in the
+// scheme file format.
 var (
-	encodeScheme = func(sc model.Scheme) ([]byte, error) { return json.Marshal(sc) }
-	decodeScheme = func(b []byte) (model.Scheme, error) {
-		sc := model.DefaultScheme()
-		err := json.Unmarshal(b, &sc)
-		return sc, err
-	}
+	encodeScheme = schemefile.Marshal
+	decodeScheme = schemefile.Unmarshal
 )
 
 // savedScheme returns the scheme stored by the last run, or the demo scheme

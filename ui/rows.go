@@ -125,7 +125,7 @@ func planArea(mm2 float64, sys units.System) float64 {
 
 // columns are the results table's columns in order.
 var columns = []column{
-	{id: "status", width: 130,
+	{id: "status", width: 105,
 		title: func(units.System, model.Method) string { return "Status" },
 		cell:  func(_ *cellCtx, r *model.Row) string { return status(r) },
 		key: func(_ *cellCtx, r *model.Row) sortKey {
@@ -138,11 +138,11 @@ var columns = []column{
 			}
 			return n(v)
 		}},
-	{id: "family", width: 170,
+	{id: "family", width: 165,
 		title: func(units.System, model.Method) string { return "Family" },
 		cell:  familyText,
 		key:   func(c *cellCtx, r *model.Row) sortKey { return text(familyText(c, r)) }},
-	{id: "size", width: 190,
+	{id: "size", width: 175,
 		title: func(units.System, model.Method) string { return "Size" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			if c.pinned[r.Static.Designation] {
@@ -151,7 +151,7 @@ var columns = []column{
 			return r.Static.Designation
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return text(r.Static.Designation) }},
-	{id: "util", width: 90, right: true,
+	{id: "util", width: 85, right: true,
 		title: func(units.System, model.Method) string { return "Utilization" },
 		cell:  func(_ *cellCtx, r *model.Row) string { return num(r.Util, 2) },
 		key: func(_ *cellCtx, r *model.Row) sortKey {
@@ -160,7 +160,7 @@ var columns = []column{
 			}
 			return n(r.Util)
 		}},
-	{id: "capacity", width: 110, right: true,
+	{id: "capacity", width: 90, right: true,
 		title: func(s units.System, m model.Method) string {
 			sym := "φPn"
 			if m == model.ASD {
@@ -175,21 +175,21 @@ var columns = []column{
 			return num(force(r.CapacityN, c.sys), 0)
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return n(r.CapacityN) }},
-	{id: "demand", width: 110, right: true,
+	{id: "demand", width: 90, right: true,
 		title: func(s units.System, _ model.Method) string { return "Demand (" + unitOf(s, "kip", "kN") + ")" },
 		cell:  func(c *cellCtx, r *model.Row) string { return num(force(r.DemandN, c.sys), 0) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.DemandN) }},
-	{id: "weight", width: 110, right: true,
+	{id: "weight", width: 95, right: true,
 		title: func(s units.System, _ model.Method) string { return "Weight (" + unitOf(s, "lb/ft", "kg/m") + ")" },
 		cell:  func(c *cellCtx, r *model.Row) string { return num(massPerM(r.Static.MassKgPerM, c.sys), 1) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.Static.MassKgPerM) }},
-	{id: "column-weight", width: 120, right: true,
+	{id: "column-weight", width: 110, right: true,
 		title: func(s units.System, _ model.Method) string { return "Column weight (" + unitOf(s, "lb", "kg") + ")" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			return num(mass(r.Static.MassKgPerM*c.length/1000, c.sys), 0)
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return n(r.Static.MassKgPerM) }},
-	{id: "plan", width: 120,
+	{id: "plan", width: 110,
 		title: func(s units.System, _ model.Method) string { return "Plan (" + unitOf(s, "in", "mm") + ")" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			return units.Dim(r.Static.FootprintMM[0], c.sys) + " × " + units.Dim(r.Static.FootprintMM[1], c.sys)
@@ -197,7 +197,7 @@ var columns = []column{
 		key: func(_ *cellCtx, r *model.Row) sortKey {
 			return n(math.Max(r.Static.FootprintMM[0], r.Static.FootprintMM[1]))
 		}},
-	{id: "area", width: 100, right: true,
+	{id: "area", width: 95, right: true,
 		title: func(s units.System, _ model.Method) string { return "Plan area (" + unitOf(s, "in²", "m²") + ")" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			if c.sys == units.SI {
@@ -206,11 +206,11 @@ var columns = []column{
 			return num(planArea(r.Static.PlanAreaMM2, c.sys), 0)
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return n(r.Static.PlanAreaMM2) }},
-	{id: "carbon", width: 110, right: true,
+	{id: "carbon", width: 95, right: true,
 		title: func(units.System, model.Method) string { return "Carbon (kg CO₂e)" },
 		cell:  func(_ *cellCtx, r *model.Row) string { return num(r.CarbonKg, 0) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.CarbonKg) }},
-	{id: "governs", width: 230,
+	{id: "governs", width: 220,
 		title: func(units.System, model.Method) string { return "Governed by" },
 		cell: func(_ *cellCtx, r *model.Row) string {
 			if !r.Permitted && r.Reason != "" {
@@ -219,7 +219,7 @@ var columns = []column{
 			return r.Governing
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return text(r.Governing) }},
-	{id: "slenderness", width: 100, right: true,
+	{id: "slenderness", width: 90, right: true,
 		title: func(units.System, model.Method) string { return "Slenderness" },
 		cell:  func(_ *cellCtx, r *model.Row) string { return num(r.Slenderness, 1) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.Slenderness) }},

@@ -251,6 +251,10 @@ func (s *State) revalidate(forceRebuild bool) Outcome {
 		s.check = &Problem{Field: "timber products", Label: "Timber products", Msg: "neither sawn timber nor glulam is chosen; choose one or both, or switch timber off"}
 		return Outcome{}
 	}
+	if s.registeredOn("timber") && s.Draft.Timber.Glulam && s.Draft.Timber.GlulamCombos != nil && len(s.Draft.Timber.GlulamCombos) == 0 {
+		s.check = &Problem{Field: "timber products", Label: "Glulam combinations", Msg: "no glulam combination is chosen; choose at least one, or switch glulam off"}
+		return Outcome{}
+	}
 	d := s.Draft
 	if !s.WeakBraced {
 		d.Setting.WeakMM = d.Setting.LengthMM

@@ -187,7 +187,7 @@ func (w *Window) build() fyne.CanvasObject {
 	w.banner.Hide()
 
 	lower := container.NewHSplit(results, calc)
-	lower.Offset = 0.64
+	lower.Offset = 0.6
 	mainSplit := container.NewVSplit(chartArea, lower)
 	mainSplit.Offset = 0.56
 	main := container.NewBorder(w.banner, nil, nil, nil, mainSplit)

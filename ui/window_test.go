@@ -197,7 +197,6 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 			for _, s := range c.says {
 				assert.Contains(t, f.err.Text, s, "%s %q", c.field, c.typed)
 			}
-			assert.Error(t, f.entry.Validate() /* the entry is marked invalid too */, "%s", c.field)
 			b := h.w.BannerText()
 			assert.Contains(t, b, "Showing the last valid result: fix "+c.label, "%s %q", c.field, c.typed)
 			// The result on screen is the last valid one.
@@ -324,7 +323,7 @@ func TestUnitSwitchConvertsEveryShownValue(t *testing.T) {
 		assert.False(t, usTokens.MatchString(s), "SI display still shows a US value: %q", s)
 	}
 	// And back again, with the inputs unchanged.
-	h.ui(func() { h.w.unitsRadio.SetSelected("US customary") })
+	h.ui(func() { h.w.unitsRadio.SetSelected("US") })
 	h.settle()
 	assert.Equal(t, usCap, h.cell(0, "capacity"))
 	h.ui(func() { assert.Equal(t, `18'-0.0"`, h.w.fields["length"].entry.Text) })

@@ -67,8 +67,9 @@ func fromDisplay(v float64, sys units.System) float64 {
 	return v * units.MMPerFoot
 }
 
-// buildChartArea makes the chart, the slider with its entry, and the crossovers list.
-func (w *Window) buildChartArea() fyne.CanvasObject {
+// buildChartArea makes the chart with the slider and its entry beneath, and
+// (second) the crossovers panel.
+func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 	w.chartRaster = canvas.NewRaster(func(pw, ph int) image.Image {
 		if pw != w.wantW || ph != w.wantH {
 			w.wantW, w.wantH = pw, ph
@@ -148,8 +149,7 @@ func (w *Window) buildChartArea() fyne.CanvasObject {
 		widget.NewLabelWithStyle("Crossovers", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
 		w.xsStatus, w.xsAllCheck)
 	xsPanel := container.NewBorder(xsHead, nil, nil, nil, w.xsList)
-	chartAndList := container.NewBorder(nil, nil, nil, fixedWidth(290, xsPanel), chartStack)
-	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, chartAndList)
+	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, chartStack), xsPanel
 }
 
 // markerInk is the colour of the current-length marker.

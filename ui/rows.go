@@ -138,11 +138,11 @@ var columns = []column{
 			}
 			return n(v)
 		}},
-	{id: "family", width: 165,
+	{id: "family", width: 160,
 		title: func(units.System, model.Method) string { return "Family" },
 		cell:  familyText,
 		key:   func(c *cellCtx, r *model.Row) sortKey { return text(familyText(c, r)) }},
-	{id: "size", width: 175,
+	{id: "size", width: 170,
 		title: func(units.System, model.Method) string { return "Size" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			if c.pinned[r.Static.Designation] {
@@ -160,7 +160,7 @@ var columns = []column{
 			}
 			return n(r.Util)
 		}},
-	{id: "capacity", width: 90, right: true,
+	{id: "capacity", width: 95, right: true,
 		title: func(s units.System, m model.Method) string {
 			sym := "φPn"
 			if m == model.ASD {
@@ -175,15 +175,15 @@ var columns = []column{
 			return num(force(r.CapacityN, c.sys), 0)
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return n(r.CapacityN) }},
-	{id: "demand", width: 90, right: true,
+	{id: "demand", width: 110, right: true,
 		title: func(s units.System, _ model.Method) string { return "Demand (" + unitOf(s, "kip", "kN") + ")" },
 		cell:  func(c *cellCtx, r *model.Row) string { return num(force(r.DemandN, c.sys), 0) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.DemandN) }},
-	{id: "weight", width: 95, right: true,
+	{id: "weight", width: 110, right: true,
 		title: func(s units.System, _ model.Method) string { return "Weight (" + unitOf(s, "lb/ft", "kg/m") + ")" },
 		cell:  func(c *cellCtx, r *model.Row) string { return num(massPerM(r.Static.MassKgPerM, c.sys), 1) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.Static.MassKgPerM) }},
-	{id: "column-weight", width: 110, right: true,
+	{id: "column-weight", width: 135, right: true,
 		title: func(s units.System, _ model.Method) string { return "Column weight (" + unitOf(s, "lb", "kg") + ")" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			return num(mass(r.Static.MassKgPerM*c.length/1000, c.sys), 0)
@@ -197,7 +197,7 @@ var columns = []column{
 		key: func(_ *cellCtx, r *model.Row) sortKey {
 			return n(math.Max(r.Static.FootprintMM[0], r.Static.FootprintMM[1]))
 		}},
-	{id: "area", width: 95, right: true,
+	{id: "area", width: 120, right: true,
 		title: func(s units.System, _ model.Method) string { return "Plan area (" + unitOf(s, "in²", "m²") + ")" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			if c.sys == units.SI {
@@ -206,7 +206,7 @@ var columns = []column{
 			return num(planArea(r.Static.PlanAreaMM2, c.sys), 0)
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return n(r.Static.PlanAreaMM2) }},
-	{id: "carbon", width: 95, right: true,
+	{id: "carbon", width: 130, right: true,
 		title: func(units.System, model.Method) string { return "Carbon (kg CO₂e)" },
 		cell:  func(_ *cellCtx, r *model.Row) string { return num(r.CarbonKg, 0) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.CarbonKg) }},
@@ -219,7 +219,7 @@ var columns = []column{
 			return r.Governing
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return text(r.Governing) }},
-	{id: "slenderness", width: 90, right: true,
+	{id: "slenderness", width: 105, right: true,
 		title: func(units.System, model.Method) string { return "Slenderness" },
 		cell:  func(_ *cellCtx, r *model.Row) string { return num(r.Slenderness, 1) },
 		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.Slenderness) }},

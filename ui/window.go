@@ -174,7 +174,7 @@ func (w *Window) Close() {
 // build assembles the window's content.
 func (w *Window) build() fyne.CanvasObject {
 	inputs := w.buildInputs()
-	chartArea := w.buildChartArea()
+	chartArea, xsPanel := w.buildChartArea()
 	results := w.buildResults()
 	calc := w.buildCalc()
 
@@ -186,10 +186,14 @@ func (w *Window) build() fyne.CanvasObject {
 	w.banner = container.NewStack(bg, w.bannerText)
 	w.banner.Hide()
 
-	lower := container.NewHSplit(results, calc)
-	lower.Offset = 0.6
-	mainSplit := container.NewVSplit(chartArea, lower)
-	mainSplit.Offset = 0.56
+	// Centre: the chart over the results; right: the crossovers over the
+	// calculation of the row chosen.
+	centre := container.NewVSplit(chartArea, results)
+	centre.Offset = 0.56
+	right := container.NewVSplit(xsPanel, calc)
+	right.Offset = 0.36
+	mainSplit := container.NewHSplit(centre, right)
+	mainSplit.Offset = 0.71
 	main := container.NewBorder(w.banner, nil, nil, nil, mainSplit)
 
 	side := container.NewVScroll(inputs)
@@ -295,7 +299,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	}
 	w.status.SetText(fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
 	w.firstLog.Do(func() {
-		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was built (%d candidates)",
+		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was created (%d candidates)",
 			float64(time.Since(processStart).Microseconds())/1000, float64(time.Since(w.started).Microseconds())/1000, n)
 	})
 	if traceOn {
@@ -331,6 +335,9 @@ func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
 		copy(w.front.Pix, img.Pix)
 		w.frame = info
 		w.frames++
+		if w.frames == 1 {
+			log.Printf("upright: first chart shown %.0f ms after the process started", float64(time.Since(processStart).Microseconds())/1000)
+		}
 		w.chartRaster.Refresh()
 		w.placeMarker()
 	})

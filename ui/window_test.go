@@ -13,6 +13,7 @@ import (
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
 
+	"upright/ui/cli"
 	"upright/ui/model"
 	"upright/ui/units"
 )
@@ -618,4 +619,74 @@ func TestViewRangeSteps(t *testing.T) {
 		assert.Equal(t, c.to, r.ToMM, "%g mm", c.mm)
 		assert.LessOrEqual(t, r.FromMM, c.mm)
 	}
+}
+
+func TestOpenHookLoadsTheScheme(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	other := DemoScheme()
+	other.Name = "Tannery Yard studios, gallery column"
+	other.Units = model.SI
+	other.Setting = other.Setting.AtLength(4200)
+	OpenHook = func(_ fyne.Window, load func(model.Scheme)) { load(other) }
+	defer func() { OpenHook = nil }()
+	h.ui(func() { h.w.Open() })
+	h.settle()
+	h.ui(func() {
+		assert.Equal(t, "Upright — "+other.Name, h.w.win.Title())
+		assert.Equal(t, "4.2 m", h.w.fields["length"].entry.Text)
+		assert.Equal(t, "SI", h.w.unitsRadio.Selected)
+		assert.InDelta(t, 4200, h.w.snap.Result.Setting.LengthMM, 1e-9)
+	})
+}
+
+func TestCautionsAndAbout(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	h.ui(func() {
+		c := h.w.win.Canvas()
+		assert.Contains(t, test.RenderObjectToMarkup(c.Content()), model.Caution, "the short caution is always on screen")
+		h.w.ShowCautions()
+		assert.Contains(t, test.RenderObjectToMarkup(c.Overlays().Top()), "licensed structural engineer")
+		c.Overlays().Remove(c.Overlays().Top())
+		h.w.ShowAbout()
+		assert.Contains(t, test.RenderObjectToMarkup(c.Overlays().Top()), "Upright "+cli.Version)
+		c.Overlays().Remove(c.Overlays().Top())
+	})
+}
+
+func TestTabOrderRunsDownTheInputsThenToTheSlider(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	h.ui(func() {
+		c := h.w.win.Canvas()
+		var order []fyne.Focusable
+		seen := map[fyne.Focusable]bool{}
+		for i := 0; i < 400; i++ {
+			test.FocusNext(c)
+			f := c.Focused()
+			if f == nil || seen[f] {
+				break
+			}
+			seen[f] = true
+			order = append(order, f)
+		}
+		index := func(o fyne.Focusable) int {
+			for i, f := range order {
+				if f == o {
+					return i
+				}
+			}
+			return -1
+		}
+		first := index(h.w.sketches[model.FixedFixed])
+		k := index(h.w.fields["K"].entry)
+		slider := index(h.w.slider)
+		length := index(h.w.fields["length"].entry)
+		table := index(h.w.table)
+		require.True(t, first >= 0 && k >= 0 && slider >= 0 && length >= 0, "all reachable by Tab: %d %d %d %d", first, k, slider, length)
+		assert.Less(t, first, k, "the end conditions come before K")
+		assert.Less(t, k, slider, "the inputs come before the slider")
+		assert.Equal(t, slider+1, length, "the length entry follows the slider")
+		if table >= 0 {
+			assert.Less(t, length, table)
+		}
+	})
 }

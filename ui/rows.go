@@ -138,11 +138,11 @@ var columns = []column{
 			}
 			return n(v)
 		}},
-	{id: "family", width: 160,
+	{id: "family", width: 185,
 		title: func(units.System, model.Method) string { return "Family" },
 		cell:  familyText,
 		key:   func(c *cellCtx, r *model.Row) sortKey { return text(familyText(c, r)) }},
-	{id: "size", width: 170,
+	{id: "size", width: 180,
 		title: func(units.System, model.Method) string { return "Size" },
 		cell: func(c *cellCtx, r *model.Row) string {
 			if c.pinned[r.Static.Designation] {
@@ -151,7 +151,7 @@ var columns = []column{
 			return r.Static.Designation
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return text(r.Static.Designation) }},
-	{id: "util", width: 85, right: true,
+	{id: "util", width: 90, right: true,
 		title: func(units.System, model.Method) string { return "Utilization" },
 		cell:  func(_ *cellCtx, r *model.Row) string { return num(r.Util, 2) },
 		key: func(_ *cellCtx, r *model.Row) sortKey {

@@ -101,11 +101,6 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		}
 		w.moveTo(fromDisplay(v, w.sys()), false)
 	}
-	w.slider.OnChangeEnded = func(float64) {
-		if w.st.HaveValid {
-			storeScheme(w.app.Preferences(), w.st.Valid)
-		}
-	}
 	length := w.newField("length")
 	length.entry.SetPlaceHolder("e.g. 14'-6\" or 4.4 m")
 	w.sliderUnit = widget.NewLabelWithStyle("Unbraced length", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})

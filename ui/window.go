@@ -55,8 +55,9 @@ type Window struct {
 	mailSnap   *Snapshot
 	mailQueued bool
 
-	quiet   int // >0 while the window sets widgets itself: change callbacks ignore it
-	closing atomic.Bool
+	quiet      int // >0 while the window sets widgets itself: change callbacks ignore it
+	closing    atomic.Bool
+	storeTimer *time.Timer
 	// OnApplied, when set, is called after each snapshot is shown (tests, timing).
 	onApplied func(*Snapshot)
 	started   time.Time
@@ -245,7 +246,30 @@ func (w *Window) after(out Outcome) {
 	if out.Submit {
 		w.placeMarker()
 		w.submit()
+		w.scheduleStore()
 	}
+}
+
+// storeDelay is how long the inputs must rest before they are stored in
+// the preferences: a drag stores once, when it stops.
+const storeDelay = 800 * time.Millisecond
+
+// scheduleStore stores the valid scheme in the preferences once the inputs
+// have rested for storeDelay.
+func (w *Window) scheduleStore() {
+	if w.storeTimer != nil {
+		w.storeTimer.Stop()
+	}
+	w.storeTimer = time.AfterFunc(storeDelay, func() {
+		if w.closing.Load() {
+			return
+		}
+		w.do(func() {
+			if w.st.HaveValid {
+				storeScheme(w.app.Preferences(), w.st.Valid)
+			}
+		})
+	})
 }
 
 // postSnapshot hands a snapshot to the UI goroutine. Snapshots are
@@ -290,7 +314,6 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	if newScheme {
 		w.updateLoadSummary()
 		w.updateLoadSteps()
-		storeScheme(w.app.Preferences(), w.st.Valid)
 	}
 	w.updateBanner()
 	n := 0

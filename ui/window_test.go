@@ -6,6 +6,7 @@ import (
 	"regexp"
 	"strings"
 	"testing"
+	"time"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/test"
@@ -538,6 +539,17 @@ func TestSchemeAndSizeComeBackThroughPreferences(t *testing.T) {
 	back, err = savedScheme(p)
 	assert.Error(t, err)
 	assert.Equal(t, DemoScheme().Name, back.Name)
+}
+
+func TestTheWindowStoresTheSchemeOnceTheInputsRest(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	h.typeInto("length", "23 ft")
+	require.Eventually(t, func() bool {
+		var got model.Scheme
+		var err error
+		h.ui(func() { got, err = savedScheme(h.w.app.Preferences()) })
+		return err == nil && math.Abs(got.Setting.LengthMM-23*units.MMPerFoot) < 1
+	}, 5*time.Second, 50*time.Millisecond, "the typed length reaches the preferences")
 }
 
 func TestProblemsNameTheField(t *testing.T) {

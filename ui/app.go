@@ -8,7 +8,6 @@ import (
 	"runtime/pprof"
 	"time"
 
-	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/app"
 
 	"upright/ui/cli"
@@ -32,12 +31,23 @@ func Run(args []string) int {
 			}
 		}
 	}
-	// The window changes widgets from other goroutines only through
-	// fyne.Do, so Fyne's per-call thread checks (costly: each one reads a
-	// goroutine id from a stack trace) are switched off.
-	app.SetMetadata(fyne.AppMetadata{ID: AppID, Name: "Upright", Version: cli.Version, Build: 1,
-		Migrations: map[string]bool{"fyneDo": true}})
 	a := app.NewWithID(AppID)
+	// The window changes widgets from other goroutines only through
+	// fyne.Do, so Fyne's per-call thread checks (costly: each reads a
+	// goroutine id from a stack trace) are switched off. The flag is added
+	// to whatever metadata the build carries, before any window exists.
+	meta := a.Metadata()
+	if meta.Migrations == nil {
+		meta.Migrations = map[string]bool{}
+	}
+	meta.Migrations["fyneDo"] = true
+	if meta.Name == "" {
+		meta.Name = "Upright"
+	}
+	if meta.Version == "" || meta.Version == "0.0.1" {
+		meta.Version = cli.Version
+	}
+	app.SetMetadata(meta)
 	prefs := a.Preferences()
 	sc, err := savedScheme(prefs)
 	w := NewWindow(a, sc)

@@ -10,7 +10,7 @@ go test -count=1 -race ./ui/model/
 # Bounded fuzzing of the parsers (package, target).
 while read -r pkg target; do
 	if [ -d "$pkg" ] && grep -qs "func $target(" "$pkg"/*_test.go; then
-		go test -run '^$' -fuzz "^${target}\$" -fuzztime 15s "./$pkg"
+		go test -run '^$' -fuzz "^${target}\$" -fuzztime 15s -fuzzminimizetime 2s "./$pkg"
 	fi
 done <<'LIST'
 ui/units FuzzParseLength

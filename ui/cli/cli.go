@@ -240,7 +240,7 @@ func NewCandidate(m *model.Model, r *model.Row, s model.Setting) Candidate {
 	if c.Warnings == nil {
 		c.Warnings = []string{}
 	}
-	if !r.Permitted && r.Reason != "" {
+	if !r.Permitted && r.Reason != "" && len(c.Warnings) == 0 {
 		c.Warnings = append(c.Warnings, r.Reason)
 	}
 	if r.Permitted && r.CapacityN > 0 && !math.IsInf(r.Util, 0) {

@@ -49,8 +49,16 @@ func Run(args []string) int {
 	}
 	app.SetMetadata(meta)
 	prefs := a.Preferences()
-	sc, err := savedScheme(prefs)
+	auto := autosavePath(a)
+	sc, path, clean, msg := startupScheme(prefs, auto)
 	w := NewWindow(a, sc)
+	w.files.path, w.files.clean = path, normalised(clean)
+	w.updateTitle()
+	if auto != "" {
+		if err := w.startAutosave(auto, autosaveEvery); err != nil && msg == "" {
+			msg = "Autosave is off: " + err.Error()
+		}
+	}
 	w.win.Resize(savedSize(prefs))
 	w.win.SetCloseIntercept(func() {
 		storeSize(prefs, w.win.Canvas().Size())
@@ -58,10 +66,12 @@ func Run(args []string) int {
 			storeScheme(prefs, w.st.Valid)
 		}
 		w.closing.Store(true)
+		w.stopAutosave()
+		unregisterWindow(w)
 		w.win.Close()
 	})
-	if err != nil {
-		w.status.SetText(err.Error())
+	if msg != "" {
+		w.notify(msg)
 	}
 	w.win.ShowAndRun()
 	go w.eng.Close() // never block the exiting UI goroutine on a worker waiting for it

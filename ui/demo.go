@@ -11,7 +11,7 @@ import (
 // beam, carrying two upper floors and a planted roof from a 30 × 28 ft bay.
 func DemoScheme() model.Scheme {
 	sc := model.DefaultScheme()
-	sc.Name = "Alder Row Library, reading-room column"
+	sc.Name = "Demo: Alder Row Library, reading-room column"
 	sc.Units = model.US
 	sc.Setting.LengthMM = 18 * units.MMPerFoot
 	sc.Setting.WeakMM = sc.Setting.LengthMM

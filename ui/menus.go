@@ -15,6 +15,7 @@ import (
 var (
 	shortcutOpen   = &desktop.CustomShortcut{KeyName: fyne.KeyO, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutSave   = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutSaveAs = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
 	shortcutExport = &desktop.CustomShortcut{KeyName: fyne.KeyE, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutLength = &desktop.CustomShortcut{KeyName: fyne.KeyL, Modifier: fyne.KeyModifierShortcutDefault}
 )
@@ -32,10 +33,19 @@ func fileItem(label string, sc fyne.Shortcut, available bool, run func()) *fyne.
 
 // mainMenu builds the File and Help menus.
 func (w *Window) mainMenu() *fyne.MainMenu {
+	recent := fyne.NewMenuItem("Open recent", nil)
+	recent.ChildMenu = w.recentMenu()
+	saveAs := fyne.NewMenuItem("Save scheme as…", w.SaveAs)
+	saveAs.Shortcut = shortcutSaveAs
 	file := fyne.NewMenu("File",
 		fileItem("Open scheme…", shortcutOpen, OpenHook != nil, w.Open),
-		fileItem("Save scheme…", shortcutSave, SaveHook != nil, w.Save),
-		fileItem("Export report…", shortcutExport, ExportHook != nil, w.Export),
+		recent,
+		fileItem("Save scheme", shortcutSave, SaveHook != nil, w.Save),
+		saveAs,
+		fyne.NewMenuItemSeparator(),
+		fileItem("Export client report (PDF)…", shortcutExport, ExportHook != nil, w.Export),
+		fyne.NewMenuItem("Export candidate table (CSV)…", w.ExportCSV),
+		fyne.NewMenuItem("Export chart (PNG, SVG or PDF)…", w.ExportChart),
 		fyne.NewMenuItemSeparator(),
 		fyne.NewMenuItem("Start again from the demo scheme", func() { w.LoadScheme(DemoScheme()) }),
 	)
@@ -52,6 +62,7 @@ func (w *Window) addShortcuts() {
 	c := w.win.Canvas()
 	c.AddShortcut(shortcutOpen, func(fyne.Shortcut) { w.Open() })
 	c.AddShortcut(shortcutSave, func(fyne.Shortcut) { w.Save() })
+	c.AddShortcut(shortcutSaveAs, func(fyne.Shortcut) { w.SaveAs() })
 	c.AddShortcut(shortcutExport, func(fyne.Shortcut) { w.Export() })
 	c.AddShortcut(shortcutLength, func(fyne.Shortcut) { c.Focus(w.slider) })
 }
@@ -95,12 +106,13 @@ func (w *Window) Export() {
 	ExportHook(w.win, ex)
 }
 
-// LoadScheme replaces the inputs with a scheme (a file opened, the demo).
+// LoadScheme replaces the inputs with a scheme (a file opened, the demo);
+// the scheme has no file until OpenFile or SaveFile gives it one.
 func (w *Window) LoadScheme(sc model.Scheme) {
 	out := w.st.Load(sc)
 	w.pinned, w.selected = nil, ""
 	w.syncInputs()
-	w.updateTitle()
+	w.setPath("")
 	w.after(out)
 	if out.Submit {
 		w.xsStatus.SetText("Finding crossovers…")
@@ -131,6 +143,7 @@ func (w *Window) showKeys() {
 		"Page Up / Page Down   by 1 ft (250 mm)\n" +
 		"Home / End   to the ends of the range\n" +
 		"Space   choose the focused end condition\n" +
-		"Ctrl+O / Ctrl+S / Ctrl+E   open, save, export")
+		"Ctrl+O / Ctrl+S / Ctrl+E   open, save, export the report\n" +
+		"Ctrl+Shift+S   save as")
 	dialog.ShowCustom("Keyboard", "Close", l, w.win)
 }

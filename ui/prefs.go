@@ -2,6 +2,7 @@ package ui
 
 import (
 	"fmt"
+	"time"
 
 	"fyne.io/fyne/v2"
 
@@ -54,6 +55,7 @@ func storeScheme(p fyne.Preferences, sc model.Scheme) {
 		return
 	}
 	p.SetString(prefScheme, string(b))
+	p.SetInt(prefStoredAt, int(time.Now().UnixNano()))
 }
 
 // savedSize returns the stored window size, or the default.

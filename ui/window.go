@@ -123,6 +123,8 @@ type Window struct {
 	banner     *fyne.Container
 	bannerText *widget.Label
 	status     *widget.Label
+
+	files fileState // the scheme's file, unsaved changes, recent files, autosave
 }
 
 // processStart is when the package was initialised, close to the start of the process.
@@ -151,11 +153,13 @@ func newWindow(a fyne.App, sc model.Scheme, do, doWait func(func())) *Window {
 	w := &Window{app: a, st: NewState(sc), sortCol: -1, started: time.Now(), do: do, doWait: doWait}
 	a.Settings().SetTheme(lightTheme{})
 	w.win = a.NewWindow("Upright")
+	registerWindow(w)
 	w.eng = NewEngine()
 	w.eng.OnSnapshot = w.postSnapshot
 	w.eng.OnCrossovers = func(x *Crossovers) { w.do(func() { w.applyCrossovers(x) }) }
 	w.eng.OnFrame = w.takeFrame
 	w.win.SetContent(w.build())
+	w.initFiles()
 	w.win.SetMainMenu(w.mainMenu())
 	w.addShortcuts()
 	w.syncInputs()
@@ -168,6 +172,8 @@ func newWindow(a fyne.App, sc model.Scheme, do, doWait func(func())) *Window {
 // Close stops the engine and closes the window.
 func (w *Window) Close() {
 	w.closing.Store(true)
+	w.stopAutosave()
+	unregisterWindow(w)
 	w.eng.Close()
 	w.win.Close()
 }
@@ -241,13 +247,14 @@ func (w *Window) after(out Outcome) {
 	if out.Rebuild {
 		w.xsStatus.SetText("Finding crossovers…")
 		w.configureSlider()
-		w.updateTitle()
 	}
 	if out.Submit {
 		w.placeMarker()
 		w.submit()
 		w.scheduleStore()
+		w.autosaveChanged()
 	}
+	w.updateTitle()
 }
 
 // storeDelay is how long the inputs must rest before they are stored in
@@ -320,7 +327,11 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	for i := range s.Result.Families {
 		n += len(s.Result.Families[i].Rows)
 	}
-	w.status.SetText(fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
+	if msg := w.Notice(); msg != "" {
+		w.status.SetText(msg)
+	} else {
+		w.status.SetText(fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
+	}
 	w.firstLog.Do(func() {
 		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was created (%d candidates)",
 			float64(time.Since(processStart).Microseconds())/1000, float64(time.Since(w.started).Microseconds())/1000, n)
@@ -366,13 +377,21 @@ func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
 	})
 }
 
-// updateTitle names the scheme in the window title.
+// updateTitle names the scheme in the window title, with a trailing " •"
+// while it has unsaved changes.
 func (w *Window) updateTitle() {
 	name := strings.TrimSpace(w.st.Valid.Name)
 	if name == "" {
 		name = "Untitled scheme"
 	}
-	w.win.SetTitle("Upright — " + name)
+	t := "Upright — " + name
+	if w.Dirty() {
+		t += " •"
+	}
+	if t != w.files.lastTitle {
+		w.files.lastTitle = t
+		w.win.SetTitle(t)
+	}
 }
 
 // updateBanner shows, while the inputs are invalid, that the result on

@@ -59,6 +59,9 @@ func Run(args []string) int {
 			msg = "Autosave is off: " + err.Error()
 		}
 	}
+	// Quit from the menu ends the app without the close intercept: the
+	// autosave still gets the last scheme.
+	a.Lifecycle().SetOnStopped(w.stopAutosave)
 	w.win.Resize(savedSize(prefs))
 	w.win.SetCloseIntercept(func() {
 		storeSize(prefs, w.win.Canvas().Size())

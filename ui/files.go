@@ -573,5 +573,5 @@ func startupScheme(p fyne.Preferences, autoPath string) (sc model.Scheme, path s
 	if err != nil || reflect.DeepEqual(normalised(asc), normalised(sc)) {
 		return sc, path, clean, msg
 	}
-	return asc, path, clean, "Restored the autosave of " + fi.ModTime().Format("2 Jan 15:04:05") + ", newer than the scheme last stored"
+	return asc, path, clean, "Restored the autosave of " + fi.ModTime().Format("2 Jan 15:04")
 }

@@ -260,8 +260,8 @@ func (w *Window) buildCalc() fyne.CanvasObject {
 
 // stepTable makes a table of trace steps, converted to the display units.
 func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
-	widths := []float32{140, 80, 85, 60, 260}
-	titles := []string{"Clause", "Quantity", "Value", "Unit", "Formula"}
+	widths := []float32{80, 85, 60, 150, 260}
+	titles := []string{"Quantity", "Value", "Unit", "Clause", "Formula"}
 	t := newLiveTable(
 		func() (int, int) { return len(*rows), len(widths) },
 		func() fyne.CanvasObject {
@@ -280,14 +280,14 @@ func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
 			l.Alignment = fyne.TextAlignLeading
 			switch id.Col {
 			case 0:
-				l.SetText(s.Clause)
-			case 1:
 				l.SetText(s.Quantity)
-			case 2:
+			case 1:
 				l.Alignment = fyne.TextAlignTrailing
 				l.SetText(stepValue(v))
-			case 3:
+			case 2:
 				l.SetText(u)
+			case 3:
+				l.SetText(s.Clause)
 			case 4:
 				l.SetText(s.Formula)
 			}

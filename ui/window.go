@@ -200,7 +200,7 @@ func (w *Window) build() fyne.CanvasObject {
 	right := container.NewVSplit(xsPanel, calc)
 	right.Offset = 0.36
 	mainSplit := container.NewHSplit(centre, right)
-	mainSplit.Offset = 0.71
+	mainSplit.Offset = 0.66
 	main := container.NewBorder(w.banner, nil, nil, nil, mainSplit)
 
 	side := container.NewVScroll(inputs)

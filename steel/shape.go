@@ -139,6 +139,11 @@ var spandrelI = (1 - 5*math.Pi/16) - spandrelArea*spandrelBar*spandrelBar // × 
 // newIShape derives the properties of a rolled I-shape from its published
 // dimensions, counting the four web-to-flange fillets of radius kdes − tf.
 func newIShape(fam Family, r wRow) Shape {
+	prefix := "W"
+	if fam == HP {
+		prefix = "HP"
+	}
+	name := prefix + strconv.Itoa(r.nominal) + "X" + strconv.FormatFloat(r.weight, 'f', -1, 64)
 	d, bf, tw, tf := r.d, r.bf, r.tw, r.tf
 	rf := r.kdes - tf // fillet radius
 	if rf < 0 {
@@ -168,10 +173,10 @@ func newIShape(fam Family, r wRow) Shape {
 	Cw := tf * bf * bf * bf * ho * ho / 24 // AISC Design Guide 9, doubly symmetric I-shape
 
 	return Shape{
-		Name: r.name, Family: fam,
+		Name: name, Family: fam,
 		D: d, Bf: bf, Tw: tw, Tf: tf, Kdes: r.kdes,
 		A: A, Ix: Ix, Iy: Iy, Rx: math.Sqrt(Ix / A), Ry: math.Sqrt(Iy / A),
-		J: J, Cw: Cw, Weight: nominalWeight(r.name, A),
+		J: J, Cw: Cw, Weight: nominalWeight(name, A),
 		FlangeBT: bf / (2 * tf), WebHT: (d - 2*r.kdes) / tw,
 	}
 }

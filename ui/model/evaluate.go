@@ -132,7 +132,13 @@ func (r *Result) BestOverall() *Row {
 
 // SelfWeightN returns a candidate's service self-weight over the length, N.
 func (m *Model) SelfWeightN(st *Static, lengthMM float64) float64 {
-	if !m.Scheme.SelfWeight {
+	return selfWeightN(m.Scheme.SelfWeight, st, lengthMM)
+}
+
+// selfWeightN is the service weight of a column over its length, N, or 0
+// when self-weight is switched off. The model and the adapters' traces share it.
+func selfWeightN(on bool, st *Static, lengthMM float64) float64 {
+	if !on {
 		return 0
 	}
 	return st.MassKgPerM * Gravity * lengthMM / 1000

@@ -235,10 +235,7 @@ func (f *steelFamily) Detail(i int, s Setting) Detail {
 	for _, x := range r.Steps {
 		d.Steps = append(d.Steps, steelStep(x))
 	}
-	selfN := 0.0
-	if f.selfW {
-		selfN = st.MassKgPerM * Gravity * s.LengthMM / 1000
-	}
+	selfN := selfWeightN(f.selfW, st, s.LengthMM)
 	demandN := f.ls.Demand(selfN)
 	if !finite(demandN) || demandN < 0 {
 		demandN = 0

@@ -14,7 +14,6 @@ const (
 	timberMMPerIn  = 25.4
 	timberNPerLb   = 4.4482216152605       // exact: 0.45359237 kg × 9.80665 m/s²
 	timberMPaPerPs = timberNPerLb / 645.16 // N per in² to N per mm²
-	timberGravity  = 9.80665               // m/s², for self-weight
 	timberFamSawn  = "Sawn lumber"         // family of 4x posts and posts and timbers
 	timberFamGlu   = "Glulam"              // family of glued laminated timber columns
 	timberKindSawn = "sawn-timber"         // carbon constituent kind, m³ per metre
@@ -228,10 +227,7 @@ func (f *timberFamily) Quick(i int, s Setting) Quick {
 func (f *timberFamily) Detail(i int, s Setting) Detail {
 	k := f.cand(i, s.Method)
 	st := &f.static[i]
-	selfN := 0.0
-	if f.selfW {
-		selfN = st.MassKgPerM * Gravity * s.LengthMM / 1000
-	}
+	selfN := selfWeightN(f.selfW, st, s.LengthMM)
 	demandN := f.ls.Demand(selfN)
 	if !finite(demandN) || demandN < 0 {
 		demandN = 0

@@ -221,7 +221,7 @@ func PlanSize(fp [2]float64, sys System) string {
 	return fmt.Sprintf("%s × %s %s", Dim(fp[0], sys), Dim(fp[1], sys), u)
 }
 
-// PlanArea formats mm² as in² or cm²... as in² (US) or m² (SI) with suitable precision.
+// PlanArea formats mm² as in² (US) or m² (SI).
 func PlanArea(mm2 float64, sys System) string {
 	if sys == SI {
 		return fmt.Sprintf("%.3f m²", mm2/1e6)

@@ -107,7 +107,7 @@ func commandNames() []string {
 }
 
 func usage(w io.Writer) {
-	fmt.Fprintf(w, `upright %s: column scheme comparison (steel, concrete, timber)
+	fmt.Fprintf(w, `upright %s: column scheme comparison (steel, concrete, timber, filled composite)
 
   upright                       open the window
   upright compare [flags]       lightest working size of each family at one length

@@ -40,6 +40,8 @@ type schemeFlags struct {
 
 	carbon     string
 	limitDelta bool
+
+	fillFc, compositeFamilies string
 }
 
 func newSchemeFlags(name string, out io.Writer) *schemeFlags {
@@ -91,6 +93,9 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.fire, "fire", "", "timber fire exposure: none, 1h, 1.5h, 2h")
 	fs.StringVar(&f.fireSides, "fire-sides", "", "timber sides exposed to fire: 3 or 4")
 	fs.StringVar(&f.duration, "duration", "", "ASD load duration: permanent, ten-years, two-months, seven-days, ten-minutes")
+
+	fs.StringVar(&f.fillFc, "fill-fc", "", "f'c of the concrete filling the composite HSS, 3000 to 10000 psi, e.g. 6ksi, 40MPa (default: --fc)")
+	fs.StringVar(&f.compositeFamilies, "composite-families", "", "comma list of "+strings.Join(model.CompositeFamilies, ", "))
 	return f
 }
 
@@ -458,7 +463,7 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 	if f.duration != "" {
 		t.Duration = strings.ToLower(f.duration)
 	}
-	return nil
+	return f.buildComposite(sc)
 }
 
 func carbonKindList() string {

@@ -16,7 +16,7 @@ const MaxNameLen = 200
 
 // knownMaterials are the materials Upright has; a file may name one that
 // this build lacks, which gets its own message.
-var knownMaterials = []string{"steel", "concrete", "timber"}
+var knownMaterials = []string{"steel", "concrete", "timber", "composite"}
 
 // fieldPaths maps the field names of model.FieldError to paths in the file.
 var fieldPaths = map[string]string{
@@ -54,6 +54,8 @@ var fieldPaths = map[string]string{
 	"grade":              "timber.grade",
 	"glulam combination": "timber.glulam_combinations",
 	"steel families":     "steel.families",
+	"fill f'c":           "composite.fill_fc",
+	"composite families": "composite.families",
 }
 
 // pathOf returns the file path of a model field name.
@@ -107,10 +109,12 @@ func check(sc *model.Scheme) *problem {
 				accepted = "a list drawn from " + quoteAll(model.Materials()) + " (an empty list means all)"
 			case "steel families":
 				accepted = "a list drawn from " + quoteAll(model.SteelFamilies) + " (an empty list means all)"
+			case "composite families":
+				accepted = "a list drawn from " + quoteAll(model.CompositeFamilies) + " (an empty list means all)"
 			}
 			p := &problem{field: pathOf(fe.Field), err: err, accepted: accepted,
 				msg: fmt.Sprintf("%q is not accepted; give %s", fe.Value, accepted)}
-			if fe.Field == "materials" || fe.Field == "glulam combination" || fe.Field == "steel families" {
+			if fe.Field == "materials" || fe.Field == "glulam combination" || fe.Field == "steel families" || fe.Field == "composite families" {
 				p.value = fe.Value
 			}
 			return p
@@ -121,6 +125,9 @@ func check(sc *model.Scheme) *problem {
 		return p
 	}
 	if p := listProblem("timber.glulam_combinations", sc.Timber.GlulamCombos, nil); p != nil {
+		return p
+	}
+	if p := listProblem("composite.families", sc.Composite.Families, nil); p != nil {
 		return p
 	}
 	for k := range sc.Carbon {

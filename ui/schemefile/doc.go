@@ -5,10 +5,11 @@
 //
 // A scheme file is one UTF-8 JSON object of at most 1 MiB (MaxSize),
 // conventionally named *.upright.json. Every field below must be present
-// (null is allowed only where stated) and no other field may appear; object
-// keys may come in any order but not twice. Every physical quantity is a
-// string holding a number and its unit, read by ui/units, so "14 ft",
-// "4.2 m", "4200 mm", "14'-6\"" and "168 in" are all lengths. Units accepted:
+// (null is allowed only where stated; "composite" may be absent) and no
+// other field may appear; object keys may come in any order but not twice.
+// Every physical quantity is a string holding a number and its unit, read by
+// ui/units, so "14 ft", "4.2 m", "4200 mm", "14'-6\"" and "168 in" are all
+// lengths. Units accepted:
 //
 //	length    mm, cm, m, in, ft, and feet-inches such as 14'-6"
 //	force     N, kN, MN, lb, kip (k), t (tonne-force)
@@ -82,6 +83,12 @@
 //	    "duration": null               permanent, ten-years, two-months, seven-days,
 //	                                   ten-minutes; null: derived from the loads
 //	  },
+//	  "composite": {                   optional (absent: the defaults below); the
+//	                                   concrete-filled HSS, wall Fy from "steel"
+//	    "families": [],                drawn from Filled HSS square, Filled HSS
+//	                                   rectangular, Filled HSS round; [] means all
+//	    "fill_fc": null                e.g. "6 ksi", 3 to 10 ksi; null: concrete.fc
+//	  },
 //	  "carbon": {                      every kind, A1–A3 factors
 //	    "rolled-steel": "1.22 kg CO2e/kg",
 //	    "hss-steel": "1.99 kg CO2e/kg",
@@ -91,6 +98,11 @@
 //	    "glulam": "137 kg CO2e/m³"
 //	  }
 //	}
+//
+// The "composite" object and each of its fields may be left out: a file
+// written before the composite material existed reads unchanged, with every
+// filled family on and the fill at the concrete f'c. Marshal always writes
+// it. The format version stays 1.
 //
 // Marshal writes each quantity in the unit of the scheme's own system (ft,
 // kip, psf, ft2, ksi for US; m, kN, kPa, m2, MPa for SI) when that reads back

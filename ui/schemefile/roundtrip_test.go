@@ -101,6 +101,9 @@ func genScheme(t *rapid.T) model.Scheme {
 	tm.FireSides = rapid.SampledFrom([]int{3, 4}).Draw(t, "fire sides")
 	tm.Duration = rapid.SampledFrom([]string{"", "permanent", "ten-years", "two-months", "seven-days", "ten-minutes"}).Draw(t, "duration")
 
+	sc.Composite.Families = subset(t, model.CompositeFamilies, "composite families")
+	sc.Composite.FillFcMPa = maybeZero(t, model.MinFillFcMPa, model.MaxFillFcMPa, "fill fc")
+
 	sc.Carbon = model.CarbonFactors{}
 	for _, k := range model.CarbonKinds {
 		sc.Carbon[k.Key] = rapid.Float64Range(0, 10000).Draw(t, "carbon "+k.Key)
@@ -159,6 +162,7 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 		"Concrete.BetaDns", "Concrete.BetaFromLoads", "Concrete.EIMethod", "Concrete.SecondOrderCap",
 		"Timber.Species", "Timber.Grade", "Timber.Glulam", "Timber.Sawn", "Timber.Wet", "Timber.Incised",
 		"Timber.Hot", "Timber.Fire", "Timber.FireSides", "Timber.Duration", "Timber.GlulamCombos",
+		"Composite.Families", "Composite.FillFcMPa",
 	}
 	sort.Strings(got)
 	sort.Strings(want)
@@ -189,6 +193,7 @@ func TestFileKeysMatchTheReader(t *testing.T) {
 	assert.Equal(t, sorted(steelKeys), keysOf(doc["steel"].(map[string]any)))
 	assert.Equal(t, sorted(concreteKeys), keysOf(doc["concrete"].(map[string]any)))
 	assert.Equal(t, sorted(timberKeys), keysOf(doc["timber"].(map[string]any)))
+	assert.Equal(t, sorted(compositeKeys), keysOf(doc["composite"].(map[string]any)))
 	assert.Equal(t, sorted(carbonKeys()), keysOf(doc["carbon"].(map[string]any)))
 }
 

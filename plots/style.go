@@ -48,11 +48,19 @@ var families = map[string]*family{
 		colors: []color.Color{okabeGreen, okabePurple},
 		dashes: []vg.Length{vg.Points(9), vg.Points(2.5), vg.Points(1.5), vg.Points(2.5)},
 	},
+	// Concrete-filled steel tubes take the first colours of the two
+	// materials they join and a dash with two dots, apart from timber's one.
+	"composite": {
+		id:     3,
+		name:   "Composite",
+		colors: []color.Color{okabeBlue, okabeVermilion},
+		dashes: []vg.Length{vg.Points(7), vg.Points(2), vg.Points(1.5), vg.Points(2), vg.Points(1.5), vg.Points(2)},
+	},
 }
 
 // neutralFamily styles series whose group is not a known material.
 var neutralFamily = &family{
-	id:     3,
+	id:     4,
 	name:   "Other",
 	colors: []color.Color{okabeBlue, okabeVermilion, okabeGreen, okabePurple, okabeOrange, okabeSkyBlue},
 	dashes: []vg.Length{vg.Points(2), vg.Points(2)},
@@ -62,7 +70,7 @@ var neutralFamily = &family{
 var demandDashes = []vg.Length{vg.Points(11), vg.Points(4.5)}
 
 // familyCount is the number of style families, the neutral one included.
-const familyCount = 4
+const familyCount = 5
 
 // familyFor returns the style family of a group name, matched without regard to case or surrounding space.
 func familyFor(group string) *family {

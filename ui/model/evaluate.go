@@ -1,10 +1,12 @@
 package model
 
 import (
+	"cmp"
 	"context"
 	"fmt"
 	"math"
-	"sort"
+	"slices"
+	"strings"
 	"sync"
 )
 
@@ -207,24 +209,53 @@ func (m *Model) evalFamily(ctx context.Context, fi int, s Setting, out *FamilyRe
 }
 
 // sortRows ranks working rows first by score (then designation), then
-// failing rows by utilization.
+// failing rows by utilization (then designation); ties keep their order.
+// It sorts an index and moves each row once: rows are large, and moving
+// them inside the sort cost more than the evaluation itself.
 func sortRows(rows []Row) {
-	sort.SliceStable(rows, func(a, b int) bool {
+	idx := make([]int32, len(rows))
+	for i := range idx {
+		idx[i] = int32(i)
+	}
+	slices.SortFunc(idx, func(a, b int32) int {
 		ra, rb := &rows[a], &rows[b]
 		if ra.OK != rb.OK {
-			return ra.OK
-		}
-		if ra.OK {
-			if ra.Score != rb.Score {
-				return ra.Score < rb.Score
+			if ra.OK {
+				return -1
 			}
-			return ra.Static.Designation < rb.Static.Designation
+			return 1
 		}
-		if ra.Util != rb.Util {
-			return ra.Util < rb.Util
+		ka, kb := ra.Util, rb.Util
+		if ra.OK {
+			ka, kb = ra.Score, rb.Score
 		}
-		return ra.Static.Designation < rb.Static.Designation
+		if ka != kb {
+			return cmp.Compare(ka, kb)
+		}
+		if c := strings.Compare(ra.Static.Designation, rb.Static.Designation); c != 0 {
+			return c
+		}
+		return int(a - b)
 	})
+	// Apply the permutation in place, cycle by cycle: position j takes the
+	// row that was at idx[j].
+	for i := range idx {
+		if idx[i] == int32(i) {
+			continue
+		}
+		tmp := rows[i]
+		j := int32(i)
+		for {
+			k := idx[j]
+			idx[j] = j
+			if k == int32(i) {
+				rows[j] = tmp
+				break
+			}
+			rows[j] = rows[k]
+			j = k
+		}
+	}
 }
 
 // Detail returns a candidate's full trace at a setting.

@@ -58,6 +58,7 @@ type materialWidgets struct {
 	fireSides     *widget.Select
 	duration      *widget.Select
 	timberProblem *widget.Label
+	composite     compositeWidgets
 }
 
 func problemLabel() *widget.Label {
@@ -180,6 +181,8 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			labelled("Exposure", o.fireSides),
 			labelled("ASD load duration", o.duration),
 		)
+	case "composite":
+		return o.composite.panel(w)
 	}
 	return nil
 }
@@ -220,6 +223,7 @@ func (o *materialWidgets) sync(w *Window) {
 		o.fireSides.SetSelected(labelOf(sidesChoices, fmt.Sprint(t.FireSides)))
 		o.duration.SetSelected(labelOf(durationChoices, t.Duration))
 	}
+	o.composite.sync(d)
 }
 
 // enable is called when a material is switched on or off.
@@ -241,4 +245,5 @@ func (o *materialWidgets) showProblems(w *Window) {
 			p.l.Hide()
 		}
 	}
+	o.composite.showProblem(w)
 }

@@ -217,6 +217,8 @@ func (s *State) active(id string) bool {
 		return s.registeredOn("steel")
 	case "f'c", "rho-max", "m1m2", "beta-dns":
 		return s.registeredOn("concrete")
+	case "fill f'c":
+		return s.registeredOn("composite")
 	}
 	return true
 }
@@ -253,6 +255,10 @@ func (s *State) revalidate(forceRebuild bool) Outcome {
 	}
 	if s.registeredOn("timber") && s.Draft.Timber.Glulam && s.Draft.Timber.GlulamCombos != nil && len(s.Draft.Timber.GlulamCombos) == 0 {
 		s.check = &Problem{Field: "timber products", Label: "Glulam combinations", Msg: "no glulam combination is chosen; choose at least one, or switch glulam off"}
+		return Outcome{}
+	}
+	if s.registeredOn("composite") && s.Draft.Composite.Families != nil && len(s.Draft.Composite.Families) == 0 {
+		s.check = &Problem{Field: "composite families", Label: "Composite families", Msg: "no filled tube family is chosen; choose at least one, or switch composite off"}
 		return Outcome{}
 	}
 	d := s.Draft

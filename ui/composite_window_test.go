@@ -1,0 +1,62 @@
+package ui
+
+import (
+	"slices"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"upright/ui/model"
+)
+
+// TestCompositeSwitchAndOptions checks the window's composite switch and
+// options: the filled families appear in the table, a typed fill f'c
+// reaches the scheme, an absurd one is named with its range, and choosing
+// no family is refused with a message.
+func TestCompositeSwitchAndOptions(t *testing.T) {
+	if !slices.Contains(model.Materials(), "composite") {
+		t.Skip("composite is not registered in this build")
+	}
+	h := newHarness(t, DemoScheme())
+	h.settle()
+	h.ui(func() {
+		require.NotNil(t, h.w.matChecks["composite"])
+		found := false
+		for _, r := range h.w.rows {
+			found = found || h.w.snap.Model.Families[r.Family].Material() == "composite"
+		}
+		assert.True(t, found, "the demo shows the filled families")
+	})
+	h.typeInto("fill f'c", "6 ksi")
+	h.settle()
+	h.ui(func() {
+		assert.InDelta(t, 41.37, h.w.st.Valid.Composite.FillFcMPa, 0.01)
+		for _, r := range h.w.rows {
+			if h.w.snap.Model.Families[r.Family].Material() == "composite" {
+				assert.Contains(t, r.Static.Designation, "filled, 6 ksi")
+			}
+		}
+	})
+	h.typeInto("fill f'c", "12 ksi")
+	h.settle()
+	h.ui(func() {
+		assert.Contains(t, h.w.st.FieldError("fill f'c"), "3,000 to 10,000 psi")
+		h.w.opts.composite.families.SetSelected([]string{"Filled HSS round"})
+	})
+	h.typeInto("fill f'c", "")
+	h.settle()
+	h.ui(func() {
+		assert.Equal(t, []string{"Filled HSS round"}, h.w.st.Valid.Composite.Families)
+		h.w.opts.composite.families.SetSelected(nil)
+		assert.True(t, h.w.opts.composite.problem.Visible())
+		h.w.matChecks["composite"].SetChecked(false)
+		assert.Equal(t, "", h.w.BannerText())
+	})
+	h.settle()
+	h.ui(func() {
+		for _, r := range h.w.rows {
+			assert.NotEqual(t, "composite", h.w.snap.Model.Families[r.Family].Material())
+		}
+	})
+}

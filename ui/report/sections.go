@@ -335,6 +335,9 @@ func inputs(d *doc, f *facts) {
 	add("Concrete reinforcement", fmt.Sprintf("Grade %d bars, ρ up to %.1f%%, %s", c.BarGrade, c.RhoMax*100, transverseWords(c.Transverse)), "")
 	t := sc.Timber
 	add("Timber", timberWords(t), "")
+	if compositeOn(sc) {
+		add("Composite (filled HSS)", compositeWords(f), "")
+	}
 	d.table(cols, rows)
 }
 
@@ -784,6 +787,9 @@ func assumptions(d *doc, f *facts) {
 			dur = fmt.Sprintf(" Time effect factor λ = %.2f (NDS 2018 Table N3).", ls.Lambda)
 		}
 		items = append(items, "Timber: NDS 2018, National Design Specification for Wood Construction: column stability factor Cp (3.7) with the adjustment factors for the service conditions; "+timberWords(sc.Timber)+"."+dur)
+	}
+	if mats["composite"] {
+		items = append(items, compositeAssumption(f))
 	}
 	loadItem := "Loads: ASCE 7-22, Minimum Design Loads and Associated Criteria for Buildings and Other Structures: gravity load combinations 2.3.1 (LRFD) and 2.4.1 (ASD)"
 	if ls.Known {

@@ -288,9 +288,9 @@ func (f *compositeFamily) Detail(i int, s Setting) Detail {
 func compositeStep(s steel.Step) Step {
 	switch s.Unit {
 	case "kip-in2":
-		return Step{Clause: s.Clause, Quantity: s.Quantity, Formula: s.Formula, Value: s.Value * compositeKNm2PerKipIn2, Unit: "kN·m2"}
+		return Step{Clause: s.Clause, Quantity: s.Quantity, Formula: s.Formula, Value: s.Value * compositeKNm2PerKipIn2, Unit: "kN·m²"}
 	case "pcf":
-		return Step{Clause: s.Clause, Quantity: s.Quantity, Formula: s.Formula, Value: s.Value * compositeKgm3PerPcf, Unit: "kg/m3"}
+		return Step{Clause: s.Clause, Quantity: s.Quantity, Formula: s.Formula, Value: s.Value * compositeKgm3PerPcf, Unit: "kg/m³"}
 	}
 	return steelStep(s)
 }

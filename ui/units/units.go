@@ -284,6 +284,8 @@ func Convert(v float64, siUnit string, sys System) (float64, string) {
 		return v / KgmPerPlf, "lb/ft"
 	case "kg":
 		return v / KgPerLb, "lb"
+	case "kg/m³", "kg/m3":
+		return v / (KgPerLb / (M2PerFt2 * MMPerFoot / 1000)), "lb/ft³"
 	case "m2", "m²":
 		return v / M2PerFt2, "ft²"
 	}

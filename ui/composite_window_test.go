@@ -2,12 +2,15 @@ package ui
 
 import (
 	"slices"
+	"strings"
 	"testing"
 
+	"fyne.io/fyne/v2/widget"
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
 
 	"upright/ui/model"
+	"upright/ui/units"
 )
 
 // TestCompositeSwitchAndOptions checks the window's composite switch and
@@ -58,5 +61,38 @@ func TestCompositeSwitchAndOptions(t *testing.T) {
 		for _, r := range h.w.rows {
 			assert.NotEqual(t, "composite", h.w.snap.Model.Families[r.Family].Material())
 		}
+	})
+}
+
+// TestCompositeRowShowsItsCalculation checks selecting a filled tube shows
+// its plain "why" and an I2 trace read in US units.
+func TestCompositeRowShowsItsCalculation(t *testing.T) {
+	if !slices.Contains(model.Materials(), "composite") {
+		t.Skip("composite is not registered in this build")
+	}
+	h := newHarness(t, DemoScheme())
+	h.settle()
+	var des string
+	h.ui(func() {
+		for i, r := range h.w.rows {
+			if h.w.snap.Model.Families[r.Family].Material() == "composite" {
+				des = r.Static.Designation
+				h.w.table.Select(widget.TableCellID{Row: i, Col: 2})
+				break
+			}
+		}
+	})
+	require.NotEmpty(t, des)
+	h.settle()
+	h.ui(func() {
+		assert.Contains(t, h.w.calcTitle.Text, des)
+		assert.Contains(t, h.w.calcPlain.Text, "filled with 5 ksi concrete")
+		cites := false
+		for _, s := range h.w.stepRows {
+			_, u := units.Convert(s.Value, s.Unit, units.US)
+			assert.NotContains(t, []string{"mm", "MPa", "kN", "N", "mm2", "kN·m²", "kg/m³"}, u, "step %s left in SI", s.Quantity)
+			cites = cites || strings.HasPrefix(s.Clause, "AISC 360-22 Eq. I2-")
+		}
+		assert.True(t, cites, "the trace cites I2 equations")
 	})
 }

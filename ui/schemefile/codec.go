@@ -22,31 +22,30 @@ const MaxSize = 1 << 20
 
 // The file's objects and their fields, in the order Marshal writes them.
 var (
-	topKeys       = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "composite", "carbon"}
-	settingKeys   = []string{"length", "weak_axis_length", "ends", "k", "method"}
-	loadKeys      = []string{"mode", "direct", "takedown"}
-	takedownKeys  = []string{"tributary_area", "floors", "floor_dead", "floor_live", "roof_dead", "roof_live", "snow", "live_reduction", "kll", "occupancy"}
-	steelKeys     = []string{"families", "fy"}
-	concreteKeys  = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap"}
-	timberKeys    = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire", "fire_sides", "duration"}
-	compositeKeys = []string{"families", "fill_fc"}
+	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "composite", "carbon"}
+	settingKeys  = []string{"length", "weak_axis_length", "ends", "k", "method"}
+	loadKeys     = []string{"mode", "direct", "takedown"}
+	takedownKeys = []string{"tributary_area", "floors", "floor_dead", "floor_live", "roof_dead", "roof_live", "snow", "live_reduction", "kll", "occupancy"}
+	steelKeys    = []string{"families", "fy"}
+	concreteKeys = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap"}
+	timberKeys   = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire", "fire_sides", "duration"}
 )
 
 type wFile struct {
-	Format     string     `json:"format"`
-	Version    int        `json:"version"`
-	Name       string     `json:"name"`
-	Units      string     `json:"units"`
-	Rank       string     `json:"rank"`
-	Setting    wSetting   `json:"setting"`
-	Load       wLoad      `json:"load"`
-	SelfWeight bool       `json:"self_weight"`
-	Materials  []string   `json:"materials"`
-	Steel      wSteel     `json:"steel"`
-	Concrete   wConcrete  `json:"concrete"`
-	Timber     wTimber    `json:"timber"`
-	Composite  wComposite `json:"composite"`
-	Carbon     wCarbon    `json:"carbon"`
+	Format     string    `json:"format"`
+	Version    int       `json:"version"`
+	Name       string    `json:"name"`
+	Units      string    `json:"units"`
+	Rank       string    `json:"rank"`
+	Setting    wSetting  `json:"setting"`
+	Load       wLoad     `json:"load"`
+	SelfWeight bool      `json:"self_weight"`
+	Materials  []string  `json:"materials"`
+	Steel      wSteel    `json:"steel"`
+	Concrete   wConcrete `json:"concrete"`
+	Timber     wTimber   `json:"timber"`
+	Composite  wFilled   `json:"composite"`
+	Carbon     wCarbon   `json:"carbon"`
 }
 
 type wSetting struct {

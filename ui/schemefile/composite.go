@@ -2,16 +2,19 @@ package schemefile
 
 import "upright/ui/model"
 
-// wComposite is the optional "composite" object: the concrete-filled HSS
+// compositeKeys are the fields of the "composite" object.
+var compositeKeys = []string{"families", "fill_fc"}
+
+// wFilled is the optional "composite" object: the concrete-filled HSS
 // options. Marshal always writes it; a file without it (or without one of
 // its fields) reads with the default.
-type wComposite struct {
+type wFilled struct {
 	Families []string `json:"families"`
 	FillFc   *string  `json:"fill_fc"`
 }
 
-func marshalComposite(o model.CompositeOptions, sys model.Units) wComposite {
-	w := wComposite{Families: append([]string{}, o.Families...)}
+func marshalComposite(o model.CompositeOptions, sys model.Units) wFilled {
+	w := wFilled{Families: append([]string{}, o.Families...)}
 	if o.FillFcMPa != 0 {
 		v := stressKind.format(o.FillFcMPa, sys)
 		w.FillFc = &v

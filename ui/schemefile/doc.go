@@ -5,11 +5,10 @@
 //
 // A scheme file is one UTF-8 JSON object of at most 1 MiB (MaxSize),
 // conventionally named *.upright.json. Every field below must be present
-// (null is allowed only where stated; "composite" may be absent) and no
-// other field may appear; object keys may come in any order but not twice.
-// Every physical quantity is a string holding a number and its unit, read by
-// ui/units, so "14 ft", "4.2 m", "4200 mm", "14'-6\"" and "168 in" are all
-// lengths. Units accepted:
+// (null is allowed only where stated) and no other field may appear; object
+// keys may come in any order but not twice. Every physical quantity is a
+// string holding a number and its unit, read by ui/units, so "14 ft",
+// "4.2 m", "4200 mm", "14'-6\"" and "168 in" are all lengths. Units accepted:
 //
 //	length    mm, cm, m, in, ft, and feet-inches such as 14'-6"
 //	force     N, kN, MN, lb, kip (k), t (tonne-force)
@@ -102,7 +101,7 @@
 // The "composite" object and each of its fields may be left out: a file
 // written before the composite material existed reads unchanged, with every
 // filled family on and the fill at the concrete f'c. Marshal always writes
-// it. The format version stays 1.
+// it. It needs no new format version.
 //
 // Marshal writes each quantity in the unit of the scheme's own system (ft,
 // kip, psf, ft2, ksi for US; m, kN, kPa, m2, MPa for SI) when that reads back

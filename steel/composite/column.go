@@ -131,8 +131,13 @@ func NewColumn(sec Section, mat Materials) (Column, error) {
 	if err := mat.Validate(); err != nil {
 		return Column{}, err
 	}
-	if !(sec.As > 0) || !(sec.Ac > 0) || !(sec.Isx > 0) || !(sec.Isy > 0) || !(sec.Icx > 0) || !(sec.Icy > 0) || !(sec.T > 0) {
-		return Column{}, fmt.Errorf("section %q: areas and moments of inertia must be greater than zero", sec.Name)
+	for _, v := range [...]float64{sec.As, sec.Ac, sec.Isx, sec.Isy, sec.Icx, sec.Icy, sec.T, sec.Lambda()} {
+		if !(v > 0) || math.IsInf(v, 0) {
+			return Column{}, fmt.Errorf("section %q: areas, moments of inertia, wall and wall ratio must be finite and greater than zero", sec.Name)
+		}
+	}
+	if !(sec.SteelLbPerFt >= 0) || math.IsInf(sec.SteelLbPerFt, 0) {
+		return Column{}, fmt.Errorf("section %q: steel weight %v is not accepted; a finite weight of zero or more, lb/ft", sec.Name, sec.SteelLbPerFt)
 	}
 	c := Column{Sec: sec, Mat: mat, fy: math.Min(mat.Fy, MaxFyStrength), wc: mat.Wc}
 	if c.wc == 0 {

@@ -188,6 +188,18 @@ func TestBadInput(t *testing.T) {
 	assert.ErrorContains(t, err, "only square, rectangular and round HSS")
 	_, err = NewSection(nil)
 	assert.Error(t, err)
+	for _, bad := range []func(*Section){
+		func(s *Section) { s.As = math.Inf(1) },
+		func(s *Section) { s.Icx = math.NaN() },
+		func(s *Section) { s.WallBT, s.WallHT = 0, 0 },
+		func(s *Section) { s.T = -1 },
+		func(s *Section) { s.SteelLbPerFt = math.NaN() },
+	} {
+		s2 := sec
+		bad(&s2)
+		_, err := NewColumn(s2, Materials{Fy: 50, Fc: 5})
+		assert.ErrorContains(t, err, "section")
+	}
 	_, err = Prepare(steel.W, Materials{Fy: 50, Fc: 5})
 	assert.Error(t, err)
 	c := column(t, "HSS8X8X1/2", Materials{Fy: 50, Fc: 5})

@@ -75,7 +75,7 @@ func (c *Column) Check(in steel.Input) (Result, error) {
 	step("AISC 360-22 I1.3", "Fy", fyNote, c.fy, "ksi")
 	step("AISC 360-22 I1.3", "f'c", "fill, normal-weight concrete, 3 to 10 ksi", c.Mat.Fc, "ksi")
 	step("AISC 360-22 I2.1b", "wc", "unit weight of the fill", c.wc, "pcf")
-	step("AISC 360-22 I2.1b", "Ec", "wc^1.5 √f'c", c.ec, "ksi")
+	step("AISC 360-22 I2.1b", "Ec", "wc^1.5 √f'c (from memory)", c.ec, "ksi")
 	step("AISC 360-22 I2.2", "As", "area of the steel tube (design wall 0.93 tnom, B4.2)", s.As, "in2")
 	step("AISC 360-22 I2.2", "Ac", "area of the concrete fill", s.Ac, "in2")
 	step("AISC 360-22 I2.2a", "As/Ag", "steel share of the gross area (at least 0.01)", s.As/s.Ag(), "")
@@ -91,12 +91,12 @@ func (c *Column) Check(in steel.Input) (Result, error) {
 	step("AISC 360-22 Table I1.1a", "λmax", lmax+" (largest permitted; from memory)", c.lim.LambdaMax, "")
 
 	// I2.2b: nominal strength at zero length.
-	c2 := "0.85 (rectangular)"
+	c2 := "0.85 (rectangular; from memory)"
 	if s.Round {
-		c2 = "0.95 (round)"
+		c2 = "0.95 (round; from memory)"
 	}
 	step("AISC 360-22 I2.2b", "C2", c2, c.c2, "")
-	step("AISC 360-22 Eq. I2-9", "Pp", "Fy As + C2 f'c Ac", c.pp, "kip")
+	step("AISC 360-22 Eq. I2-9", "Pp", "Fy As + C2 f'c Ac (equation numbers of I2.2b from memory)", c.pp, "kip")
 	switch c.cls {
 	case Compact:
 		step("AISC 360-22 Eq. I2-9", "Pno", "Pp (compact: λ ≤ λp)", c.pno, "kip")
@@ -161,9 +161,9 @@ func (c *Column) Check(in steel.Input) (Result, error) {
 	r.Factor = Factor(in.Method)
 	r.Available = fast.Available
 	if in.Method == steel.LRFD {
-		step("AISC 360-22 I2.1b", "φc Pn", "0.75 Pn", r.Available, "kip")
+		step("AISC 360-22 I2.1b", "φc Pn", "0.75 Pn (from memory)", r.Available, "kip")
 	} else {
-		step("AISC 360-22 I2.1b", "Pn/Ωc", "Pn / 2.00", r.Available, "kip")
+		step("AISC 360-22 I2.1b", "Pn/Ωc", "Pn / 2.00 (from memory)", r.Available, "kip")
 	}
 	r.Slenderness = fast.Slenderness
 	r.Mode = fast.Mode

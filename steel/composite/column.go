@@ -20,7 +20,7 @@ const (
 const MaxFyStrength = 80.0
 
 // Resistance and safety factors for composite compression members, AISC
-// 360-22 I2.1b.
+// 360-22 I2.1b (from memory).
 const (
 	PhiC   = 0.75
 	OmegaC = 2.00
@@ -144,7 +144,7 @@ func NewColumn(sec Section, mat Materials) (Column, error) {
 		c.wc = DefaultWc
 	}
 	fy, fc := c.fy, mat.Fc
-	c.ec = math.Pow(c.wc, 1.5) * math.Sqrt(fc) // AISC 360-22 I2.1b: Ec = wc^1.5 √f′c, ksi
+	c.ec = math.Pow(c.wc, 1.5) * math.Sqrt(fc) // AISC 360-22 I2.1b: Ec = wc^1.5 √f′c, ksi (from memory)
 	c.lim = TableI11a(sec.Round, fy)
 	c.lam = sec.Lambda()
 	if sec.As < 0.01*sec.Ag() {
@@ -153,9 +153,9 @@ func NewColumn(sec Section, mat Materials) (Column, error) {
 	if c.lam > c.lim.LambdaMax {
 		return c, fmt.Errorf("%s: wall ratio %.1f exceeds %.1f, the largest AISC 360-22 Table I1.1a permits for a filled member", sec.Name, c.lam, c.lim.LambdaMax)
 	}
-	c.c2 = 0.85 // rectangular sections (AISC 360-22 I2.2b)
+	c.c2 = 0.85 // rectangular sections (AISC 360-22 I2.2b, from memory)
 	if sec.Round {
-		c.c2 = 0.95 // round sections: confinement (AISC 360-22 I2.2b)
+		c.c2 = 0.95 // round sections: confinement (AISC 360-22 I2.2b, from memory)
 	}
 	c.pp = fy*sec.As + c.c2*fc*sec.Ac // Eq. I2-9 (Asr = 0: no longitudinal bars)
 	c.py = fy*sec.As + 0.7*fc*sec.Ac  // Py of Eq. I2-10 (from memory)

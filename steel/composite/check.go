@@ -9,40 +9,40 @@ import (
 
 // Result is the full outcome of Check with its trace, in US customary units.
 type Result struct {
-	Section string // the tube's AISC label
-	Method  steel.Method
-	Fy      float64 // the yield stress used, ksi
-	Fc      float64 // the fill's f′c, ksi
-	Ec      float64 // ksi
-	As, Ac  float64 // in²
-	C3      float64
+	Section string       // the tube's AISC label
+	Method  steel.Method // LRFD or ASD
+	Fy      float64      // the yield stress used, ksi
+	Fc      float64      // the fill's f′c, ksi
+	Ec      float64      // the fill's modulus, ksi (I2.1b)
+	As, Ac  float64      // steel and fill areas, in²
+	C3      float64      // the fill's stiffness coefficient (I2.2b)
 
-	Class                      Class
+	Class                      Class   // Table I1.1a classification
 	Lambda                     float64 // classifying wall ratio
 	LambdaP, LambdaR, LambdaMx float64 // Table I1.1a limits
 	Fcr                        float64 // slender walls: Eq. I2-12 or I2-13, ksi; 0 otherwise
-	Pp, Py, Pno                float64 // kip
+	Pp, Py, Pno                float64 // plastic, yield and nominal zero-length strengths, kip
 
-	K              float64
-	Lcx, Lcy       float64 // effective lengths, in
-	EIx, EIy       float64 // EIeff about each axis, kip·in²
-	Pex, Pey       float64 // elastic buckling loads, kip
-	Pe             float64 // governing, kip
-	GoverningAxis  Axis
-	Pn             float64 // kip
-	Factor         float64 // φc or 1/Ωc
-	Available      float64 // kip
-	Slenderness    float64 // Lc/r of the tube about the governing axis
-	Mode           Mode
-	Governing      string   // the mode in plain words
-	Plain          string   // one sentence for a client on what governs
-	Equations      []string // equations applied, in order
-	Steps          []steel.Step
-	Notes          []string
-	Warnings       []string
-	WeightLbPerFt  float64 // tube plus fill
-	SteelLbPerFt   float64
-	ConcreteLbPerF float64
+	K              float64      // effective-length factor used
+	Lcx, Lcy       float64      // effective lengths, in
+	EIx, EIy       float64      // EIeff about each axis, kip·in²
+	Pex, Pey       float64      // elastic buckling loads, kip
+	Pe             float64      // governing, kip
+	GoverningAxis  Axis         // the axis of the smaller Pe
+	Pn             float64      // nominal strength, kip
+	Factor         float64      // φc or 1/Ωc
+	Available      float64      // φc Pn or Pn/Ωc, kip
+	Slenderness    float64      // Lc/r of the tube about the governing axis
+	Mode           Mode         // governing mode code
+	Governing      string       // the mode in plain words
+	Plain          string       // one sentence for a client on what governs
+	Equations      []string     // equations applied, in order
+	Steps          []steel.Step // the trace in the order of the specification
+	Notes          []string     // remarks that are not warnings
+	Warnings       []string     // visible warnings (Lc/r above 200)
+	WeightLbPerFt  float64      // tube plus fill, lb/ft
+	SteelLbPerFt   float64      // the tube's nominal weight, lb/ft
+	ConcreteLbPerF float64      // the fill's weight, lb/ft
 }
 
 // Check evaluates the column by AISC 360-22 I2.2 with the full trace. The

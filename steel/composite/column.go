@@ -99,9 +99,9 @@ func TableI11a(round bool, fy float64) Limits {
 // length-independent quantity of AISC 360-22 I2.2 worked out. Build it with
 // NewColumn.
 type Column struct {
-	Sec  Section
-	Mat  Materials
-	fy   float64 // the yield stress used, ksi (Fy held to MaxFyStrength)
+	Sec  Section   // the filled section
+	Mat  Materials // the strengths as given (Fy before the I1.3 limit)
+	fy   float64   // the yield stress used, ksi (Fy held to MaxFyStrength)
 	wc   float64
 	ec   float64 // Ec, ksi
 	lim  Limits

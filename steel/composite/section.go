@@ -28,9 +28,9 @@ const DefaultWc = 145.0
 // Section is the geometry of one filled tube: the steel HSS and the concrete
 // core inside it, in inches.
 type Section struct {
-	Name  string // the tube's AISC label, e.g. "HSS10X10X1/2"
-	Round bool   // round HSS; otherwise square or rectangular
-	H, B  float64
+	Name  string  // the tube's AISC label, e.g. "HSS10X10X1/2"
+	Round bool    // round HSS; otherwise square or rectangular
+	H, B  float64 // box: outside height (depth for the x axis) and width
 	D     float64 // round: outside diameter
 	T     float64 // design wall, 0.93 tnom (AISC 360-22 B4.2)
 

@@ -3,7 +3,7 @@ package model
 import (
 	"context"
 	"fmt"
-		"runtime"
+	"runtime"
 	"sort"
 	"sync"
 )

@@ -3,7 +3,9 @@ package plots
 import (
 	"bufio"
 	"fmt"
+	"image"
 	"io"
+	"math"
 	"os"
 
 	"gonum.org/v1/plot/vg"
@@ -18,7 +20,8 @@ import (
 // A MapRaster is not safe for concurrent use.
 type MapRaster struct {
 	*Raster
-	k *mapComposer
+	k    *mapComposer
+	area image.Rectangle
 }
 
 // NewMapRaster returns a MapRaster with its own width × height pixel buffer.
@@ -49,8 +52,17 @@ func (r *MapRaster) RenderMap(m *Map) error {
 	cv := vgimg.NewWith(vgimg.UseImageWithContext(r.img, ctx), vgimg.UseDPI(r.dpi))
 	dc := draw.New(cv)
 	r.k.draw(dc, m, true)
+	// Where the cells landed, in pixels from the top left, for pointing.
+	d, scale := r.k.scene.data, float64(r.dpi)/72
+	h := float64(r.img.Bounds().Dy())
+	r.area = image.Rect(int(math.Round(float64(d.Min.X)*scale)), int(math.Round(h-float64(d.Max.Y)*scale)),
+		int(math.Round(float64(d.Max.X)*scale)), int(math.Round(h-float64(d.Min.Y)*scale)))
 	return nil
 }
+
+// CellsArea returns the pixel rectangle the last RenderMap drew the cells
+// in; the cells divide it evenly when the map's X and Y are evenly spaced.
+func (r *MapRaster) CellsArea() image.Rectangle { return r.area }
 
 // WriteMap validates m and writes it to w in format f at the given size.
 func WriteMap(w io.Writer, f Format, m *Map, size Size) error {

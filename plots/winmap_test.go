@@ -177,3 +177,19 @@ func BenchmarkMapRender(b *testing.B) {
 		}
 	}
 }
+
+// TestMapCellsArea: the reported cell area lies inside the image and a
+// pixel in it shows a region colour, not the white page.
+func TestMapCellsArea(t *testing.T) {
+	r, err := NewMapRaster(640, 400)
+	require.NoError(t, err)
+	require.NoError(t, r.RenderMap(sampleMap(20, 10)))
+	a := r.CellsArea()
+	assert.True(t, a.In(r.Image().Bounds()), "%v", a)
+	assert.Greater(t, a.Dx(), 300)
+	assert.Greater(t, a.Dy(), 200)
+	c := r.Image().RGBAAt(a.Min.X+3, a.Max.Y-3)
+	assert.False(t, c.R == 255 && c.G == 255 && c.B == 255, "bottom-left cell is painted: %v", c)
+	o := r.Image().RGBAAt(a.Min.X-12, a.Max.Y-3)
+	assert.True(t, o.R == 255 && o.G == 255 && o.B == 255, "left of the cells is the page: %v", o)
+}

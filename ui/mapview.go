@@ -31,6 +31,7 @@ type mapView struct {
 	surface  *mapSurface
 	status   *widget.Label
 	progress *widget.ProgressBar
+	inReport *widget.Check // the scheme's ReportMap
 	front    *image.RGBA
 	shown    mapGeometry // where the cells of the image on screen lie (UI goroutine)
 	visible  bool
@@ -129,7 +130,13 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 	mv.status.Truncation = fyne.TextTruncateEllipsis
 	mv.progress = widget.NewProgressBar()
 	mv.progress.Hide()
-	foot := container.NewBorder(nil, nil, nil, fixedWidth(160, mv.progress), mv.status)
+	mv.inReport = widget.NewCheck("Map in the client report", func(on bool) {
+		if w.quiet > 0 || on == w.st.Draft.ReportMap {
+			return
+		}
+		w.after(w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }))
+	})
+	foot := container.NewBorder(nil, nil, nil, container.NewHBox(mv.inReport, fixedWidth(160, mv.progress)), mv.status)
 	view := container.NewBorder(nil, foot, nil, nil, mv.surface)
 	tabs := container.NewAppTabs(container.NewTabItem("Chart", chartArea), container.NewTabItem("Map", view))
 	tabs.OnSelected = func(t *container.TabItem) {
@@ -178,10 +185,6 @@ func (mv *mapView) mapSpecFor(sc *model.Scheme, r model.Range) model.MapSpec {
 	sp.Lengths = r
 	if !mv.haveSpec || mv.specAxis != model.MapAxisOf(sc) || v < sp.LoadFrom || v > sp.LoadTo || sp.Validate(sc) != nil {
 		sp = model.DefaultMapSpec(sc, r)
-		if sp.Validate(sc) != nil {
-			// Twice the point is beyond what the takedown or the load accepts.
-			sp.LoadTo = v
-		}
 	}
 	return sp
 }
@@ -189,10 +192,18 @@ func (mv *mapView) mapSpecFor(sc *model.Scheme, r model.Range) model.MapSpec {
 // submit asks the worker for the map of the scheme on screen when the view
 // is visible; a change of the map's inputs cancels the map being computed.
 func (mv *mapView) submit() {
-	if mv == nil || !mv.visible || !mv.w.st.HaveValid || mv.wantW < 1 || mv.wantH < 1 {
+	if mv == nil {
 		return
 	}
 	w := mv.w
+	if w.st.HaveValid && mv.inReport.Checked != w.st.Valid.ReportMap {
+		w.quiet++
+		mv.inReport.SetChecked(w.st.Valid.ReportMap)
+		w.quiet--
+	}
+	if !mv.visible || !w.st.HaveValid || mv.wantW < 1 || mv.wantH < 1 {
+		return
+	}
 	sc := w.st.Valid
 	sp := mv.mapSpecFor(&sc, w.st.Range)
 	mv.spec, mv.haveSpec, mv.specAxis = sp, true, model.MapAxisOf(&sc)
@@ -226,7 +237,7 @@ func keyOf(sc model.Scheme, sp model.MapSpec) mapKey {
 	} else {
 		sc.Load.DirectN = 0
 	}
-	sc.Name = ""
+	sc.Name, sc.ReportMap = "", false
 	return mapKey{sc: sc, spec: sp}
 }
 

@@ -107,3 +107,22 @@ func TestMapViewIdleWhileHidden(t *testing.T) {
 	assert.Zero(t, h.w.mapv.maps.Load())
 	assert.Zero(t, h.w.mapv.frames.Load())
 }
+
+// TestMapInReportCheckFollowsTheScheme: the check shows the scheme's
+// report_map and sets it, without recomputing the map.
+func TestMapInReportCheckFollowsTheScheme(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	h.ui(func() {
+		assert.True(t, h.w.mapv.inReport.Checked, "the demo scheme asks for the map")
+		h.w.mapv.inReport.SetChecked(false)
+		assert.False(t, h.w.st.Valid.ReportMap)
+		assert.True(t, h.w.Dirty(), "a change to save")
+	})
+	h.settle()
+	h.ui(func() {
+		a := keyOf(h.w.st.Valid, model.MapSpec{})
+		sc := h.w.st.Valid
+		sc.ReportMap = true
+		assert.True(t, reflect.DeepEqual(a, keyOf(sc, model.MapSpec{})))
+	})
+}

@@ -51,13 +51,19 @@ func MapAxisOf(sc *Scheme) MapAxis {
 
 // DefaultMapSpec is the map around a scheme: the given length range (the
 // chart's) and loads from a quarter to twice the scheme's own load (or
-// area), at the default steps.
+// area), at the default steps; up to the scheme's own load when twice it
+// is more than the load (or the takedown) accepts.
 func DefaultMapSpec(sc *Scheme, r Range) MapSpec {
+	axis := MapAxisOf(sc)
 	v := sc.Load.DirectN
-	if MapAxisOf(sc) == MapTributary {
+	if axis == MapTributary {
 		v = sc.Load.TributaryM2
 	}
-	return MapSpec{Lengths: r, LoadFrom: v / 4, LoadTo: 2 * v}
+	sp := MapSpec{Lengths: r, LoadFrom: v / 4, LoadTo: 2 * v}
+	if atLoad(sc.Load, axis, sp.LoadTo).Validate() != nil {
+		sp.LoadTo = v
+	}
+	return sp
 }
 
 // withDefaults fills the zero step counts.

@@ -45,6 +45,7 @@ type wFile struct {
 	Concrete   wConcrete `json:"concrete"`
 	Timber     wTimber   `json:"timber"`
 	Carbon     wCarbon   `json:"carbon"`
+	ReportMap  bool      `json:"report_map"`
 }
 
 type wSetting struct {
@@ -189,6 +190,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 		v := stressKind.format(c.FcMPa, sys)
 		w.Concrete.Fc = &v
 	}
+	w.ReportMap = sc.ReportMap
 	defaults := model.DefaultCarbon()
 	for _, ck := range model.CarbonKinds {
 		v, ok := sc.Carbon[ck.Key]
@@ -550,6 +552,9 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 		return sc, e
 	}
 	if e := r.carbon(root, &sc); e != nil {
+		return sc, e
+	}
+	if e := r.reportMap(root, &sc); e != nil {
 		return sc, e
 	}
 	return sc, nil

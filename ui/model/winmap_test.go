@@ -6,6 +6,7 @@ import (
 	"math"
 	"math/rand"
 	"path/filepath"
+	"runtime"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -84,10 +85,15 @@ func TestMapMatchesDirectEvaluation(t *testing.T) {
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
 			sp := model.DefaultMapSpec(&c.sc, c.r)
+			if raceOn {
+				sp.Columns, sp.Rows = 30, 12
+			}
 			g, err := model.ComputeMap(context.Background(), c.sc, sp, nil)
 			require.NoError(t, err)
-			require.Len(t, g.LengthsMM, model.MapDefaultColumns)
-			require.Len(t, g.Loads, model.MapDefaultRows)
+			if !raceOn {
+				require.Len(t, g.LengthsMM, model.MapDefaultColumns)
+				require.Len(t, g.Loads, model.MapDefaultRows)
+			}
 			assert.InDelta(t, c.r.FromMM, g.LengthsMM[0], 1e-9)
 			assert.InDelta(t, c.r.ToMM, g.LengthsMM[len(g.LengthsMM)-1], 1e-9)
 			some, none := 0, 0
@@ -294,5 +300,30 @@ func TestWithLoadMatchesNew(t *testing.T) {
 				}
 			}
 		}
+	}
+}
+
+// TestMapperMemoryFlat: repeated maps with one Mapper keep the live heap flat.
+func TestMapperMemoryFlat(t *testing.T) {
+	if raceOn {
+		t.Skip("the race detector's shadow memory makes heap sizes meaningless")
+	}
+	for _, sc := range []model.Scheme{directScheme(), demoScheme(t)} {
+		sp := model.DefaultMapSpec(&sc, model.Range{FromMM: 500, ToMM: 12000})
+		var mp model.Mapper
+		var before, after runtime.MemStats
+		for i := 0; i < 2; i++ {
+			_, err := mp.Compute(context.Background(), sc, sp, nil)
+			require.NoError(t, err)
+		}
+		runtime.GC()
+		runtime.ReadMemStats(&before)
+		for i := 0; i < 3; i++ {
+			_, err := mp.Compute(context.Background(), sc, sp, nil)
+			require.NoError(t, err)
+		}
+		runtime.GC()
+		runtime.ReadMemStats(&after)
+		assert.Less(t, int64(after.HeapAlloc)-int64(before.HeapAlloc), int64(4<<20), "live heap growth over 3 maps")
 	}
 }

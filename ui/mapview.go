@@ -136,7 +136,8 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 		}
 		w.after(w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }))
 	})
-	foot := container.NewBorder(nil, nil, nil, container.NewHBox(mv.inReport, fixedWidth(160, mv.progress)), mv.status)
+	export := widget.NewButton("Export…", w.ExportMap)
+	foot := container.NewBorder(nil, nil, nil, container.NewHBox(mv.inReport, export, fixedWidth(160, mv.progress)), mv.status)
 	view := container.NewBorder(nil, foot, nil, nil, mv.surface)
 	tabs := container.NewAppTabs(container.NewTabItem("Chart", chartArea), container.NewTabItem("Map", view))
 	tabs.OnSelected = func(t *container.TabItem) {

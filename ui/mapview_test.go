@@ -1,6 +1,9 @@
 package ui
 
 import (
+	"bytes"
+	"os"
+	"path/filepath"
 	"reflect"
 	"testing"
 	"time"
@@ -9,6 +12,7 @@ import (
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
 
+	"upright/plots"
 	"upright/ui/model"
 )
 
@@ -125,4 +129,26 @@ func TestMapInReportCheckFollowsTheScheme(t *testing.T) {
 		sc.ReportMap = true
 		assert.True(t, reflect.DeepEqual(a, keyOf(sc, model.MapSpec{})))
 	})
+}
+
+// TestExportMapFile writes the map in each format; a bad extension is refused.
+func TestExportMapFile(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	dir := t.TempDir()
+	for _, c := range []struct{ ext, magic string }{{".png", "\x89PNG"}, {".svg", "<?xml"}, {".pdf", "%PDF"}} {
+		path := filepath.Join(dir, "map"+c.ext)
+		var err error
+		h.ui(func() { err = h.w.ExportMapFile(path) })
+		require.NoError(t, err)
+		b, err := os.ReadFile(path)
+		require.NoError(t, err)
+		assert.True(t, bytes.HasPrefix(b, []byte(c.magic)), c.ext)
+	}
+	var err error
+	h.ui(func() {
+		// The error dialog needs a window on screen in the test app.
+		h.w.win.Show()
+		err = h.w.ExportMapFile(filepath.Join(dir, "map.gif"))
+	})
+	assert.ErrorIs(t, err, plots.ErrUnknownFormat)
 }

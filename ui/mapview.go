@@ -361,7 +361,7 @@ func (mv *mapView) loop() {
 
 // mapStatus says what the map shows and how to use it.
 func mapStatus(g *model.WinMap) string {
-	won := 0
+	won := 0 // families that win at least one of the map's cells
 	for fi := range g.Families {
 		for k := range g.Cells {
 			if g.Cells[k].Family == fi {
@@ -370,7 +370,7 @@ func mapStatus(g *model.WinMap) string {
 			}
 		}
 	}
-	return fmt.Sprintf("%d families win somewhere on this %d × %d map. Click a cell to move the scheme there.", won, len(g.LengthsMM), len(g.Loads))
+	return fmt.Sprintf("%d families win. Click a cell to move there.", won)
 }
 
 // tapped moves the scheme to the length and load (or area) of the cell under pos.

@@ -210,6 +210,7 @@ type Mapper struct {
 type mapWorker struct {
 	reach []int   // per candidate (all families, flattened): last working column, -1 for none
 	best  [][]int // per family, per column: best working candidate, -1 for none
+	hint  []int   // per candidate: its reach in the worker's previous row (0 before the first)
 }
 
 // ComputeMap computes a winner map with a fresh Mapper.
@@ -281,24 +282,22 @@ func (mp *Mapper) Compute(ctx context.Context, sc Scheme, sp MapSpec, progress f
 	for len(mp.workers) < nw {
 		mp.workers = append(mp.workers, &mapWorker{})
 	}
-	rows := make(chan int, nr)
-	for i := 0; i < nr; i++ {
-		rows <- i
-	}
-	close(rows)
 	var (
 		wg      sync.WaitGroup
 		mu      sync.Mutex
 		done    int
 		failure error
 	)
+	// Each worker takes a block of neighbouring rows, upwards, so that a
+	// candidate's reach in the row below is a good first guess.
 	for w := 0; w < nw; w++ {
 		wk := mp.workers[w]
 		wk.size(base, nc, total)
+		from, to := w*nr/nw, (w+1)*nr/nw
 		wg.Add(1)
 		go func() {
 			defer wg.Done()
-			for i := range rows {
+			for i := from; i < to; i++ {
 				if ctx.Err() != nil {
 					return
 				}
@@ -358,6 +357,13 @@ func (wk *mapWorker) size(m *Model, nc, total int) {
 		wk.reach = make([]int, total)
 	}
 	wk.reach = wk.reach[:total]
+	if cap(wk.hint) < total {
+		wk.hint = make([]int, total)
+	}
+	wk.hint = wk.hint[:total]
+	for k := range wk.hint {
+		wk.hint[k] = 0
+	}
 	for len(wk.best) < len(m.Families) {
 		wk.best = append(wk.best, nil)
 	}
@@ -388,7 +394,8 @@ func (wk *mapWorker) row(ctx context.Context, base *Model, sc Scheme, axis MapAx
 			return fmt.Errorf("map: family %s changes with the load", f.Name())
 		}
 		for k := 0; k < f.Len(); k++ {
-			wk.reach[at+k] = m.gridReach(fi, k, sc.Setting, g.LengthsMM)
+			r := m.gridReach(fi, k, sc.Setting, g.LengthsMM, wk.hint[at+k])
+			wk.reach[at+k], wk.hint[at+k] = r, r
 		}
 		// The best of the family at a column is the first candidate in
 		// metric order whose reach covers it: walk the order once, each
@@ -460,21 +467,41 @@ func (m *Model) WithLoad(l Load) (*Model, error) {
 	return &out, nil
 }
 
-// gridReach returns the last of the lengths at which a candidate works, by
-// bisection over their indices, or -1 when it does not work at the first.
-// It asks works, the same check as Reach, at the grid's own lengths.
-func (m *Model) gridReach(fi, i int, base Setting, lengths []float64) int {
+// gridReach returns the last of the lengths at which a candidate works, or
+// -1 when it does not work at the first. It asks works, the same check as
+// Reach, at the grid's own lengths, and relies on the same fact: strength
+// never rises with length and demand never falls, so the working lengths
+// are the first ones. hint is a guess (the reach in a neighbouring row):
+// the search steps out from it in doubling steps until the reach is
+// bracketed, then bisects the bracket, so a good guess settles it in two or
+// three checks. The hint only saves work: any hint gives the same answer.
+func (m *Model) gridReach(fi, i int, base Setting, lengths []float64, hint int) int {
 	n := len(lengths)
-	if !m.works(fi, i, base, lengths[0]) {
-		return -1
+	works := func(k int) bool { return m.works(fi, i, base, lengths[k]) }
+	lo, hi := -1, n // every index up to lo works, every index from hi fails
+	h := min(max(hint, 0), n-1)
+	if works(h) {
+		lo = h
+		for step := 1; lo+step < hi; step *= 2 {
+			if !works(lo + step) {
+				hi = lo + step
+				break
+			}
+			lo += step
+		}
+	} else {
+		hi = h
+		for step := 1; hi-step > lo; step *= 2 {
+			if works(hi - step) {
+				lo = hi - step
+				break
+			}
+			hi -= step
+		}
 	}
-	if m.works(fi, i, base, lengths[n-1]) {
-		return n - 1
-	}
-	lo, hi := 0, n-1 // works at lo, fails at hi
 	for hi-lo > 1 {
-		mid := (lo + hi) / 2
-		if m.works(fi, i, base, lengths[mid]) {
+		mid := lo + (hi-lo)/2
+		if works(mid) {
 			lo = mid
 		} else {
 			hi = mid

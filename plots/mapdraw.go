@@ -47,6 +47,10 @@ var hatches = []hatch{
 	{[]float64{157.5}, 6},
 	{[]float64{67.5}, 6},
 	{[]float64{112.5}, 6},
+	{[]float64{0, 45}, 8},
+	{[]float64{90, 135}, 8},
+	{[]float64{22.5, 112.5}, 8},
+	{[]float64{67.5, 157.5}, 8},
 }
 
 // noneHatchPattern marks the cells where nothing works: a dense cross.

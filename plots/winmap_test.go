@@ -3,6 +3,7 @@ package plots
 import (
 	"bytes"
 	"errors"
+	"fmt"
 	"math"
 	"os"
 	"path/filepath"
@@ -192,4 +193,17 @@ func TestMapCellsArea(t *testing.T) {
 	assert.False(t, c.R == 255 && c.G == 255 && c.B == 255, "bottom-left cell is painted: %v", c)
 	o := r.Image().RGBAAt(a.Min.X-12, a.Max.Y-3)
 	assert.True(t, o.R == 255 && o.G == 255 && o.B == 255, "left of the cells is the page: %v", o)
+}
+
+// TestMapKeysStayApartInGrey: the first keys of a map each get their own
+// hatch pattern, none of them the pattern of the cells where nothing works,
+// so regions differ without colour.
+func TestMapKeysStayApartInGrey(t *testing.T) {
+	seen := map[string]bool{fmt.Sprint(noneHatchPattern): true}
+	for _, h := range hatches {
+		k := fmt.Sprint(h)
+		assert.False(t, seen[k], "pattern %v used twice", h)
+		seen[k] = true
+	}
+	assert.GreaterOrEqual(t, len(hatches), 14, "room for every family of one scheme: 6 steel, 4 concrete, 2 timber and more")
 }

@@ -184,7 +184,10 @@ func (mv *mapView) mapSpecFor(sc *model.Scheme, r model.Range) model.MapSpec {
 	}
 	sp := mv.spec
 	sp.Lengths = r
-	if !mv.haveSpec || mv.specAxis != model.MapAxisOf(sc) || v < sp.LoadFrom || v > sp.LoadTo || sp.Validate(sc) != nil {
+	// A point moved to an edge cell reads back rounded by its field: a
+	// hair outside the grid still keeps it.
+	lo, hi := sp.LoadFrom*(1-1e-2), sp.LoadTo*(1+1e-2)
+	if !mv.haveSpec || mv.specAxis != model.MapAxisOf(sc) || v < lo || v > hi || sp.Validate(sc) != nil {
 		sp = model.DefaultMapSpec(sc, r)
 	}
 	return sp

@@ -15,4 +15,11 @@
 // and when printed in grey. The demand is a thick black dashed line. The y axis
 // starts at zero and is capped at DemandCapFactor times the largest demand so
 // that one very strong candidate does not flatten the others.
+//
+// It also draws the winner map (Map): a grid over unbraced length and load
+// coloured by the family that wins each cell, each family's region hatched
+// in its own pattern so the map reads in grey, bold boundaries where the
+// winner changes, cross-hatched grey where nothing works, the scheme's own
+// point, a legend and the caution line; into a reusable MapRaster or to
+// PNG, SVG or PDF (WriteMap, SaveMap).
 package plots

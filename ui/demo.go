@@ -33,5 +33,6 @@ func DemoScheme() model.Scheme {
 	}
 	sc.SelfWeight = true
 	sc.Metric = model.ByWeight
+	sc.ReportMap = true // the client report shows where each family wins
 	return sc
 }

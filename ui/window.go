@@ -125,6 +125,8 @@ type Window struct {
 	status     *widget.Label
 
 	files fileState // the scheme's file, unsaved changes, recent files, autosave
+
+	mapv *mapView // the Map view beside the chart
 }
 
 // processStart is when the package was initialised, close to the start of the process.
@@ -175,6 +177,7 @@ func (w *Window) Close() {
 	w.stopAutosave()
 	unregisterWindow(w)
 	w.eng.Close()
+	w.mapv.close()
 	w.win.Close()
 }
 
@@ -182,6 +185,7 @@ func (w *Window) Close() {
 func (w *Window) build() fyne.CanvasObject {
 	inputs := w.buildInputs()
 	chartArea, xsPanel := w.buildChartArea()
+	chartArea = w.withMapView(chartArea)
 	results := w.buildResults()
 	calc := w.buildCalc()
 
@@ -238,6 +242,7 @@ func (w *Window) submit() {
 		Pinned: append([]string(nil), w.pinned...), Selected: w.selected,
 		Width: w.wantW, Height: w.wantH, DPI: chartDPI(scale),
 	})
+	w.mapv.submit()
 }
 
 // after handles the outcome of an input change: fields, banner, slider and engine.

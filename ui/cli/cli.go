@@ -113,6 +113,7 @@ func usage(w io.Writer) {
   upright compare [flags]       lightest working size of each family at one length
   upright crossovers [flags]    lengths where the answer changes
   upright curve --designation NAME --from 1m --to 10m [flags]
+  upright map --length-range 1m..12m --load-range 500kN..5000kN [--steps 100x60] [flags] --out map.png (or --json)
   upright report --scheme FILE --out report.pdf
   upright table [flags] --csv table.csv
   upright scheme [flags] --out FILE     write the scheme built from the flags as a file

@@ -37,6 +37,7 @@ func runReport(args []string, stdout, stderr io.Writer) error {
 	top := f.fs.Int("top", report.DefaultTopN, "working sizes listed per family, 1 to 50")
 	from := f.fs.String("from", "", "start of the chart and crossover range (default 0.5 m)")
 	to := f.fs.String("to", "", "end of the chart and crossover range (default the larger of 12 m and twice --length)")
+	withMap := f.fs.Bool("map", false, "add the map of the winning family over length and load (always added when the scheme's report_map is true)")
 	m, err := buildModel(f, args)
 	if err != nil {
 		return err
@@ -52,7 +53,7 @@ func runReport(args []string, stdout, stderr io.Writer) error {
 		return err
 	}
 	var buf bytes.Buffer
-	if err := report.Write(&buf, m, report.Options{Version: Version, TopN: *top, Range: r}); err != nil {
+	if err := report.Write(&buf, m, report.Options{Version: Version, TopN: *top, Range: r, Map: *withMap}); err != nil {
 		return err
 	}
 	if err := schemefile.WriteFileAtomic(*out, buf.Bytes()); err != nil {

@@ -39,6 +39,7 @@ type Scheme struct {
 	Units      Units
 	Metric     Metric
 	Carbon     CarbonFactors
+	ReportMap  bool // put the map of the winning family in the client report
 }
 
 // CarbonFactors are cradle-to-gate (A1–A3) embodied-carbon factors per kind

@@ -29,6 +29,9 @@ type Options struct {
 	// FullCrossovers adds every change of best size within each family;
 	// without it the report gives each family's best size and its span.
 	FullCrossovers bool
+	// Map adds the map of the winning family over length and load (or
+	// tributary area) even when the scheme does not ask for it (ReportMap).
+	Map bool
 }
 
 // Defaults for Options.
@@ -72,6 +75,8 @@ type facts struct {
 	crossovers []model.Crossover
 	chartPNG   []byte // nil when there is no chart
 	chartNote  string // why there is no chart
+	mapPNG     []byte // the map figure; nil when not asked for or not drawn
+	mapNote    string // why an asked-for map is missing
 }
 
 // gather evaluates the model at its setting, finds the crossovers over the
@@ -127,6 +132,9 @@ func Write(w io.Writer, m *model.Model, opt Options) error {
 	}
 	f, err := gather(context.Background(), m, opt)
 	if err != nil {
+		return err
+	}
+	if err := gatherMap(context.Background(), f); err != nil {
 		return err
 	}
 	d := compose(f)

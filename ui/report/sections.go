@@ -40,6 +40,7 @@ func compose(f *facts) *doc {
 	summary(d, f)
 	inputs(d, f)
 	chartSection(d, f)
+	mapSection(d, f)
 	workingSizes(d, f)
 	crossoverSection(d, f)
 	takedownSection(d, f)

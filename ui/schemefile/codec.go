@@ -46,6 +46,7 @@ type wFile struct {
 	Timber     wTimber   `json:"timber"`
 	Composite  wFilled   `json:"composite"`
 	Carbon     wCarbon   `json:"carbon"`
+	ReportMap  bool      `json:"report_map"`
 }
 
 type wSetting struct {
@@ -191,6 +192,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 		w.Concrete.Fc = &v
 	}
 	w.Composite = marshalComposite(sc.Composite, sys)
+	w.ReportMap = sc.ReportMap
 	defaults := model.DefaultCarbon()
 	for _, ck := range model.CarbonKinds {
 		v, ok := sc.Carbon[ck.Key]
@@ -555,6 +557,9 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 		return sc, e
 	}
 	if e := r.carbon(root, &sc); e != nil {
+		return sc, e
+	}
+	if e := r.reportMap(root, &sc); e != nil {
 		return sc, e
 	}
 	return sc, nil

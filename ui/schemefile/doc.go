@@ -95,7 +95,10 @@
 //	    "concrete": "354 kg CO2e/m³",
 //	    "sawn-timber": "63 kg CO2e/m³",
 //	    "glulam": "137 kg CO2e/m³"
-//	  }
+//	  },
+//	  "report_map": false              put the map of the winning family over
+//	                                   length and load in the client report;
+//	                                   optional: absent reads as false
 //	}
 //
 // The "composite" object and each of its fields may be left out: a file

@@ -73,6 +73,7 @@ func genScheme(t *rapid.T) model.Scheme {
 	}
 
 	sc.SelfWeight = rapid.Bool().Draw(t, "self-weight")
+	sc.ReportMap = rapid.Bool().Draw(t, "report map")
 	sc.Materials = subset(t, model.Materials(), "materials")
 	sc.Steel.Families = subset(t, model.SteelFamilies, "steel families")
 	sc.Steel.FyMPa = maybeZero(t, 200, 700, "Fy")
@@ -153,7 +154,7 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 	}
 	walk("", reflect.TypeOf(model.Scheme{}))
 	want := []string{
-		"Name", "Units", "Metric", "SelfWeight", "Materials", "Carbon",
+		"Name", "Units", "Metric", "SelfWeight", "Materials", "Carbon", "ReportMap",
 		"Setting.LengthMM", "Setting.WeakMM", "Setting.Ends", "Setting.K", "Setting.Method",
 		"Load.Mode", "Load.DirectN", "Load.TributaryM2", "Load.Floors", "Load.FloorDeadKPa", "Load.FloorLiveKPa",
 		"Load.RoofDeadKPa", "Load.RoofLiveKPa", "Load.SnowKPa", "Load.LiveReduction", "Load.KLL", "Load.Occupancy",

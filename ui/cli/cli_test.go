@@ -101,7 +101,7 @@ func TestSchemeFromFlags(t *testing.T) {
 	assert.Equal(t, "SP", sc.Timber.Species)
 	assert.Equal(t, "No.2", sc.Timber.Grade)
 	assert.True(t, sc.Timber.Wet)
-	assert.Equal(t, "1h", sc.Timber.Fire)
+	assert.Equal(t, "1h", sc.Fire.Rating)
 	assert.Equal(t, 3, sc.Timber.FireSides)
 	assert.InDelta(t, 50*units.MPaPerKsi, sc.Steel.FyMPa, 1e-9)
 }

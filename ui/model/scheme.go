@@ -35,6 +35,7 @@ type Scheme struct {
 	Steel      SteelOptions
 	Concrete   ConcreteOptions
 	Timber     TimberOptions
+	Fire       FireOptions // one fire-resistance rating for every material
 	Units      Units
 	Metric     Metric
 	Carbon     CarbonFactors
@@ -56,6 +57,7 @@ func DefaultScheme() Scheme {
 		Steel:      defaultSteelOptions(),
 		Concrete:   defaultConcreteOptions(),
 		Timber:     defaultTimberOptions(),
+		Fire:       defaultFireOptions(),
 		Units:      US,
 		Metric:     ByWeight,
 		Carbon:     DefaultCarbon(),
@@ -126,6 +128,9 @@ func (sc *Scheme) Validate() error {
 		return err
 	}
 	if err := sc.Timber.validate(); err != nil {
+		return err
+	}
+	if err := sc.Fire.validate(); err != nil {
 		return err
 	}
 	for k, v := range sc.Carbon {

@@ -75,6 +75,11 @@ func ParseFireRating(field, s string) (string, error) {
 	if t == "none" || t == "0" || t == "0h" {
 		return "none", nil
 	}
+	if m := strings.TrimSpace(strings.TrimSuffix(t, "min")); m != t {
+		if v, err := strconv.ParseFloat(m, 64); err == nil {
+			t = strconv.FormatFloat(v/60, 'f', -1, 64)
+		}
+	}
 	for _, suf := range []string{"hours", "hour", "hrs", "hr", "h"} {
 		if strings.HasSuffix(t, suf) {
 			t = strings.TrimSpace(strings.TrimSuffix(t, suf))

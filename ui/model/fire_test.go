@@ -262,7 +262,7 @@ func TestFireBadInput(t *testing.T) {
 		require.ErrorAs(t, err, &fe, "%+v", c)
 		assert.Equal(t, c.field, fe.Field)
 	}
-	for in, want := range map[string]string{"2h": "2h", "2": "2h", "1.5 h": "1.5h", "3hr": "3h", "none": "none", "0": "none", "1 hour": "1h"} {
+	for in, want := range map[string]string{"2h": "2h", "2": "2h", "1.5 h": "1.5h", "3hr": "3h", "none": "none", "0": "none", "1 hour": "1h", "90min": "1.5h", "120 min": "2h"} {
 		got, err := ParseFireRating("--fire", in)
 		assert.NoError(t, err, in)
 		assert.Equal(t, want, got, in)

@@ -41,6 +41,7 @@ func compose(f *facts) *doc {
 	inputs(d, f)
 	chartSection(d, f)
 	workingSizes(d, f)
+	fireSection(d, f)
 	crossoverSection(d, f)
 	takedownSection(d, f)
 	assumptions(d, f)
@@ -335,6 +336,7 @@ func inputs(d *doc, f *facts) {
 	add("Concrete reinforcement", fmt.Sprintf("Grade %d bars, ρ up to %.1f%%, %s", c.BarGrade, c.RhoMax*100, transverseWords(c.Transverse)), "")
 	t := sc.Timber
 	add("Timber", timberWords(t), "")
+	add("Fire-resistance rating", fireRatingWords(sc), "")
 	d.table(cols, rows)
 }
 
@@ -368,9 +370,6 @@ func timberWords(t model.TimberOptions) string {
 	}
 	if t.Hot {
 		parts = append(parts, "100–125 °F service")
-	}
-	if t.Fire != "" && t.Fire != "none" {
-		parts = append(parts, fmt.Sprintf("%s fire exposure on %d sides", t.Fire, t.FireSides))
 	}
 	if t.Duration != "" {
 		parts = append(parts, "load duration "+t.Duration)

@@ -94,7 +94,7 @@ func fireSteelStep(x fire.Step) Step {
 	case "lb/ft":
 		out.Value, out.Unit = x.Value*steelKgmPerLbft, "kg/m"
 	case "lb/ft/in":
-		out.Value, out.Unit = x.Value*steelKgmPerLbft/steelMMPerIn, "kg/m/mm"
+		// W/D stays in the equation's own units (the ratio the IBC equation uses).
 	}
 	return out
 }

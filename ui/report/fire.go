@@ -70,3 +70,18 @@ func fireFamilyReason(fr *model.FamilyResult) string {
 	}
 	return "no size carries the demand with the rating"
 }
+
+// fireCSVCells are a candidate's fire columns of the CSV table: rating,
+// protection, resistance provided and the bare plan (the plan columns
+// before them hold the protected plan). dim converts mm to the table's unit.
+func fireCSVCells(st *model.Static, dim func(float64) float64) []string {
+	fc := st.Fire
+	if fc == nil {
+		return []string{"0", "none", "", num(dim(st.FootprintMM[0]), 2), num(dim(st.FootprintMM[1]), 2)}
+	}
+	system := fc.System
+	if !fc.OK {
+		system += "; does not reach the rating: " + fc.Reason
+	}
+	return []string{num(fc.RatingH, 1), system, num(fc.ProvidedH, 2), num(dim(fc.BareFootprintMM[0]), 2), num(dim(fc.BareFootprintMM[1]), 2)}
+}

@@ -1,6 +1,8 @@
 package report
 
 import (
+	"bytes"
+	"strconv"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -43,4 +45,35 @@ func TestReportFireSection(t *testing.T) {
 	bare := newModel(t, "demo")
 	text = pdfText(t, writePDF(t, bare, Options{}))
 	assert.NotContains(t, text, "Protection for")
+}
+
+// The CSV carries the rating, the protection and the bare plan, with the
+// protected plan in the plan columns.
+func TestCSVFireColumns(t *testing.T) {
+	sc := model.DefaultScheme()
+	sc.Units = model.SI
+	sc.Load = model.Load{Mode: model.LoadDirect, DirectN: 1500e3}
+	sc.Fire.Rating = "1h"
+	sc.Materials = []string{"steel"}
+	m, err := model.New(sc)
+	require.NoError(t, err)
+	var buf bytes.Buffer
+	require.NoError(t, WriteCSV(&buf, m, CSVOptions{}))
+	recs := readCSV(t, buf.Bytes())
+	head := recs[0]
+	col := map[string]int{}
+	for i, h := range head {
+		col[h] = i
+	}
+	for _, h := range []string{"fire_rating_h", "fire_system", "fire_provided_h", "bare_width_mm", "bare_depth_mm"} {
+		require.Contains(t, col, h)
+	}
+	require.Greater(t, len(recs), 1)
+	for _, r := range recs[1:] {
+		assert.Equal(t, "1.0", r[col["fire_rating_h"]])
+		assert.Contains(t, r[col["fire_system"]], "Type X gypsum board")
+		w, _ := strconv.ParseFloat(r[col["width_mm"]], 64)
+		bw, _ := strconv.ParseFloat(r[col["bare_width_mm"]], 64)
+		assert.GreaterOrEqual(t, w-bw, 2*15.875-0.02, "protected plan at least one layer each side")
+	}
 }

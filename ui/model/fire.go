@@ -227,7 +227,14 @@ func (f *fireFamily) Detail(i int, s Setting) Detail {
 	if fc == nil {
 		return d
 	}
+	// The fire section of the trace: the rating, the method's lines, the verdict.
+	verdict := "reached: " + fc.System
+	if !fc.OK {
+		verdict = "not reached: " + fc.Reason
+	}
+	d.Steps = append(d.Steps, Step{Clause: fc.Clause, Quantity: "FIRE: rating asked for", Formula: "the scheme's one rating, for every material", Value: fc.RatingH, Unit: "h"})
 	d.Steps = append(d.Steps, fc.Steps...)
+	d.Steps = append(d.Steps, Step{Clause: fc.Clause, Quantity: "FIRE: resistance provided", Formula: verdict, Value: fc.ProvidedH, Unit: "h"})
 	if d.Calc == nil {
 		d.Calc = map[string]any{}
 	}

@@ -50,4 +50,6 @@ func TestFireSelectorProtectsThePlan(t *testing.T) {
 }
 
 // plan writes a plan size as the table's plan column does, in inches.
-func plan(fp [2]float64) string { return units.Dim(fp[0], units.US) + " × " + units.Dim(fp[1], units.US) }
+func plan(fp [2]float64) string {
+	return units.Dim(fp[0], units.US) + " × " + units.Dim(fp[1], units.US)
+}

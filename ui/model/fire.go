@@ -308,10 +308,39 @@ func fireProtect(sc *Scheme, f Family, i int, hours float64) (Static, error) {
 	case "timber":
 		return timberFire(*bare, hours), nil
 	}
+	return fireOther(bare, f.Material(), hours)
+}
+
+// fireOther protects a candidate of a material without its own fire rule.
+// One with a steel shell (e.g. a concrete-filled HSS) is boxed in board as
+// bare steel of the shell's weight alone: the core's heat sink is ignored,
+// which errs on the safe side, and the system says so. Anything else cannot
+// show that it reaches the rating and is not permitted.
+func fireOther(bare *Static, material string, hours float64) (Static, error) {
+	steelKg, core := 0.0, false
+	for _, c := range bare.Constituents {
+		switch c.Kind {
+		case CarbonRolledSteel, CarbonHSSSteel:
+			steelKg += c.Amount
+		case CarbonConcrete:
+			core = true
+		}
+	}
+	if steelKg > 0 {
+		o := fireBox
+		if fp := bare.FootprintMM; fp[0] == fp[1] && bare.PlanAreaMM2 < 0.9*fp[0]*fp[1] {
+			o = fireRoundOutline // round: plan area π·D²/4
+		}
+		st, err := ProtectSteel(*bare, o, steelKg, hours)
+		if err == nil && core {
+			st.Fire.System += "; the steel shell alone, concrete core ignored (conservative)"
+		}
+		return st, err
+	}
 	st := *bare
 	st.Fire = fireBare(bare, hours)
 	st.Fire.System = "none: no calculated fire method for this material"
-	st.Fire.Reason = "no calculated fire method is implemented for " + f.Material()
+	st.Fire.Reason = "no calculated fire method is implemented for " + material
 	return st, nil
 }
 

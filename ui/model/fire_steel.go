@@ -10,6 +10,12 @@ import (
 // enclosure sees it (fire.Profile, fire.Box or fire.Round).
 type SteelOutline = fire.Outline
 
+// Outlines of steel sections for callers outside this file.
+const (
+	fireBox          = fire.Box
+	fireRoundOutline = fire.Round
+)
+
 // SteelOutlineOf maps a steel family name to its outline: W and HP are
 // I-shaped profiles, round HSS and pipe are round, the other HSS are boxes.
 func SteelOutlineOf(family string) (SteelOutline, error) {

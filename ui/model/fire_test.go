@@ -292,3 +292,31 @@ func TestFireNoNaN(t *testing.T) {
 		}
 	}
 }
+
+// A material with a steel shell and no fire rule of its own (a filled HSS)
+// is boxed as bare steel of the shell's weight, the core ignored, and says
+// so. HSS6.625X0.280 shell: 18.99 lb/ft = 28.26 kg/m, OD = 6.625 in (AISC
+// Manual Table 1-13, from memory); at 2 h three layers (R = 173.2 min, see
+// steel/fire hand calculations).
+func TestFireOtherSteelShell(t *testing.T) {
+	d := 6.625 * 25.4
+	st := Static{
+		Material: "filled", Family: "round", Designation: "filled HSS6.625X0.280",
+		MassKgPerM: 28.26 + 40, FootprintMM: [2]float64{d, d}, PlanAreaMM2: math.Pi * d * d / 4,
+		Constituents: []Constituent{{Kind: CarbonHSSSteel, Amount: 18.99 * 0.45359237 / 0.3048}, {Kind: CarbonConcrete, Amount: 0.017}},
+	}
+	out, err := fireOther(&st, "filled", 2)
+	require.NoError(t, err)
+	require.NotNil(t, out.Fire)
+	assert.True(t, out.Fire.OK)
+	assert.Equal(t, 3, out.Fire.Layers)
+	assert.InDelta(t, 173.2/60, out.Fire.ProvidedH, 0.01)
+	assert.InDelta(t, math.Pi*d, out.Fire.HeatedPerimeterMM, 1e-6, "round outline: π·OD")
+	assert.Contains(t, out.Fire.System, "concrete core ignored")
+	assert.InDelta(t, st.MassKgPerM+out.Fire.BoardKgPerM, out.MassKgPerM, 1e-9)
+	// No steel at all: not permitted, with the reason.
+	none, err := fireOther(&Static{Designation: "x", FootprintMM: [2]float64{100, 100}, PlanAreaMM2: 1e4}, "adobe", 1)
+	require.NoError(t, err)
+	assert.False(t, none.Fire.OK)
+	assert.Contains(t, none.Fire.Reason, "adobe")
+}

@@ -136,6 +136,27 @@ type Enclosure struct {
 // ProvidedHours returns the fire resistance the enclosure provides, h.
 func (e *Enclosure) ProvidedHours() float64 { return e.Minutes / 60 }
 
+// Fewest returns the fewest layers of 5/8 in Type X board, from one to
+// MaxLayers, that reach hours·60 minutes, the R they give and whether they
+// reach it (MaxLayers and false when none does). It is Size without the
+// trace and does not allocate.
+func Fewest(w, d, hours float64) (layers int, minutes float64, ok bool, err error) {
+	if err := checkWD(w, d); err != nil {
+		return 0, 0, false, err
+	}
+	if !finite(hours) || hours <= 0 || hours > MaxHours {
+		return 0, 0, false, bad("rating", hours, "a rating greater than 0 and at most 4 h")
+	}
+	for n := 1; n <= MaxLayers; n++ {
+		r, _ := Minutes(w, d, float64(n)*LayerIn) // inputs checked above
+		layers, minutes = n, r
+		if r >= hours*60 {
+			return n, r, true, nil
+		}
+	}
+	return layers, minutes, false, nil
+}
+
 // Size returns the fewest layers of 5/8 in Type X gypsum wallboard, from one
 // to MaxLayers, whose calculated fire resistance R reaches hours·60 minutes
 // for a column of weight w (lb/ft) and heated perimeter d (in).
@@ -154,15 +175,9 @@ func Size(w, d, hours float64) (Enclosure, error) {
 		Step{Clause, "W/D", "steel weight over heated perimeter", w / d, "lb/ft/in"},
 		Step{Clause, "R required", "rating × 60", need, "min"},
 	)
-	for n := 1; n <= MaxLayers; n++ {
-		h := float64(n) * LayerIn
-		r, _ := Minutes(w, d, h) // inputs checked above
-		e.Layers, e.ThicknessIn, e.WPrimeLbFt, e.Minutes = n, h, WPrime(w, d, h), r
-		if r >= need {
-			e.OK = true
-			break
-		}
-	}
+	e.Layers, e.Minutes, e.OK, _ = Fewest(w, d, hours) // inputs checked above
+	e.ThicknessIn = float64(e.Layers) * LayerIn
+	e.WPrimeLbFt = WPrime(w, d, e.ThicknessIn)
 	e.Steps = append(e.Steps,
 		Step{Clause, "layers", "fewest 5/8 in Type X layers with R ≥ R required", float64(e.Layers), ""},
 		Step{Clause, "h", "layers × 0.625 in", e.ThicknessIn, "in"},
@@ -170,7 +185,13 @@ func Size(w, d, hours float64) (Enclosure, error) {
 		Step{Clause, "R", "130·[h·(W′/D)/2]^0.75", e.Minutes, "min"},
 	)
 	if !e.OK {
-		e.Reason = fmt.Sprintf("%d layers of 5/8 in Type X gypsum board give R = %.0f min, short of %.0f min (%s)", MaxLayers, e.Minutes, need, Clause)
+		e.Reason = ShortReason(e.Minutes, hours)
 	}
 	return e, nil
+}
+
+// ShortReason says why no enclosure reaches a rating: MaxLayers layers give
+// only minutes.
+func ShortReason(minutes, hours float64) string {
+	return fmt.Sprintf("%d layers of 5/8 in Type X gypsum board give R = %.0f min, short of %.0f min (%s)", MaxLayers, minutes, hours*60, Clause)
 }

@@ -89,3 +89,15 @@ func BenchmarkSchemeFire(b *testing.B) {
 	}
 	b.ReportMetric(float64(candidates(m)), "candidates")
 }
+
+// BenchmarkNewFire builds the model with a 2 h rating (catalogue caches
+// warm after the first build): the fire step runs for every candidate.
+func BenchmarkNewFire(b *testing.B) {
+	sc := DefaultScheme()
+	sc.Fire.Rating = "2h"
+	for i := 0; i < b.N; i++ {
+		if _, err := New(sc); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

@@ -5,6 +5,7 @@ import (
 	"math"
 	"strconv"
 	"strings"
+	"sync"
 
 	"upright/concrete"
 )
@@ -169,7 +170,15 @@ type FireCheck struct {
 	BareMassKgPerM  float64    `json:"bare_mass_kg_per_m"`
 	BarePlanAreaMM2 float64    `json:"bare_plan_area_mm2"`
 
-	Steps []Step `json:"-"` // the fire trace, appended to the candidate's
+	trace func() []Step // builds the fire trace on demand (Detail), so the build stays cheap
+}
+
+// Trace returns the fire check's lines of the calculation trace.
+func (c *FireCheck) Trace() []Step {
+	if c.trace == nil {
+		return nil
+	}
+	return c.trace()
 }
 
 // calc is the machine-readable form of the check for a Detail's Calc.
@@ -207,6 +216,10 @@ type fireFamily struct {
 	ls     LoadSummary
 }
 
+// Unwrap returns the family without the fire step, for callers that look
+// for optional methods of a material's own family.
+func (f *fireFamily) Unwrap() Family { return f.Family }
+
 // Static returns the protected facts of candidate i.
 func (f *fireFamily) Static(i int) *Static { return &f.static[i] }
 
@@ -233,7 +246,7 @@ func (f *fireFamily) Detail(i int, s Setting) Detail {
 		verdict = "not reached: " + fc.Reason
 	}
 	d.Steps = append(d.Steps, Step{Clause: fc.Clause, Quantity: "FIRE: rating asked for", Formula: "the scheme's one rating, for every material", Value: fc.RatingH, Unit: "h"})
-	d.Steps = append(d.Steps, fc.Steps...)
+	d.Steps = append(d.Steps, fc.Trace()...)
 	d.Steps = append(d.Steps, Step{Clause: fc.Clause, Quantity: "FIRE: resistance provided", Formula: verdict, Value: fc.ProvidedH, Unit: "h"})
 	if d.Calc == nil {
 		d.Calc = map[string]any{}
@@ -273,16 +286,29 @@ func applyFire(sc *Scheme, ls LoadSummary, fams []Family) ([]Family, error) {
 		return fams, nil
 	}
 	out := make([]Family, len(fams))
+	errs := make([]error, len(fams))
+	var wg sync.WaitGroup
 	for fi, f := range fams {
-		w := &fireFamily{Family: f, static: make([]Static, f.Len()), selfW: sc.SelfWeight, ls: ls}
-		for i := range w.static {
-			st, err := fireProtect(sc, f, i, hours)
-			if err != nil {
-				return nil, fmt.Errorf("%s %s: %w", f.Material(), f.Static(i).Designation, err)
+		wg.Add(1)
+		go func(fi int, f Family) { // one family per goroutine, as the build does
+			defer wg.Done()
+			w := &fireFamily{Family: f, static: make([]Static, f.Len()), selfW: sc.SelfWeight, ls: ls}
+			for i := range w.static {
+				st, err := fireProtect(sc, f, i, hours)
+				if err != nil {
+					errs[fi] = fmt.Errorf("%s %s: %w", f.Material(), f.Static(i).Designation, err)
+					return
+				}
+				w.static[i] = st
 			}
-			w.static[i] = st
+			out[fi] = w
+		}(fi, f)
+	}
+	wg.Wait()
+	for _, err := range errs {
+		if err != nil {
+			return nil, err
 		}
-		out[fi] = w
 	}
 	return out, nil
 }

@@ -50,12 +50,15 @@ func concreteFire(st Static, hours float64, agg concrete.Aggregate, coverMM floa
 		fc.Reason = fmt.Sprintf("cover to the bars %.0f mm is under the %.0f mm that %s h needs (%s)",
 			coverMM, needCover, fireHoursText(hours), concrete.FireCoverClause)
 	}
-	fc.Steps = []Step{
-		{Clause: concrete.FireDimensionClause, Quantity: "least dimension required", Formula: agg.String() + " aggregate, " + fireHoursText(hours) + " h", Value: need, Unit: "mm"},
-		{Clause: concrete.FireDimensionClause, Quantity: "least dimension provided", Formula: "smaller side, or diameter", Value: least, Unit: "mm"},
-		{Clause: concrete.FireCoverClause, Quantity: "cover to bars required", Formula: "1 in per hour, at most 2 in", Value: needCover, Unit: "mm"},
-		{Clause: concrete.FireCoverClause, Quantity: "cover to bars provided", Formula: "cover to ties + tie diameter (bars placed with it)", Value: coverMM, Unit: "mm"},
-		{Clause: concrete.FireDimensionClause, Quantity: "fire resistance provided", Formula: "highest tabulated rating met by both", Value: fc.ProvidedH, Unit: "h"},
+	ratingH, provided := hours, fc.ProvidedH
+	fc.trace = func() []Step {
+		return []Step{
+			{Clause: concrete.FireDimensionClause, Quantity: "least dimension required", Formula: agg.String() + " aggregate, " + fireHoursText(ratingH) + " h", Value: need, Unit: "mm"},
+			{Clause: concrete.FireDimensionClause, Quantity: "least dimension provided", Formula: "smaller side, or diameter", Value: least, Unit: "mm"},
+			{Clause: concrete.FireCoverClause, Quantity: "cover to bars required", Formula: "1 in per hour, at most 2 in", Value: needCover, Unit: "mm"},
+			{Clause: concrete.FireCoverClause, Quantity: "cover to bars provided", Formula: "cover to ties + tie diameter (bars placed with it)", Value: coverMM, Unit: "mm"},
+			{Clause: concrete.FireDimensionClause, Quantity: "fire resistance provided", Formula: "highest tabulated rating met by both", Value: provided, Unit: "h"},
+		}
 	}
 	st.Fire = fc
 	return st, nil
@@ -78,13 +81,20 @@ func timberFire(st Static, hours float64) Static {
 		fc.System = "exposed wood: char calculation not applicable"
 		fc.Reason = fmt.Sprintf("NDS 2018 16.1 (from memory): the calculated char method covers exposures up to %s h; a %s h rating needs a tested or listed assembly",
 			fireHoursText(timberFireMaxHours), fireHoursText(hours))
-		fc.Steps = []Step{{Clause: "NDS 2018 16.1 (from memory)", Quantity: "longest exposure of the method", Formula: "calculated char method limit", Value: timberFireMaxHours, Unit: "h"}}
+		fc.trace = timberFireLimitTrace
 	} else {
 		fc.OK = true
 		fc.ProvidedH = hours
 		fc.System = "exposed wood sized for its char layer (residual section carries the load)"
-		fc.Steps = []Step{{Clause: "NDS 2018 16.2", Quantity: "exposure time", Formula: "the scheme's rating drives the char depth; the fire-case strength is part of the strength above", Value: hours, Unit: "h"}}
+		fc.trace = func() []Step {
+			return []Step{{Clause: "NDS 2018 16.2", Quantity: "exposure time", Formula: "the scheme's rating drives the char depth; the fire-case strength is part of the strength above", Value: hours, Unit: "h"}}
+		}
 	}
 	st.Fire = fc
 	return st
+}
+
+// timberFireLimitTrace is the trace of a timber size beyond the method's limit.
+func timberFireLimitTrace() []Step {
+	return []Step{{Clause: "NDS 2018 16.1 (from memory)", Quantity: "longest exposure of the method", Formula: "calculated char method limit", Value: timberFireMaxHours, Unit: "h"}}
 }

@@ -52,24 +52,25 @@ func ProtectSteel(st Static, o SteelOutline, steelKgPerM, hours float64) (Static
 	if err != nil {
 		return Static{}, err
 	}
-	e, err := fire.Size(steelKgPerM*fireSteelLbftPer, d, hours)
+	wLbFt := steelKgPerM * fireSteelLbftPer
+	layers, minutes, ok, err := fire.Fewest(wLbFt, d, hours)
 	if err != nil {
 		return Static{}, err
 	}
-	h := e.ThicknessIn * steelMMPerIn
+	h := float64(layers) * fire.LayerIn * steelMMPerIn
 	fc.Clause = fire.Clause
-	fc.Layers, fc.LayerMM, fc.ThicknessMM = e.Layers, fire.LayerIn*steelMMPerIn, h
+	fc.Layers, fc.LayerMM, fc.ThicknessMM = layers, fire.LayerIn*steelMMPerIn, h
 	fc.HeatedPerimeterMM = d * steelMMPerIn
-	fc.ProvidedH = fireRound(e.ProvidedHours())
-	fc.OK, fc.Reason = e.OK, e.Reason
+	fc.ProvidedH = fireRound(minutes / 60)
+	fc.OK = ok
+	if !ok {
+		fc.Reason = fire.ShortReason(minutes, hours)
+	}
 	box := "box"
 	if o == fire.Round {
 		box = "square box"
 	}
-	fc.System = fmt.Sprintf("%s of %d × 5/8 in Type X gypsum board (%.0f mm)", box, e.Layers, h)
-	for _, x := range e.Steps {
-		fc.Steps = append(fc.Steps, fireSteelStep(x))
-	}
+	fc.System = fmt.Sprintf("%s of %d × 5/8 in Type X gypsum board (%.0f mm)", box, layers, h)
 	// The enclosure adds h on every side; its board is the protected box
 	// less the bare box (the void inside a box round a round column is not board).
 	w, dd := st.FootprintMM[0], st.FootprintMM[1]
@@ -77,10 +78,20 @@ func ProtectSteel(st Static, o SteelOutline, steelKgPerM, hours float64) (Static
 	boardKg := (pw*pd - w*dd) * 1e-6 * fireBoardKgPerM3
 	fc.BoardKgPerM = boardKg
 	fc.FootprintMM = [2]float64{pw, pd}
-	fc.Steps = append(fc.Steps,
-		Step{Clause: "protected plan", Quantity: "plan with board", Formula: "bare plan + 2h each way", Value: pw * pd, Unit: "mm2"},
-		Step{Clause: "board dead load (from memory: 50 lb/ft³)", Quantity: "board mass", Formula: "(protected box − bare box) × 801 kg/m³", Value: boardKg, Unit: "kg/m"},
-	)
+	fc.trace = func() []Step {
+		e, err := fire.Size(wLbFt, d, hours) // the inputs passed Fewest
+		if err != nil {
+			return nil
+		}
+		out := make([]Step, 0, len(e.Steps)+2)
+		for _, x := range e.Steps {
+			out = append(out, fireSteelStep(x))
+		}
+		return append(out,
+			Step{Clause: "protected plan", Quantity: "plan with board", Formula: "bare plan + 2h each way", Value: pw * pd, Unit: "mm2"},
+			Step{Clause: "board dead load (from memory: 50 lb/ft³)", Quantity: "board mass", Formula: "(protected box − bare box) × 801 kg/m³", Value: boardKg, Unit: "kg/m"},
+		)
+	}
 	out := st
 	out.FootprintMM = fc.FootprintMM
 	out.PlanAreaMM2 = pw * pd

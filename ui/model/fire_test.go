@@ -71,6 +71,11 @@ func TestFireSteelEnclosureThroughModel(t *testing.T) {
 	assert.Equal(t, 2, fj["layers"])
 	assert.InDelta(t, r.DemandN/1000, d.Calc["demand_kN"], 1e-9)
 	assert.InDelta(t, r.CapacityN, d.CapacityN, 1e-9)
+	var qs []string
+	for _, x := range d.Steps {
+		qs = append(qs, x.Quantity)
+	}
+	assert.Subset(t, qs, []string{"FIRE: rating asked for", "W", "D", "layers", "h", "W′", "R", "board mass", "FIRE: resistance provided"})
 }
 
 // Light HSS cannot reach 3 h with four layers: not permitted, and the

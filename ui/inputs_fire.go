@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"strconv"
+
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/widget"
@@ -46,4 +48,12 @@ func (w *Window) syncFire() {
 	d := &w.st.Draft
 	w.fire.rating.SetSelected(labelOf(fireRatingChoices, d.Fire.Rating))
 	w.fire.aggregate.SetSelected(labelOf(aggregateChoices, d.Fire.Aggregate))
+}
+
+// fireNote is the table note's words on the fire rating: empty without one.
+func fireNote(sc model.Scheme) string {
+	if !sc.Fire.On() {
+		return ""
+	}
+	return " · " + strconv.FormatFloat(sc.Fire.Hours(), 'f', -1, 64) + " h fire rating: plan, weight and carbon include the protection"
 }

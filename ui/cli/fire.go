@@ -32,7 +32,6 @@ func fireJSON(st *model.Static) model.FireCheck {
 	fc.BareFootprintMM = roundPair(fc.BareFootprintMM)
 	fc.BareMassKgPerM = round(fc.BareMassKgPerM, 2)
 	fc.BarePlanAreaMM2 = round(fc.BarePlanAreaMM2, 0)
-	fc.Steps = nil
 	return fc
 }
 

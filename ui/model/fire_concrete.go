@@ -33,7 +33,7 @@ func concreteFire(st Static, hours float64, agg concrete.Aggregate, coverMM floa
 	least := math.Min(st.FootprintMM[0], st.FootprintMM[1])
 	fc.Clause = concrete.FireDimensionClause + "; " + concrete.FireCoverClause
 	fc.MinDimensionMM, fc.CoverMM, fc.CoverRequiredMM = need, coverMM, needCover
-	fc.System = fmt.Sprintf("%s aggregate concrete, least dimension %.0f mm, %.0f mm cover to the bars", agg, least, coverMM)
+	fc.System = agg.String() + " aggregate concrete with its least dimension and cover to the bars"
 	for _, h := range concreteFireRatings {
 		dim, _ := concrete.FireMinDimensionMM(agg, h)
 		cov, _ := concrete.FireBarCoverMM(h)

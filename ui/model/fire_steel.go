@@ -70,7 +70,7 @@ func ProtectSteel(st Static, o SteelOutline, steelKgPerM, hours float64) (Static
 	if o == fire.Round {
 		box = "square box"
 	}
-	fc.System = fmt.Sprintf("%s of %d × 5/8 in Type X gypsum board (%.0f mm)", box, layers, h)
+	fc.System = fmt.Sprintf("%s of %d × 5/8 in Type X gypsum board", box, layers)
 	// The enclosure adds h on every side; its board is the protected box
 	// less the bare box (the void inside a box round a round column is not board).
 	w, dd := st.FootprintMM[0], st.FootprintMM[1]

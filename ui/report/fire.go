@@ -3,6 +3,7 @@ package report
 import (
 	"fmt"
 	"strconv"
+	"strings"
 
 	"upright/ui/model"
 	"upright/ui/units"
@@ -39,8 +40,8 @@ func fireSection(d *doc, f *facts) {
 	d.bullets(items, sizeBody-0.5)
 	d.pdf.Ln(1)
 	cols := []column{
-		{"Family", 1.3, "L"}, {"Best working size", 2.0, "L"}, {"Protection for " + hours + " h", 3.2, "L"},
-		{"Provides", 0.75, "R"}, {"Bare plan", 1.3, "L"}, {"Protected plan", 1.3, "L"},
+		{"Family", 1.25, "L"}, {"Best working size", 1.8, "L"}, {"Protection for " + hours + " h", 3.2, "L"},
+		{"Rating", 0.9, "R"}, {"Bare plan", 1.3, "L"}, {"Protected plan", 1.3, "L"},
 	}
 	var rows []row
 	for fi := range f.res.Families {
@@ -53,7 +54,7 @@ func fireSection(d *doc, f *facts) {
 		}
 		fc := r.Static.Fire
 		rows = append(rows, row{cells: []string{
-			familyLabel(fam), r.Static.Designation, fc.System, fmt.Sprintf("%.2g h", fc.ProvidedH),
+			familyLabel(fam), r.Static.Designation, protectionText(fc, f.sys), fmt.Sprintf("%.2g h", fc.ProvidedH),
 			units.PlanSize(fc.BareFootprintMM, f.sys), units.PlanSize(fc.FootprintMM, f.sys),
 		}})
 	}
@@ -84,4 +85,26 @@ func fireCSVCells(st *model.Static, dim func(float64) float64) []string {
 		system += "; does not reach the rating: " + fc.Reason
 	}
 	return []string{num(fc.RatingH, 1), system, num(fc.ProvidedH, 2), num(dim(fc.BareFootprintMM[0]), 2), num(dim(fc.BareFootprintMM[1]), 2)}
+}
+
+// protectionText says a size's protection with its dimensions in the
+// report's units.
+func protectionText(fc *model.FireCheck, sys units.System) string {
+	switch {
+	case fc.Layers > 0:
+		return fmt.Sprintf("%s, h = %s", fc.System, dimText(fc.ThicknessMM, sys))
+	case fc.MinDimensionMM > 0:
+		agg, _, _ := strings.Cut(fc.System, " ")
+		return fmt.Sprintf("%s aggregate: least side at least %s; cover to the bars %s (at least %s)", agg,
+			dimText(fc.MinDimensionMM, sys), dimText(fc.CoverMM, sys), dimText(fc.CoverRequiredMM, sys))
+	}
+	return fc.System
+}
+
+// dimText writes a small dimension with its unit, in or mm.
+func dimText(mm float64, sys units.System) string {
+	if sys == units.SI {
+		return units.Dim(mm, sys) + " mm"
+	}
+	return units.Dim(mm, sys) + " in"
 }

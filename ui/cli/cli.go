@@ -150,26 +150,28 @@ func schemeFrom(f *schemeFlags, args []string) (model.Scheme, error) {
 
 // Candidate is one candidate in the JSON output of compare.
 type Candidate struct {
-	Material    string          `json:"material"`
-	Family      string          `json:"family"`
-	Designation string          `json:"designation"`
-	OK          bool            `json:"ok"`
-	Permitted   bool            `json:"permitted"`
-	CapacityKN  float64         `json:"capacity_kN"`
-	DemandKN    float64         `json:"demand_kN"`
-	Utilization *float64        `json:"utilization"`
-	MassKgPerM  float64         `json:"mass_kg_per_m"`
-	MassKg      float64         `json:"mass_kg"`
-	FootprintMM [2]float64      `json:"footprint_mm"`
-	PlanAreaMM2 float64         `json:"plan_area_mm2"`
-	CarbonKg    float64         `json:"carbon_kgCO2e"`
-	Governing   string          `json:"governing"`
-	Slenderness float64         `json:"slenderness"`
-	Warnings    []string        `json:"warnings"`
-	Explanation string          `json:"explanation"`
-	Calc        map[string]any  `json:"calc"`
-	Steps       []model.Step    `json:"steps"`
-	Fire        model.FireCheck `json:"fire"` // how the size meets the scheme's fire rating
+	Material    string         `json:"material"`
+	Family      string         `json:"family"`
+	Designation string         `json:"designation"`
+	OK          bool           `json:"ok"`
+	Permitted   bool           `json:"permitted"`
+	CapacityKN  float64        `json:"capacity_kN"`
+	DemandKN    float64        `json:"demand_kN"`
+	Utilization *float64       `json:"utilization"`
+	MassKgPerM  float64        `json:"mass_kg_per_m"`
+	MassKg      float64        `json:"mass_kg"`
+	FootprintMM [2]float64     `json:"footprint_mm"`
+	PlanAreaMM2 float64        `json:"plan_area_mm2"`
+	CarbonKg    float64        `json:"carbon_kgCO2e"`
+	Governing   string         `json:"governing"`
+	Slenderness float64        `json:"slenderness"`
+	Warnings    []string       `json:"warnings"`
+	Explanation string         `json:"explanation"`
+	Calc        map[string]any `json:"calc"`
+	Steps       []model.Step   `json:"steps"`
+
+	// Fire is how the size meets the scheme's fire rating.
+	Fire model.FireCheck `json:"fire"`
 }
 
 func round(x float64, digits int) float64 {

@@ -33,9 +33,9 @@ var (
 	concreteKeys = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap"}
 	timberKeys   = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire_sides", "duration"}
 	fireKeys     = []string{"rating", "aggregate"}
-	// timberKeysV1 are the timber fields of a version-1 file, whose "fire"
-	// was the timber fire exposure (now the scheme's rating).
-	timberKeysV1 = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire", "fire_sides", "duration"}
+	// timberKeysV1 are the timber fields a version-1 file may hold: those of
+	// version 2 and "fire", the timber fire exposure (now the scheme's rating).
+	timberKeysV1 = append(append([]string(nil), timberKeys...), "fire")
 )
 
 type wFile struct {

@@ -185,7 +185,7 @@ func (c *FireCheck) Trace() []Step {
 func (c *FireCheck) calc() map[string]any {
 	out := map[string]any{
 		"rating_h": c.RatingH, "system": c.System, "clause": c.Clause, "provided_h": c.ProvidedH, "ok": c.OK,
-		"footprint_mm": c.FootprintMM, "bare_footprint_mm": c.BareFootprintMM,
+		"footprint_mm": c.FootprintMM, "bare_footprint_mm": c.BareFootprintMM, "bare_mass_kg_per_m": c.BareMassKgPerM,
 	}
 	if c.Reason != "" {
 		out["reason"] = c.Reason

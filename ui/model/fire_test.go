@@ -325,3 +325,28 @@ func TestFireOtherSteelShell(t *testing.T) {
 	assert.False(t, none.Fire.OK)
 	assert.Contains(t, none.Fire.Reason, "adobe")
 }
+
+// Through the fire step, Quick and Detail agree for every candidate of every
+// family, and a candidate failing the rating has no capacity and a reason.
+func TestFireQuickMatchesDetail(t *testing.T) {
+	for _, rating := range []string{"1.5h", "3h"} {
+		m := fireModel(t, rating, "")
+		s := Setting{LengthMM: 3500, WeakMM: 3500, Ends: PinnedPinned, Method: LRFD}
+		for fi, f := range m.Families {
+			for i := 0; i < f.Len(); i += 7 {
+				q := f.Quick(i, s)
+				d := m.Detail(fi, i, s)
+				des := f.Static(i).Designation
+				require.Equal(t, q.Permitted, d.Permitted, "%s %s", rating, des)
+				assert.InDelta(t, q.CapacityN, d.CapacityN, 1e-6*math.Max(1, q.CapacityN), "%s %s", rating, des)
+				if fc := f.Static(i).Fire; !fc.OK {
+					assert.Zero(t, q.CapacityN)
+					assert.Equal(t, fc.Reason, q.Reason)
+					assert.Contains(t, d.Warnings, "Fire rating not reached: "+fc.Reason)
+				}
+				_, ok := d.Calc["fire"]
+				assert.True(t, ok, des)
+			}
+		}
+	}
+}

@@ -350,3 +350,24 @@ func TestFireQuickMatchesDetail(t *testing.T) {
 		}
 	}
 }
+
+// Heated perimeter by outline (IBC 2021 722.5.1.2, from memory): the box
+// 2(d + bf) round W and HP, 2(B + H) for rectangular HSS, π·OD for round HSS
+// and pipe.
+func TestFireHeatedPerimeterByFamily(t *testing.T) {
+	m := fireModel(t, "1h", "", "steel")
+	seen := map[string]bool{}
+	for _, f := range m.Families {
+		for i := 0; i < f.Len(); i++ {
+			fc := f.Static(i).Fire
+			a, b := fc.BareFootprintMM[0], fc.BareFootprintMM[1]
+			want := 2 * (a + b)
+			if f.Name() == "HSS round" || f.Name() == "Pipe" {
+				want = math.Pi * a
+			}
+			require.InDelta(t, want, fc.HeatedPerimeterMM, 1e-6, f.Static(i).Designation)
+			seen[f.Name()] = true
+		}
+	}
+	assert.Len(t, seen, len(SteelFamilies))
+}

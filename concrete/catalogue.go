@@ -200,6 +200,9 @@ type CatalogueOptions struct {
 	Grade  int     // 60 or 80; 0 means 60
 	RhoMax float64 // practical cap on ρg; 0 means 0.04
 	Kinds  []Kind  // families to build; empty means all four
+	// BarCoverMM is the least clear cover to the longitudinal bars, mm (a
+	// fire rating's, FireBarCoverMM); 0 keeps the 1.5 in cover to the ties.
+	BarCoverMM float64
 }
 
 // Catalogue builds every section of the chosen families with all their
@@ -224,6 +227,10 @@ func Catalogue(o CatalogueOptions) ([]*Section, error) {
 	if o.Series != SeriesUS && o.Series != SeriesSI {
 		return nil, badInput("series", float64(o.Series), "US (0) or SI (1)")
 	}
+	if !finite(o.BarCoverMM) || o.BarCoverMM < 0 || o.BarCoverMM > MaxCover {
+		return nil, badInput("bar cover", o.BarCoverMM, "a clear cover to the bars from 0 to 4 in (102 mm)")
+	}
+	cover := coverForBarCover(o.BarCoverMM)
 	kinds := o.Kinds
 	if len(kinds) == 0 {
 		kinds = []Kind{TiedSquare, TiedRectangular, SpiralRound, TiedRound}
@@ -231,7 +238,7 @@ func Catalogue(o CatalogueOptions) ([]*Section, error) {
 	var out []*Section
 	for _, k := range kinds {
 		for _, bh := range Sizes(o.Series, k) {
-			base := Spec{WidthMM: bh[0], DepthMM: bh[1], FcMPa: fc, Grade: grade, CoverMM: DefaultCoverMM, Series: o.Series}
+			base := Spec{WidthMM: bh[0], DepthMM: bh[1], FcMPa: fc, Grade: grade, CoverMM: cover, Series: o.Series}
 			switch k {
 			case SpiralRound:
 				base.Shape, base.Transverse = Circular, Spiral

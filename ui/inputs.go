@@ -324,7 +324,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		mats.Add(small("No materials are registered in this build."))
 	}
 	mats.Add(acc)
-	return container.NewVBox(column, loadBox, design, mats, layout.NewSpacer())
+	return container.NewVBox(column, loadBox, design, w.buildFireInputs(), mats, layout.NewSpacer())
 }
 
 // materialTitle capitalises a material name.
@@ -371,6 +371,7 @@ func (w *Window) syncInputs() {
 		c.SetChecked(w.st.MaterialOn(m))
 	}
 	w.opts.sync(w)
+	w.syncFire()
 	w.syncWeak()
 	w.syncLoadMode()
 	w.configureSlider()

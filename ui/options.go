@@ -22,7 +22,6 @@ var (
 	eiChoices         = []choice{{"(a) 0.4 Ec Ig", "a"}, {"(b) 0.2 Ec Ig + Es Ise", "b"}}
 	speciesChoices    = named(timber.SawnSpecies(), map[string]string{"DF-L": "Douglas fir-larch", "SP": "Southern pine", "HF": "Hem-fir", "SPF": "Spruce-pine-fir"})
 	gradeChoices      = named(timber.SawnGrades(), map[string]string{"SS": "Select structural", "No.1": "No. 1", "No.2": "No. 2"})
-	fireChoices       = []choice{{"None", "none"}, {"1 hour", "1h"}, {"1½ hours", "1.5h"}, {"2 hours", "2h"}}
 	sidesChoices      = []choice{{"4 sides exposed", "4"}, {"3 sides exposed", "3"}}
 	durationChoices   = []choice{{"From the loads", ""}, {"Permanent", "permanent"}, {"Ten years", "ten-years"}, {"Two months", "two-months"}, {"Seven days", "seven-days"}, {"Ten minutes", "ten-minutes"}}
 )
@@ -54,7 +53,6 @@ type materialWidgets struct {
 	combos        *widget.CheckGroup
 	wet, incised  *widget.Check
 	hot           *widget.Check
-	fire          *widget.Select
 	fireSides     *widget.Select
 	duration      *widget.Select
 	timberProblem *widget.Label
@@ -161,9 +159,6 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		o.hot = widget.NewCheck("Sustained 100–125 °F (Ct)", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Timber.Hot = on })
 		})
-		o.fire = widget.NewSelect(labels(fireChoices), func(s string) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Fire = valueOf(fireChoices, s) })
-		})
 		o.fireSides = widget.NewSelect(labels(sidesChoices), func(s string) {
 			w.change(func(sc *model.Scheme) { fmt.Sscanf(valueOf(sidesChoices, s), "%d", &sc.Timber.FireSides) })
 		})
@@ -177,8 +172,7 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			labelled("Sawn species", o.species),
 			labelled("Sawn grade", o.grade),
 			widget.NewLabel("Conditions"), o.wet, o.incised, o.hot,
-			labelled("Fire resistance", o.fire),
-			labelled("Exposure", o.fireSides),
+			labelled("Fire exposure (rating under Fire resistance)", o.fireSides),
 			labelled("ASD load duration", o.duration),
 		)
 	case "composite":
@@ -219,7 +213,6 @@ func (o *materialWidgets) sync(w *Window) {
 		o.wet.SetChecked(t.Wet)
 		o.incised.SetChecked(t.Incised)
 		o.hot.SetChecked(t.Hot)
-		o.fire.SetSelected(labelOf(fireChoices, t.Fire))
 		o.fireSides.SetSelected(labelOf(sidesChoices, fmt.Sprint(t.FireSides)))
 		o.duration.SetSelected(labelOf(durationChoices, t.Duration))
 	}

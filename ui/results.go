@@ -155,6 +155,7 @@ func (w *Window) refreshTable(full bool) {
 	if w.showAll {
 		note += fmt.Sprintf(" · %d working sizes", working)
 	}
+	note += fireNote(m.Scheme)
 	w.tableNote.SetText(note)
 	w.table.update(full || w.ctx.sys != w.tableSys || w.ctx.m.Scheme.Setting.Method != w.tableMethod)
 	w.tableSys, w.tableMethod = w.ctx.sys, w.ctx.m.Scheme.Setting.Method

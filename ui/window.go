@@ -83,6 +83,7 @@ type Window struct {
 	matChecks   map[string]*widget.Check
 	matProblem  *widget.Label
 	opts        materialWidgets
+	fire        fireWidgets
 
 	// chart and slider
 	chartRaster *canvas.Raster

@@ -170,6 +170,9 @@ type Candidate struct {
 	Explanation string         `json:"explanation"`
 	Calc        map[string]any `json:"calc"`
 	Steps       []model.Step   `json:"steps"`
+
+	// Fire is how the size meets the scheme's fire rating.
+	Fire model.FireCheck `json:"fire"`
 }
 
 func round(x float64, digits int) float64 {
@@ -238,6 +241,7 @@ func NewCandidate(m *model.Model, r *model.Row, s model.Setting) Candidate {
 		Governing: r.Governing, Slenderness: round(r.Slenderness, 1),
 		Warnings: d.Warnings, Explanation: d.Plain, Steps: d.Steps,
 	}
+	c.Fire = fireJSON(r.Static)
 	if c.Warnings == nil {
 		c.Warnings = []string{}
 	}
@@ -359,7 +363,9 @@ func printHeader(w io.Writer, m *model.Model) {
 	if sc.SelfWeight {
 		fmt.Fprint(w, ", plus each column's self-weight")
 	}
-	fmt.Fprintf(w, "; ranked by %s\n\n", sc.Metric)
+	fmt.Fprintf(w, "; ranked by %s\n", sc.Metric)
+	printFireLine(w, sc)
+	fmt.Fprintln(w)
 }
 
 func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System, s model.Setting) {

@@ -57,7 +57,9 @@ func TestBadInputNamesFlagValueAndAccepted(t *testing.T) {
 		{[]string{"compare", "--beta-dns", "-1"}, []string{"--beta-dns"}},
 		{[]string{"compare", "--species", "oak"}, []string{"--species", "DF-L"}},
 		{[]string{"compare", "--grade", "premium"}, []string{"--grade"}},
-		{[]string{"compare", "--fire", "3h"}, []string{"--fire", "2h"}},
+		{[]string{"compare", "--fire", "4h"}, []string{"--fire", "none, 1h, 1.5h, 2h or 3h"}},
+		{[]string{"compare", "--fire", "two hours"}, []string{"--fire", "1.5h"}},
+		{[]string{"compare", "--aggregate", "basalt"}, []string{"--aggregate", "siliceous, carbonate or semi-lightweight"}},
 		{[]string{"compare", "--nonsense"}, []string{"nonsense"}},
 		{[]string{"compare", "stray"}, []string{"stray"}},
 		{[]string{"frobnicate"}, []string{"unknown command"}},
@@ -101,7 +103,7 @@ func TestSchemeFromFlags(t *testing.T) {
 	assert.Equal(t, "SP", sc.Timber.Species)
 	assert.Equal(t, "No.2", sc.Timber.Grade)
 	assert.True(t, sc.Timber.Wet)
-	assert.Equal(t, "1h", sc.Timber.Fire)
+	assert.Equal(t, "1h", sc.Fire.Rating)
 	assert.Equal(t, 3, sc.Timber.FireSides)
 	assert.InDelta(t, 50*units.MPaPerKsi, sc.Steel.FyMPa, 1e-9)
 }

@@ -42,6 +42,7 @@ type schemeFlags struct {
 	limitDelta bool
 
 	fillFc, compositeFamilies string
+	aggregate                 string // concrete aggregate for the fire rating
 }
 
 func newSchemeFlags(name string, out io.Writer) *schemeFlags {
@@ -90,7 +91,8 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.BoolVar(&f.wet, "wet", false, "timber in wet service")
 	fs.BoolVar(&f.incised, "incised", false, "incised sawn lumber")
 	fs.BoolVar(&f.hot, "hot", false, "timber at sustained temperature 100 to 125 °F")
-	fs.StringVar(&f.fire, "fire", "", "timber fire exposure: none, 1h, 1.5h, 2h")
+	fs.StringVar(&f.fire, "fire", "", "fire-resistance rating for every material: none, 1h, 1.5h, 2h, 3h (steel boxed in gypsum board, concrete least size and cover, timber char)")
+	fs.StringVar(&f.aggregate, "aggregate", "", "concrete aggregate for the fire rating: siliceous (default), carbonate, semi-lightweight")
 	fs.StringVar(&f.fireSides, "fire-sides", "", "timber sides exposed to fire: 3 or 4")
 	fs.StringVar(&f.duration, "duration", "", "ASD load duration: permanent, ten-years, two-months, seven-days, ten-minutes")
 
@@ -438,19 +440,18 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 		t.Hot = f.hot
 	}
 	if f.fire != "" {
-		fr := strings.ToLower(f.fire)
-		switch fr {
-		case "none", "0", "0h":
-			t.Fire = "none"
-		case "1h", "1", "60min":
-			t.Fire = "1h"
-		case "1.5h", "1.5", "90min":
-			t.Fire = "1.5h"
-		case "2h", "2", "120min":
-			t.Fire = "2h"
-		default:
-			return usagef("--fire %q: not accepted; give none, 1h, 1.5h or 2h", f.fire)
+		r, err := model.ParseFireRating("--fire", f.fire)
+		if err != nil {
+			return usagef("--fire %q: not accepted; give %s", f.fire, model.FireRatingsAccepted)
 		}
+		sc.Fire.Rating = r
+	}
+	if f.aggregate != "" {
+		a, err := model.ParseFireAggregate("--aggregate", f.aggregate)
+		if err != nil {
+			return usagef("--aggregate %q: not accepted; give %s", f.aggregate, model.FireAggregatesAccepted)
+		}
+		sc.Fire.Aggregate = a
 	}
 	if f.fireSides != "" {
 		switch f.fireSides {

@@ -66,3 +66,38 @@ func BenchmarkNew(b *testing.B) {
 		}
 	}
 }
+
+// BenchmarkSchemeFire is BenchmarkScheme with a 2 h fire rating: every
+// candidate goes through the fire step. Target: at most 2 ms.
+func BenchmarkSchemeFire(b *testing.B) {
+	sc := DefaultScheme()
+	sc.Setting.LengthMM, sc.Setting.WeakMM = 4500, 4500
+	sc.Load = Load{Mode: LoadDirect, DirectN: 2500e3}
+	sc.Fire.Rating = "2h"
+	m, err := New(sc)
+	if err != nil {
+		b.Fatal(err)
+	}
+	ctx := context.Background()
+	b.ReportAllocs()
+	b.ResetTimer()
+	for i := 0; i < b.N; i++ {
+		L := 3000 + float64(i%100)*30
+		if _, err := m.Evaluate(ctx, m.Scheme.Setting.AtLength(L)); err != nil {
+			b.Fatal(err)
+		}
+	}
+	b.ReportMetric(float64(candidates(m)), "candidates")
+}
+
+// BenchmarkNewFire builds the model with a 2 h rating (catalogue caches
+// warm after the first build): the fire step runs for every candidate.
+func BenchmarkNewFire(b *testing.B) {
+	sc := DefaultScheme()
+	sc.Fire.Rating = "2h"
+	for i := 0; i < b.N; i++ {
+		if _, err := New(sc); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

@@ -8,6 +8,7 @@ const (
 	CarbonConcrete    = "concrete"     // CarbonConcrete is ready-mixed concrete, per m³.
 	CarbonSawnTimber  = "sawn-timber"  // CarbonSawnTimber is sawn softwood lumber and timbers, per m³.
 	CarbonGlulam      = "glulam"       // CarbonGlulam is glued-laminated timber, per m³.
+	CarbonGypsum      = "gypsum-board" // CarbonGypsum is Type X gypsum board of a fire enclosure, per kg.
 )
 
 // CarbonKind describes one kind of material for embodied carbon.
@@ -26,6 +27,7 @@ var CarbonKinds = []CarbonKind{
 	{CarbonConcrete, "Ready-mixed concrete", "m³", "kg CO2e/m³"},
 	{CarbonSawnTimber, "Sawn timber", "m³", "kg CO2e/m³"},
 	{CarbonGlulam, "Glued-laminated timber", "m³", "kg CO2e/m³"},
+	{CarbonGypsum, "Gypsum board (fire enclosure)", "kg", "kg CO2e/kg"},
 }
 
 // defaultCarbon holds the cradle-to-gate (A1–A3) defaults; DefaultCarbon
@@ -50,6 +52,10 @@ var defaultCarbon = CarbonFactors{
 	// AWC/CWC industry-average EPD for North American glued-laminated timber
 	// (2020), fossil GWP without biogenic carbon: 137 kg CO2e/m³ (from memory).
 	CarbonGlulam: 137,
+	// Gypsum Association industry-average EPD for 5/8 in Type X gypsum
+	// board: about 280 kg CO2e per 1,000 ft² at about 2.5 lb/ft², so
+	// 0.25 kg CO2e/kg (from memory).
+	CarbonGypsum: 0.25,
 }
 
 // DefaultCarbon returns a fresh copy of the default cradle-to-gate (A1–A3)

@@ -21,6 +21,7 @@ func TestCarbonDefaults(t *testing.T) {
 		{CarbonConcrete, 354, 200, 600, "NRMCA industry-wide EPD v3.2, 4,001–5,000 psi national average (from memory)"},
 		{CarbonSawnTimber, 63, 20, 300, "AWC/CWC industry-average EPD, softwood lumber (from memory)"},
 		{CarbonGlulam, 137, 50, 400, "AWC/CWC industry-average EPD, glulam (from memory)"},
+		{CarbonGypsum, 0.25, 0.1, 1, "Gypsum Association industry-average EPD, 5/8 in Type X board (from memory)"},
 	}
 	d := DefaultCarbon()
 	require.Len(t, d, len(rows))

@@ -20,6 +20,7 @@ type concreteKey struct {
 	fcMPa  float64
 	grade  int
 	rhoMax float64
+	cover  float64 // least clear cover to the bars for the fire rating, mm (0: none)
 }
 
 // concreteEntry is one cached catalogue, split by family.
@@ -54,7 +55,7 @@ func concreteCatalogue(key concreteKey) (*concreteEntry, error) {
 	if key.units == SI {
 		series = concrete.SeriesSI
 	}
-	secs, err := concrete.Catalogue(concrete.CatalogueOptions{Series: series, FcMPa: key.fcMPa, Grade: key.grade, RhoMax: key.rhoMax})
+	secs, err := concrete.Catalogue(concrete.CatalogueOptions{Series: series, FcMPa: key.fcMPa, Grade: key.grade, RhoMax: key.rhoMax, BarCoverMM: key.cover})
 	if err != nil {
 		var ie *concrete.InputError
 		if errors.As(err, &ie) {
@@ -109,7 +110,7 @@ func buildConcrete(sc *Scheme, ls LoadSummary) ([]Family, error) {
 	if units != SI {
 		units = US
 	}
-	e, err := concreteCatalogue(concreteKey{units: units, fcMPa: o.FcMPa, grade: o.BarGrade, rhoMax: o.RhoMax})
+	e, err := concreteCatalogue(concreteKey{units: units, fcMPa: o.FcMPa, grade: o.BarGrade, rhoMax: o.RhoMax, cover: sc.Fire.concreteBarCoverMM()})
 	if err != nil {
 		return nil, err
 	}

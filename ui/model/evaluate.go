@@ -63,6 +63,9 @@ func New(sc Scheme) (*Model, error) {
 			}
 		}
 	}
+	if m.Families, err = applyFire(&sc, ls, m.Families); err != nil {
+		return nil, err
+	}
 	m.scores = make([][]float64, len(m.Families))
 	m.carbon = make([][]float64, len(m.Families))
 	for fi, f := range m.Families {

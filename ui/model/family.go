@@ -92,6 +92,7 @@ type Static struct {
 	FootprintMM  [2]float64    // plan width and depth, mm
 	PlanAreaMM2  float64       // plan area occupied (width × depth, or π D²/4 for round), mm²
 	Constituents []Constituent // material quantities per metre for carbon
+	Fire         *FireCheck    // how the candidate meets the scheme's fire rating; nil with no rating
 }
 
 // Quick is a candidate's strength at one setting, without a trace. It must be

@@ -36,6 +36,7 @@ type Scheme struct {
 	Concrete   ConcreteOptions
 	Timber     TimberOptions
 	Composite  CompositeOptions // concrete-filled HSS; the wall takes Steel's Fy
+	Fire       FireOptions      // one fire-resistance rating for every material
 	Units      Units
 	Metric     Metric
 	Carbon     CarbonFactors
@@ -59,6 +60,7 @@ func DefaultScheme() Scheme {
 		Concrete:   defaultConcreteOptions(),
 		Timber:     defaultTimberOptions(),
 		Composite:  defaultCompositeOptions(),
+		Fire:       defaultFireOptions(),
 		Units:      US,
 		Metric:     ByWeight,
 		Carbon:     DefaultCarbon(),
@@ -132,6 +134,9 @@ func (sc *Scheme) Validate() error {
 		return err
 	}
 	if err := sc.Composite.validate(); err != nil {
+		return err
+	}
+	if err := sc.Fire.validate(); err != nil {
 		return err
 	}
 	for k, v := range sc.Carbon {

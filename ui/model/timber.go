@@ -65,7 +65,7 @@ func buildTimber(sc *Scheme, ls LoadSummary) ([]Family, error) {
 	}
 	base := timber.Conditions{
 		CD: cd, Lambda: lambda, Wet: o.Wet, Hot: o.Hot, Incised: o.Incised,
-		Fire: timber.Fire{Hours: timberFireHours(o.Fire), Sides: sides},
+		Fire: timber.Fire{Hours: sc.Fire.timberHours(), Sides: sides},
 	}
 	alpha := ls.StrengthPerService
 	if !(alpha >= 1 && alpha <= 3) {

@@ -15,8 +15,7 @@ type TimberOptions struct {
 	Wet       bool   // wet service (CM)
 	Incised   bool   // incised lumber (Ci)
 	Hot       bool   // elevated temperature 100–125 °F (Ct)
-	Fire      string // "none", "1h", "1.5h" or "2h"
-	FireSides int    // 3 or 4 sides exposed
+	FireSides int    // 3 or 4 sides exposed to the scheme's fire rating
 	Duration  string // ASD load duration: "permanent", "ten-years", "two-months", "seven-days", "ten-minutes"; "" derives it from the loads
 	// GlulamCombos limits the glulam family to these combinations or stress
 	// classes (e.g. "Comb. 2 DF", "Comb. 48 SP", "24F-1.8E"); empty means all
@@ -25,15 +24,10 @@ type TimberOptions struct {
 }
 
 func defaultTimberOptions() TimberOptions {
-	return TimberOptions{Species: "DF-L", Grade: "No.1", Glulam: true, Sawn: true, Fire: "none", FireSides: 4}
+	return TimberOptions{Species: "DF-L", Grade: "No.1", Glulam: true, Sawn: true, FireSides: 4}
 }
 
 func (t TimberOptions) validate() error {
-	switch t.Fire {
-	case "none", "1h", "1.5h", "2h":
-	default:
-		return bad("fire", t.Fire, "none, 1h, 1.5h or 2h")
-	}
 	if t.FireSides != 3 && t.FireSides != 4 {
 		return bad("fire sides", t.FireSides, "3 or 4")
 	}
@@ -73,19 +67,6 @@ func timberDurationCD(d string) float64 {
 		return timber.CDSevenDays
 	case "ten-minutes":
 		return timber.CDTenMinutes
-	}
-	return 0
-}
-
-// timberFireHours maps a Fire option to hours; 0 for "none".
-func timberFireHours(f string) float64 {
-	switch f {
-	case "1h":
-		return 1
-	case "1.5h":
-		return 1.5
-	case "2h":
-		return 2
 	}
 	return 0
 }

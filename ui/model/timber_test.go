@@ -74,7 +74,7 @@ func timberSettings() []Setting {
 func TestTimberQuickMatchesDetail(t *testing.T) {
 	for _, fire := range []string{"none", "1h"} {
 		sc := DefaultScheme()
-		sc.Timber.Fire, sc.Timber.FireSides = fire, 3
+		sc.Fire.Rating, sc.Timber.FireSides = fire, 3
 		for _, f := range timberFams(t, sc) {
 			for i := 0; i < f.Len(); i++ {
 				for _, s := range timberSettings() {
@@ -96,7 +96,7 @@ func TestTimberQuickMatchesDetail(t *testing.T) {
 
 func TestTimberQuickDoesNotAllocate(t *testing.T) {
 	sc := DefaultScheme()
-	sc.Timber.Fire, sc.Timber.FireSides = "1.5h", 3
+	sc.Fire.Rating, sc.Timber.FireSides = "1.5h", 3
 	fams := timberFams(t, sc)
 	s := Setting{LengthMM: 4000, WeakMM: 2000, Ends: FixedPinned, Method: LRFD}
 	var sink Quick
@@ -257,7 +257,7 @@ func TestTimberFire(t *testing.T) {
 	s := Setting{LengthMM: 3600, WeakMM: 3600, Ends: PinnedPinned, Method: LRFD}
 	base := DefaultScheme()
 	fire := base
-	fire.Timber.Fire, fire.Timber.FireSides = "1h", 4
+	fire.Fire.Rating, fire.Timber.FireSides = "1h", 4
 	f0, f1 := timberFams(t, base)[0], timberFams(t, fire)[0]
 	for i := 0; i < f0.Len(); i++ {
 		q0, q1 := f0.Quick(i, s), f1.Quick(i, s)
@@ -317,7 +317,6 @@ func TestTimberBadOptions(t *testing.T) {
 		{func(o *TimberOptions) { o.Species = "Oak" }, "species"},
 		{func(o *TimberOptions) { o.Grade = "No.3" }, "grade"},
 		{func(o *TimberOptions) { o.GlulamCombos = []string{"Comb. 99"} }, "glulam combination"},
-		{func(o *TimberOptions) { o.Fire = "3h" }, "fire"},
 		{func(o *TimberOptions) { o.FireSides = 2 }, "fire sides"},
 		{func(o *TimberOptions) { o.Duration = "forever" }, "duration"},
 	} {
@@ -358,7 +357,7 @@ func TestTimberThroughModel(t *testing.T) {
 // length, and reports ns per candidate.
 func BenchmarkTimberQuick(b *testing.B) {
 	sc := DefaultScheme()
-	sc.Timber.Fire, sc.Timber.FireSides = "1h", 3
+	sc.Fire.Rating, sc.Timber.FireSides = "1h", 3
 	ls, err := Summarize(sc.Load, sc.Setting.Method)
 	if err != nil {
 		b.Fatal(err)

@@ -53,7 +53,7 @@ func TestSchemeFlagReportsBadFiles(t *testing.T) {
 	bad := filepath.Join(t.TempDir(), "bad.upright.json")
 	text, err := os.ReadFile(demo)
 	require.NoError(t, err)
-	require.NoError(t, os.WriteFile(bad, []byte(strings.Replace(string(text), `"version": 1`, `"version": 9`, 1)), 0o644))
+	require.NoError(t, os.WriteFile(bad, []byte(strings.Replace(string(text), `"version": 2`, `"version": 9`, 1)), 0o644))
 	code, _, stderr := run("compare", "--scheme", bad)
 	assert.Equal(t, 2, code)
 	assert.Contains(t, stderr, "format version 9 is newer than this program reads")

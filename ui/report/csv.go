@@ -30,6 +30,7 @@ func CSVHeader(sys units.System) []string {
 		"length_" + lu, "width_" + du, "depth_" + du, "plan_area_" + au,
 		"weight_" + wu, "column_weight_" + mu, "capacity_" + fu, "demand_" + fu, "utilization",
 		"governing", "slenderness", "carbon_kgCO2e",
+		"fire_rating_h", "fire_system", "fire_provided_h", "bare_width_" + du, "bare_depth_" + du,
 	}
 }
 
@@ -122,6 +123,7 @@ func WriteCSV(w io.Writer, m *model.Model, opt CSVOptions) error {
 				num(wpl(st.MassKgPerM), 2), num(mass(st.MassKgPerM*sc.Setting.LengthMM/1000), 1),
 				num(capV, 1), num(demV, 1), util, governing, num(r.Slenderness, 1), num(r.CarbonKg, 1),
 			}
+			rec = append(rec, fireCSVCells(st, dim)...)
 			if err := cw.Write(rec); err != nil {
 				return fmt.Errorf("csv: %w", err)
 			}

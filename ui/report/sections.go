@@ -42,6 +42,7 @@ func compose(f *facts) *doc {
 	chartSection(d, f)
 	mapSection(d, f)
 	workingSizes(d, f)
+	fireSection(d, f)
 	crossoverSection(d, f)
 	takedownSection(d, f)
 	assumptions(d, f)
@@ -339,6 +340,7 @@ func inputs(d *doc, f *facts) {
 	if compositeOn(sc) {
 		add("Composite (filled HSS)", compositeWords(f), "")
 	}
+	add("Fire-resistance rating", fireRatingWords(sc), "")
 	d.table(cols, rows)
 }
 
@@ -372,9 +374,6 @@ func timberWords(t model.TimberOptions) string {
 	}
 	if t.Hot {
 		parts = append(parts, "100–125 °F service")
-	}
-	if t.Fire != "" && t.Fire != "none" {
-		parts = append(parts, fmt.Sprintf("%s fire exposure on %d sides", t.Fire, t.FireSides))
 	}
 	if t.Duration != "" {
 		parts = append(parts, "load duration "+t.Duration)

@@ -14,21 +14,28 @@ import (
 // FormatName is the value of every scheme file's "format" field.
 const FormatName = "upright-scheme"
 
-// Version is the format version this package writes and the newest it reads.
-const Version = 1
+// Version is the format version this package writes and the newest it
+// reads. Version 2 moved the fire rating from the timber options to the
+// top-level "fire" object, where it applies to every material; version-1
+// files still read, their timber "fire" becoming the rating.
+const Version = 2
 
 // MaxSize is the largest scheme file accepted, in bytes (1 MiB).
 const MaxSize = 1 << 20
 
 // The file's objects and their fields, in the order Marshal writes them.
 var (
-	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "composite", "carbon"}
+	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "composite", "fire", "carbon"}
 	settingKeys  = []string{"length", "weak_axis_length", "ends", "k", "method"}
 	loadKeys     = []string{"mode", "direct", "takedown"}
 	takedownKeys = []string{"tributary_area", "floors", "floor_dead", "floor_live", "roof_dead", "roof_live", "snow", "live_reduction", "kll", "occupancy"}
 	steelKeys    = []string{"families", "fy"}
 	concreteKeys = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap"}
-	timberKeys   = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire", "fire_sides", "duration"}
+	timberKeys   = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire_sides", "duration"}
+	fireKeys     = []string{"rating", "aggregate"}
+	// timberKeysV1 are the timber fields a version-1 file may hold: those of
+	// version 2 and "fire", the timber fire exposure (now the scheme's rating).
+	timberKeysV1 = append(append([]string(nil), timberKeys...), "fire")
 )
 
 type wFile struct {
@@ -45,8 +52,14 @@ type wFile struct {
 	Concrete   wConcrete `json:"concrete"`
 	Timber     wTimber   `json:"timber"`
 	Composite  wFilled   `json:"composite"`
+	Fire       wFire     `json:"fire"`
 	Carbon     wCarbon   `json:"carbon"`
 	ReportMap  bool      `json:"report_map"`
+}
+
+type wFire struct {
+	Rating    string `json:"rating"`
+	Aggregate string `json:"aggregate"`
 }
 
 type wSetting struct {
@@ -102,7 +115,6 @@ type wTimber struct {
 	Wet          bool     `json:"wet"`
 	Incised      bool     `json:"incised"`
 	Hot          bool     `json:"hot"`
-	Fire         string   `json:"fire"`
 	FireSides    int      `json:"fire_sides"`
 	Duration     *string  `json:"duration"`
 }
@@ -141,7 +153,7 @@ func optString(s string) *string {
 	return &s
 }
 
-// Marshal writes a scheme as a version-1 scheme file. It refuses, with an
+// Marshal writes a scheme as a scheme file of format Version. It refuses, with an
 // *Error naming the field, a scheme that Unmarshal would refuse: one that
 // fails model.Scheme.Validate or the format's own rules. A carbon kind
 // missing from sc.Carbon is written with the model's default factor, which
@@ -180,8 +192,9 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 		Timber: wTimber{
 			Species: t.Species, Grade: t.Grade, Sawn: t.Sawn, Glulam: t.Glulam,
 			GlulamCombos: append([]string{}, t.GlulamCombos...), Wet: t.Wet,
-			Incised: t.Incised, Hot: t.Hot, Fire: t.Fire, FireSides: t.FireSides, Duration: optString(t.Duration),
+			Incised: t.Incised, Hot: t.Hot, FireSides: t.FireSides, Duration: optString(t.Duration),
 		},
+		Fire: wFire{Rating: sc.Fire.Rating, Aggregate: sc.Fire.Aggregate},
 	}
 	if sc.Steel.FyMPa != 0 {
 		v := stressKind.format(sc.Steel.FyMPa, sys)
@@ -214,7 +227,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 // Unmarshal reads a scheme file. Every problem is an *Error that names the
 // field and, where it has one, the line and column: a file over MaxSize,
 // malformed JSON, a missing or foreign "format", a format version other than
-// 1, an unknown, duplicated or missing field, a value of the wrong JSON type
+// 1 or 2, an unknown, duplicated or missing field, a value of the wrong JSON type
 // or unit, and any value model.Scheme.Validate or the format's own rules
 // refuse. A UTF-8 byte-order mark at the start is skipped.
 func Unmarshal(data []byte) (model.Scheme, error) {
@@ -248,8 +261,9 @@ func sizeText(n int64) string {
 // reader turns a node tree into a scheme, remembering each field's node so
 // that a later validation failure can point at it.
 type reader struct {
-	data []byte
-	at   map[string]*node
+	data    []byte
+	at      map[string]*node
+	version int // the file's format version, 1 or 2
 }
 
 func (r *reader) errAt(n *node, field, msg string) *Error {
@@ -501,7 +515,8 @@ func (r *reader) header(root *node) error {
 	}
 	x, err := strconv.ParseFloat(v.num, 64)
 	switch {
-	case err == nil && x == Version:
+	case err == nil && (x == Version || x == 1):
+		r.version = int(x)
 		return nil
 	case (err == nil || math.IsInf(x, 1)) && x > Version && x == math.Trunc(x):
 		return r.errAt(v, "version", fmt.Sprintf("format version %s is newer than this program reads (version %d); open the file with a newer Upright", v.num, Version))
@@ -550,7 +565,11 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 	if e := r.concrete(root, &sc.Concrete); e != nil {
 		return sc, e
 	}
-	if e := r.timber(root, &sc.Timber); e != nil {
+	v1Fire, e := r.timber(root, &sc.Timber)
+	if e != nil {
+		return sc, e
+	}
+	if e := r.fire(root, &sc.Fire, v1Fire); e != nil {
 		return sc, e
 	}
 	if e := r.composite(root, &sc.Composite); e != nil {
@@ -683,11 +702,31 @@ func (r *reader) concrete(root *node, c *model.ConcreteOptions) error {
 	return err
 }
 
-func (r *reader) timber(root *node, t *model.TimberOptions) error {
-	n, p, err := r.sub(root, "", "timber", timberKeys, "the timber options")
-	if err != nil {
-		return err
+// timber reads the timber options; for a version-1 file it also returns
+// the timber "fire" field, which becomes the scheme's rating.
+func (r *reader) timber(root *node, t *model.TimberOptions) (string, error) {
+	keys := timberKeys
+	if r.version == 1 {
+		keys = timberKeysV1
 	}
+	n, p, err := r.sub(root, "", "timber", keys, "the timber options")
+	if err != nil {
+		return "", err
+	}
+	v1Fire := ""
+	if r.version == 1 {
+		if v1Fire, err = r.str(n, p, "fire", `"none", "1h", "1.5h" or "2h"`); err != nil {
+			return "", err
+		}
+		r.at["fire.rating"] = r.at[join(p, "fire")]
+	}
+	err = r.timberRest(n, p, t)
+	return v1Fire, err
+}
+
+// timberRest reads the timber fields common to every version.
+func (r *reader) timberRest(n *node, p string, t *model.TimberOptions) error {
+	var err error
 	if t.Species, err = r.str(n, p, "species", `a sawn species code, e.g. "DF-L"`); err != nil {
 		return err
 	}
@@ -711,15 +750,16 @@ func (r *reader) timber(root *node, t *model.TimberOptions) error {
 	if t.GlulamCombos, err = r.strList(n, p, "glulam_combinations", `a list of glulam combinations or stress classes, e.g. ["24F-1.8E"]; [] means all`); err != nil {
 		return err
 	}
-	if t.Fire, err = r.str(n, p, "fire", `"none", "1h", "1.5h" or "2h"`); err != nil {
-		return err
-	}
 	if t.FireSides, err = r.integer(n, p, "fire_sides", "3 or 4"); err != nil {
 		return err
 	}
 	t.Duration, err = r.optStr(n, p, "duration", `"permanent", "ten-years", "two-months", "seven-days" or "ten-minutes", or null to derive it from the loads`)
 	return err
 }
+
+// carbonOptional are the carbon kinds added after version 1, which a file
+// may leave out (the default factor applies).
+var carbonOptional = map[string]bool{model.CarbonGypsum: true}
 
 func (r *reader) carbon(root *node, sc *model.Scheme) error {
 	keys := carbonKeys()
@@ -728,7 +768,12 @@ func (r *reader) carbon(root *node, sc *model.Scheme) error {
 		return err
 	}
 	sc.Carbon = make(model.CarbonFactors, len(keys))
+	defaults := model.DefaultCarbon()
 	for _, ck := range model.CarbonKinds {
+		if carbonOptional[ck.Key] && n.get(ck.Key) == nil {
+			sc.Carbon[ck.Key] = defaults[ck.Key] // a kind added after version 1: absent means the default
+			continue
+		}
 		give := fmt.Sprintf("the factor for %s with its unit, e.g. \"%s\"", strings.ToLower(ck.Name), formatCarbon(1.5, ck))
 		v, fp, err := r.field(n, p, ck.Key, give)
 		if err != nil {
@@ -742,6 +787,35 @@ func (r *reader) carbon(root *node, sc *model.Scheme) error {
 			return r.errAt(v, fp, err.Error())
 		}
 		sc.Carbon[ck.Key] = x
+	}
+	return nil
+}
+
+// fire reads the scheme's fire rating. The "fire" object and each of its
+// fields may be absent, meaning no rating and siliceous aggregate; a
+// version-1 file has no "fire" object and its timber fire exposure (v1Fire)
+// becomes the rating.
+func (r *reader) fire(root *node, f *model.FireOptions, v1Fire string) error {
+	*f = model.DefaultScheme().Fire
+	if r.version == 1 && v1Fire != "" {
+		f.Rating = v1Fire
+	}
+	if root.get("fire") == nil {
+		return nil
+	}
+	n, p, err := r.sub(root, "", "fire", fireKeys, "the fire rating")
+	if err != nil {
+		return err
+	}
+	if n.get("rating") != nil {
+		if f.Rating, err = r.str(n, p, "rating", quoteAll(model.FireRatings)); err != nil {
+			return err
+		}
+	}
+	if n.get("aggregate") != nil {
+		if f.Aggregate, err = r.str(n, p, "aggregate", quoteAll(model.FireAggregates)); err != nil {
+			return err
+		}
 	}
 	return nil
 }

@@ -1,7 +1,7 @@
 // Package schemefile reads and writes Upright scheme files, keeps the list
 // of recently used files and autosaves the scheme being edited.
 //
-// # The scheme file, format version 1
+// # The scheme file, format version 2
 //
 // A scheme file is one UTF-8 JSON object of at most 1 MiB (MaxSize),
 // conventionally named *.upright.json. Every field below must be present
@@ -22,7 +22,7 @@
 //
 //	{
 //	  "format": "upright-scheme",      always this string
-//	  "version": 1,                    the format version
+//	  "version": 2,                    the format version
 //	  "name": "…",                     one line, at most 200 characters
 //	  "units": "us" | "si",            the unit system shown
 //	  "rank": "weight" | "footprint" | "carbon",
@@ -77,8 +77,7 @@
 //	    "sawn": true, "glulam": true,  products included
 //	    "glulam_combinations": [],     e.g. ["24F-1.8E"]; [] means all
 //	    "wet": false, "incised": false, "hot": false,
-//	    "fire": "none",                none, 1h, 1.5h or 2h
-//	    "fire_sides": 4,               3 or 4
+//	    "fire_sides": 4,               3 or 4 sides exposed to the rating
 //	    "duration": null               permanent, ten-years, two-months, seven-days,
 //	                                   ten-minutes; null: derived from the loads
 //	  },
@@ -88,13 +87,21 @@
 //	                                   rectangular, Filled HSS round; [] means all
 //	    "fill_fc": null                e.g. "6 ksi", 3 to 10 ksi; null: concrete.fc
 //	  },
+//	  "fire": {                        optional; absent: no rating, siliceous
+//	    "rating": "none",              none, 1h, 1.5h, 2h or 3h, for every
+//	                                   material; absent: none
+//	    "aggregate": "siliceous"       concrete aggregate for the rating:
+//	                                   siliceous, carbonate or semi-lightweight;
+//	                                   absent: siliceous
+//	  },
 //	  "carbon": {                      every kind, A1–A3 factors
 //	    "rolled-steel": "1.22 kg CO2e/kg",
 //	    "hss-steel": "1.99 kg CO2e/kg",
 //	    "rebar": "0.854 kg CO2e/kg",
 //	    "concrete": "354 kg CO2e/m³",
 //	    "sawn-timber": "63 kg CO2e/m³",
-//	    "glulam": "137 kg CO2e/m³"
+//	    "glulam": "137 kg CO2e/m³",
+//	    "gypsum-board": "0.25 kg CO2e/kg"  optional; absent: the default
 //	  },
 //	  "report_map": false              put the map of the winning family over
 //	                                   length and load in the client report;
@@ -118,6 +125,13 @@
 // program and is refused with a message saying so; a later version of this
 // package will read every older version. Files have no other version
 // markers.
+//
+// Version 1 had the fire exposure inside "timber" ("fire": none, 1h, 1.5h
+// or 2h) and no top-level "fire" object or "gypsum-board" factor. A
+// version-1 file reads unchanged: its timber "fire" becomes the scheme's
+// rating (which version 2 applies to every material), the aggregate is
+// siliceous and the gypsum board factor is the default. Saving writes
+// version 2.
 //
 // # Errors
 //

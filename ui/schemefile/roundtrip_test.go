@@ -98,7 +98,8 @@ func genScheme(t *rapid.T) model.Scheme {
 	tm.Wet = rapid.Bool().Draw(t, "wet")
 	tm.Incised = rapid.Bool().Draw(t, "incised")
 	tm.Hot = rapid.Bool().Draw(t, "hot")
-	tm.Fire = rapid.SampledFrom([]string{"none", "1h", "1.5h", "2h"}).Draw(t, "fire")
+	sc.Fire.Rating = rapid.SampledFrom(model.FireRatings).Draw(t, "fire")
+	sc.Fire.Aggregate = rapid.SampledFrom(model.FireAggregates).Draw(t, "aggregate")
 	tm.FireSides = rapid.SampledFrom([]int{3, 4}).Draw(t, "fire sides")
 	tm.Duration = rapid.SampledFrom([]string{"", "permanent", "ten-years", "two-months", "seven-days", "ten-minutes"}).Draw(t, "duration")
 
@@ -162,8 +163,9 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 		"Concrete.FcMPa", "Concrete.BarGrade", "Concrete.RhoMax", "Concrete.Transverse", "Concrete.M1M2",
 		"Concrete.BetaDns", "Concrete.BetaFromLoads", "Concrete.EIMethod", "Concrete.SecondOrderCap",
 		"Timber.Species", "Timber.Grade", "Timber.Glulam", "Timber.Sawn", "Timber.Wet", "Timber.Incised",
-		"Timber.Hot", "Timber.Fire", "Timber.FireSides", "Timber.Duration", "Timber.GlulamCombos",
+		"Timber.Hot", "Timber.FireSides", "Timber.Duration", "Timber.GlulamCombos",
 		"Composite.Families", "Composite.FillFcMPa",
+		"Fire.Rating", "Fire.Aggregate",
 	}
 	sort.Strings(got)
 	sort.Strings(want)

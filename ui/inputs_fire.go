@@ -1,0 +1,59 @@
+package ui
+
+import (
+	"strconv"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/widget"
+
+	"upright/ui/model"
+)
+
+// Choice lists of the scheme's fire rating.
+var (
+	fireRatingChoices = []choice{{"None", "none"}, {"1 hour", "1h"}, {"1½ hours", "1.5h"}, {"2 hours", "2h"}, {"3 hours", "3h"}}
+	aggregateChoices  = []choice{{"Siliceous", "siliceous"}, {"Carbonate", "carbonate"}, {"Semi-lightweight", "semi-lightweight"}}
+)
+
+// fireWidgets are the inputs of the scheme's one fire-resistance rating.
+type fireWidgets struct {
+	rating    *widget.Select
+	aggregate *widget.Select
+}
+
+// buildFireInputs makes the fire-resistance group: the rating every
+// material answers to and the concrete aggregate it depends on.
+func (w *Window) buildFireInputs() fyne.CanvasObject {
+	w.fire.rating = widget.NewSelect(labels(fireRatingChoices), func(s string) {
+		w.change(func(sc *model.Scheme) { sc.Fire.Rating = valueOf(fireRatingChoices, s) })
+	})
+	w.fire.aggregate = widget.NewSelect(labels(aggregateChoices), func(s string) {
+		w.change(func(sc *model.Scheme) { sc.Fire.Aggregate = valueOf(aggregateChoices, s) })
+	})
+	note := small("Steel boxed in Type X gypsum board, concrete least size and cover, timber char. Calculated methods for comparison; listed assemblies and the local code govern.")
+	note.Wrapping = fyne.TextWrapWord
+	return container.NewVBox(heading("Fire resistance"),
+		row("Rating", w.fire.rating),
+		row("Concrete aggregate", w.fire.aggregate),
+		note,
+	)
+}
+
+// syncFire sets the fire inputs from the draft.
+func (w *Window) syncFire() {
+	if w.fire.rating == nil {
+		return
+	}
+	d := &w.st.Draft
+	w.fire.rating.SetSelected(labelOf(fireRatingChoices, d.Fire.Rating))
+	w.fire.aggregate.SetSelected(labelOf(aggregateChoices, d.Fire.Aggregate))
+}
+
+// fireNote is the table note's words on the fire rating: empty without one.
+func fireNote(sc model.Scheme) string {
+	if !sc.Fire.On() {
+		return ""
+	}
+	return " · " + strconv.FormatFloat(sc.Fire.Hours(), 'f', -1, 64) + " h fire rating: plan, weight and carbon include the protection"
+}

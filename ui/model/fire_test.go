@@ -1,0 +1,373 @@
+package model
+
+import (
+	"context"
+	"math"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+// fireModel builds the default scheme at 4 m and 1,500 kN with a rating.
+func fireModel(t testing.TB, rating, aggregate string, mats ...string) *Model {
+	t.Helper()
+	sc := DefaultScheme()
+	sc.Load = Load{Mode: LoadDirect, DirectN: 1500e3}
+	sc.Fire.Rating = rating
+	if aggregate != "" {
+		sc.Fire.Aggregate = aggregate
+	}
+	sc.Materials = mats
+	m, err := New(sc)
+	require.NoError(t, err)
+	return m
+}
+
+func fireFind(t testing.TB, m *Model, des string) (Family, int) {
+	t.Helper()
+	fi, i, ok := m.Find(des)
+	require.True(t, ok, des)
+	return m.Families[fi], i
+}
+
+// W10X49 at 2 h: D = 2(d + bf) = 2(9.98 + 10.0) = 39.96 in (AISC Manual
+// Table 1-1 dimensions, from memory); two layers give R = 133.7 min and one
+// gives 71.6 min (IBC 2021 722.5.1.2 hand calculation, see steel/fire).
+// Board: (d + 2h)(bf + 2h) − d·bf = 2h(d + bf) + 4h² = 2·1.25·19.98 + 4·1.5625
+// = 56.20 in² = 0.3903 ft², × 50 lb/ft³ = 19.51 lb/ft = 29.04 kg/m.
+func TestFireSteelEnclosureThroughModel(t *testing.T) {
+	bare := fireModel(t, "none", "", "steel")
+	m := fireModel(t, "2h", "", "steel")
+	f0, i0 := fireFind(t, bare, "W10X49")
+	f, i := fireFind(t, m, "W10X49")
+	b, st := f0.Static(i0), f.Static(i)
+	assert.Nil(t, b.Fire)
+	fc := st.Fire
+	require.NotNil(t, fc)
+	assert.True(t, fc.OK)
+	assert.Equal(t, 2, fc.Layers)
+	assert.InDelta(t, 15.875, fc.LayerMM, 1e-9)
+	assert.InDelta(t, 31.75, fc.ThicknessMM, 1e-9)
+	assert.InDelta(t, 39.96*25.4, fc.HeatedPerimeterMM, 0.5)
+	assert.InDelta(t, 133.7/60, fc.ProvidedH, 0.01)
+	assert.Equal(t, b.FootprintMM, fc.BareFootprintMM)
+	assert.InDelta(t, b.FootprintMM[0]+63.5, st.FootprintMM[0], 1e-9)
+	assert.InDelta(t, b.FootprintMM[1]+63.5, st.FootprintMM[1], 1e-9)
+	assert.InDelta(t, (b.FootprintMM[0]+63.5)*(b.FootprintMM[1]+63.5), st.PlanAreaMM2, 1e-6)
+	assert.InDelta(t, 29.04, fc.BoardKgPerM, 0.05)
+	assert.InDelta(t, b.MassKgPerM+fc.BoardKgPerM, st.MassKgPerM, 1e-9)
+	assert.Contains(t, fc.Clause, "722.5.1.2")
+	// Carbon: the board at the gypsum factor joins the steel's.
+	assert.InDelta(t, bare.carbon[0][i0]+fc.BoardKgPerM*0.25, m.carbon[0][i], 1e-9)
+	// The board's weight is dead load: the demand grows by its weight over 4 m.
+	s := m.Scheme.Setting
+	r0, r := bare.Row(0, i0, s), m.Row(0, i, s)
+	assert.InDelta(t, fc.BoardKgPerM*Gravity*4*1.2, r.DemandN-r0.DemandN, 1e-6, "1.2 D on the board's weight (ASCE 7-22 2.3.1, typed load is factored)")
+	// The trace carries the fire section and the same demand as the row.
+	d := m.Detail(0, i, s)
+	fj, ok := d.Calc["fire"].(map[string]any)
+	require.True(t, ok)
+	assert.Equal(t, 2, fj["layers"])
+	assert.InDelta(t, r.DemandN/1000, d.Calc["demand_kN"], 1e-9)
+	assert.InDelta(t, r.CapacityN, d.CapacityN, 1e-9)
+	var qs []string
+	for _, x := range d.Steps {
+		qs = append(qs, x.Quantity)
+	}
+	assert.Subset(t, qs, []string{"FIRE: rating asked for", "W", "D", "layers", "h", "W′", "R", "board mass", "FIRE: resistance provided"})
+}
+
+// Light HSS cannot reach 3 h with four layers: not permitted, and the
+// reason names the clause. HSS2X2X1/8: W = 2.89 lb/ft (AISC Manual Table
+// 1-12, from memory), D = 8 in; with h = 2.5 in W′ = 2.89 + 50·2.5·8/144
+// = 9.834, R = 130·(2.5·9.834/8/2)^0.75 = 179.8 min < 180 (hand calculation).
+func TestFireSteelShortOfRating(t *testing.T) {
+	m := fireModel(t, "3h", "", "steel")
+	for fi, f := range m.Families {
+		for i := 0; i < f.Len(); i++ {
+			st := f.Static(i)
+			require.NotNil(t, st.Fire)
+			if st.Fire.OK {
+				assert.GreaterOrEqual(t, st.Fire.ProvidedH, 3.0-0.005, st.Designation)
+				continue
+			}
+			q := f.Quick(i, m.Scheme.Setting)
+			assert.False(t, q.Permitted, st.Designation)
+			assert.Contains(t, q.Reason, "722.5.1.2")
+			assert.False(t, m.Row(fi, i, m.Scheme.Setting).OK)
+		}
+	}
+}
+
+// Concrete at each rating: least dimension from ACI/TMS 216.1-14 Table
+// 4.5.1a (siliceous 8, 9, 10, 12 in; carbonate 3 h 11 in; from memory) and
+// cover to the bars 1 in per hour to 2 in (4.5.3, from memory).
+func TestFireConcreteLeastDimensionAndCover(t *testing.T) {
+	rows := []struct {
+		rating, agg, des string
+		ok               bool
+		minIn, coverIn   float64
+	}{
+		{"1h", "siliceous", "10x10 in tied", true, 8, 1},
+		{"1.5h", "siliceous", "10x10 in tied", true, 9, 1.5},
+		{"2h", "siliceous", "10x10 in tied", true, 10, 2},
+		{"3h", "siliceous", "10x10 in tied", false, 12, 2},
+		{"3h", "siliceous", "12x12 in tied", true, 12, 2},
+		{"3h", "carbonate", "10x10 in tied", false, 11, 2},
+		{"3h", "carbonate", "12x12 in tied", true, 11, 2},
+		{"3h", "semi-lightweight", "12x12 in tied", true, 10.5, 2},
+		{"2h", "semi-lightweight", "10x10 in tied", true, 9, 2},
+	}
+	for _, r := range rows {
+		m := fireModel(t, r.rating, r.agg, "concrete")
+		found := 0
+		for fi, f := range m.Families {
+			for i := 0; i < f.Len(); i++ {
+				st := f.Static(i)
+				if len(st.Designation) < len(r.des) || st.Designation[:len(r.des)] != r.des {
+					continue
+				}
+				found++
+				fc := st.Fire
+				require.NotNil(t, fc)
+				assert.Equal(t, r.ok, fc.OK, "%s %s %s", r.rating, r.agg, st.Designation)
+				assert.InDelta(t, r.minIn*25.4, fc.MinDimensionMM, 1e-9)
+				assert.InDelta(t, r.coverIn*25.4, fc.CoverRequiredMM, 1e-9)
+				assert.GreaterOrEqual(t, fc.CoverMM, r.coverIn*25.4-1e-9, "bars placed with the fire cover")
+				assert.Equal(t, fc.FootprintMM, fc.BareFootprintMM)
+				q := f.Quick(i, m.Scheme.Setting)
+				if !r.ok {
+					assert.False(t, q.Permitted)
+					assert.Contains(t, q.Reason, "216.1")
+					assert.Contains(t, q.Reason, "least dimension")
+				}
+				d := m.Detail(fi, i, m.Scheme.Setting)
+				assert.InDelta(t, fc.CoverMM, d.Calc["cover_mm"].(float64)+(fc.CoverMM-d.Calc["cover_mm"].(float64)), 1e-9)
+			}
+		}
+		assert.Positive(t, found, r.des)
+	}
+}
+
+// The larger fire cover moves the bars, so the strength is recomputed: at
+// 2 h the 2 in cover to the bars lowers or keeps the strength of a slender
+// 10x10 section, never raises it.
+func TestFireConcreteCoverRecomputesStrength(t *testing.T) {
+	bare := fireModel(t, "none", "", "concrete")
+	m := fireModel(t, "2h", "", "concrete")
+	s := Setting{LengthMM: 4000, WeakMM: 4000, Ends: PinnedPinned, Method: LRFD}
+	lower := 0
+	for fi, f := range m.Families {
+		for i := 0; i < f.Len(); i++ {
+			des := f.Static(i).Designation
+			bf, bi, ok := bare.Find(des)
+			if !ok {
+				continue
+			}
+			q0 := bare.Families[bf].Quick(bi, s)
+			q := m.Families[fi].Quick(i, s)
+			if q.Permitted && q0.Permitted {
+				assert.LessOrEqual(t, q.CapacityN, q0.CapacityN*(1+1e-9), des)
+				if q.CapacityN < q0.CapacityN*(1-1e-6) {
+					lower++
+				}
+			}
+		}
+	}
+	assert.Positive(t, lower, "some sections lose strength with the bars moved inward")
+}
+
+// Timber: the rating drives the NDS 2018 Chapter 16 char; beyond 2 h the
+// method does not apply and no timber size is permitted (NDS 2018 16.1, from memory).
+func TestFireTimberLimit(t *testing.T) {
+	m := fireModel(t, "3h", "", "timber")
+	require.NotEmpty(t, m.Families)
+	for _, f := range m.Families {
+		for i := 0; i < f.Len(); i++ {
+			q := f.Quick(i, m.Scheme.Setting)
+			assert.False(t, q.Permitted)
+			assert.Contains(t, q.Reason, "NDS 2018 16.1")
+			assert.Contains(t, q.Reason, "2 h")
+		}
+	}
+	two := fireModel(t, "2h", "", "timber")
+	one := DefaultScheme()
+	one.Fire.Rating = "2h"
+	ls, _ := Summarize(one.Load, one.Setting.Method)
+	fams, err := buildTimber(&one, ls)
+	require.NoError(t, err)
+	assert.True(t, fams[0].(*timberFamily).fire, "2 h drives the char calculation")
+	res, err := two.Evaluate(context.Background(), Setting{LengthMM: 3000, WeakMM: 3000, Ends: PinnedPinned, Method: LRFD})
+	require.NoError(t, err)
+	works := 0
+	for _, fr := range res.Families {
+		works += fr.Working
+	}
+	assert.Positive(t, works, "large timber sections still work at 2 h")
+}
+
+// With a rating, every family lists no more working sizes at 4 m and
+// 1,500 kN, its best is no lighter (the ranking metric includes the board),
+// and every steel candidate's plan is larger.
+func TestFireFewerOrLargerSizes(t *testing.T) {
+	ctx := context.Background()
+	bare := fireModel(t, "none", "")
+	m := fireModel(t, "2h", "")
+	r0, err := bare.Evaluate(ctx, bare.Scheme.Setting)
+	require.NoError(t, err)
+	r, err := m.Evaluate(ctx, m.Scheme.Setting)
+	require.NoError(t, err)
+	require.Equal(t, len(r0.Families), len(r.Families))
+	fewer := 0
+	for k := range r.Families {
+		a, b := &r0.Families[k], &r.Families[k]
+		name := bare.Families[k].Name()
+		assert.LessOrEqual(t, b.Working, a.Working, name)
+		if b.Working < a.Working {
+			fewer++
+		}
+		if a.Best() != nil && b.Best() != nil {
+			// 0.1%: concrete ties get slightly shorter inside a larger cover.
+			assert.GreaterOrEqual(t, b.Best().Score, a.Best().Score*(1-1e-3), name)
+		}
+		if bare.Families[k].Material() == "steel" {
+			for i := 0; i < m.Families[k].Len(); i++ {
+				assert.Greater(t, m.Families[k].Static(i).PlanAreaMM2, bare.Families[k].Static(i).PlanAreaMM2)
+			}
+		}
+	}
+	assert.Positive(t, fewer, "some family loses working sizes at 2 h")
+}
+
+func TestFireQuickDoesNotAllocate(t *testing.T) {
+	m := fireModel(t, "2h", "")
+	s := m.Scheme.Setting
+	var sink Quick
+	for _, f := range m.Families {
+		n := testing.AllocsPerRun(3, func() {
+			for i := 0; i < f.Len(); i++ {
+				sink = f.Quick(i, s)
+			}
+		})
+		assert.Zero(t, n, f.Name())
+	}
+	_ = sink
+}
+
+func TestFireBadInput(t *testing.T) {
+	for _, c := range []struct{ rating, agg, field string }{
+		{"4h", "siliceous", "fire"}, {"2.5h", "siliceous", "fire"}, {"", "siliceous", "fire"},
+		{"2h", "basalt", "aggregate"}, {"2h", "", "aggregate"},
+	} {
+		sc := DefaultScheme()
+		sc.Fire = FireOptions{Rating: c.rating, Aggregate: c.agg}
+		_, err := New(sc)
+		var fe *FieldError
+		require.ErrorAs(t, err, &fe, "%+v", c)
+		assert.Equal(t, c.field, fe.Field)
+	}
+	for in, want := range map[string]string{"2h": "2h", "2": "2h", "1.5 h": "1.5h", "3hr": "3h", "none": "none", "0": "none", "1 hour": "1h", "90min": "1.5h", "120 min": "2h"} {
+		got, err := ParseFireRating("--fire", in)
+		assert.NoError(t, err, in)
+		assert.Equal(t, want, got, in)
+	}
+	for _, in := range []string{"4h", "2.5", "abc", "", "NaN", "-1"} {
+		_, err := ParseFireRating("--fire", in)
+		var fe *FieldError
+		require.ErrorAs(t, err, &fe, in)
+		assert.Equal(t, "--fire", fe.Field)
+		assert.Contains(t, fe.Accepted, "1.5h")
+	}
+	_, err := ParseFireAggregate("--aggregate", "granite")
+	assert.ErrorContains(t, err, "siliceous, carbonate or semi-lightweight")
+	a, err := ParseFireAggregate("--aggregate", "Carbonate")
+	assert.NoError(t, err)
+	assert.Equal(t, "carbonate", a)
+}
+
+func TestFireNoNaN(t *testing.T) {
+	m := fireModel(t, "1.5h", "carbonate")
+	for _, f := range m.Families {
+		for i := 0; i < f.Len(); i++ {
+			st := f.Static(i)
+			for _, x := range []float64{st.MassKgPerM, st.PlanAreaMM2, st.FootprintMM[0], st.FootprintMM[1], st.Fire.ProvidedH} {
+				assert.False(t, math.IsNaN(x) || math.IsInf(x, 0), st.Designation)
+			}
+		}
+	}
+}
+
+// A material with a steel shell and no fire rule of its own (a filled HSS)
+// is boxed as bare steel of the shell's weight, the core ignored, and says
+// so. HSS6.625X0.280 shell: 18.99 lb/ft = 28.26 kg/m, OD = 6.625 in (AISC
+// Manual Table 1-13, from memory); at 2 h three layers (R = 173.2 min, see
+// steel/fire hand calculations).
+func TestFireOtherSteelShell(t *testing.T) {
+	d := 6.625 * 25.4
+	st := Static{
+		Material: "filled", Family: "round", Designation: "filled HSS6.625X0.280",
+		MassKgPerM: 28.26 + 40, FootprintMM: [2]float64{d, d}, PlanAreaMM2: math.Pi * d * d / 4,
+		Constituents: []Constituent{{Kind: CarbonHSSSteel, Amount: 18.99 * 0.45359237 / 0.3048}, {Kind: CarbonConcrete, Amount: 0.017}},
+	}
+	out, err := fireOther(&st, "filled", 2)
+	require.NoError(t, err)
+	require.NotNil(t, out.Fire)
+	assert.True(t, out.Fire.OK)
+	assert.Equal(t, 3, out.Fire.Layers)
+	assert.InDelta(t, 173.2/60, out.Fire.ProvidedH, 0.01)
+	assert.InDelta(t, math.Pi*d, out.Fire.HeatedPerimeterMM, 1e-6, "round outline: π·OD")
+	assert.Contains(t, out.Fire.System, "concrete core ignored")
+	assert.InDelta(t, st.MassKgPerM+out.Fire.BoardKgPerM, out.MassKgPerM, 1e-9)
+	// No steel at all: not permitted, with the reason.
+	none, err := fireOther(&Static{Designation: "x", FootprintMM: [2]float64{100, 100}, PlanAreaMM2: 1e4}, "adobe", 1)
+	require.NoError(t, err)
+	assert.False(t, none.Fire.OK)
+	assert.Contains(t, none.Fire.Reason, "adobe")
+}
+
+// Through the fire step, Quick and Detail agree for every candidate of every
+// family, and a candidate failing the rating has no capacity and a reason.
+func TestFireQuickMatchesDetail(t *testing.T) {
+	for _, rating := range []string{"1.5h", "3h"} {
+		m := fireModel(t, rating, "")
+		s := Setting{LengthMM: 3500, WeakMM: 3500, Ends: PinnedPinned, Method: LRFD}
+		for fi, f := range m.Families {
+			for i := 0; i < f.Len(); i += 7 {
+				q := f.Quick(i, s)
+				d := m.Detail(fi, i, s)
+				des := f.Static(i).Designation
+				require.Equal(t, q.Permitted, d.Permitted, "%s %s", rating, des)
+				assert.InDelta(t, q.CapacityN, d.CapacityN, 1e-6*math.Max(1, q.CapacityN), "%s %s", rating, des)
+				if fc := f.Static(i).Fire; !fc.OK {
+					assert.Zero(t, q.CapacityN)
+					assert.Equal(t, fc.Reason, q.Reason)
+					assert.Contains(t, d.Warnings, "Fire rating not reached: "+fc.Reason)
+				}
+				_, ok := d.Calc["fire"]
+				assert.True(t, ok, des)
+			}
+		}
+	}
+}
+
+// Heated perimeter by outline (IBC 2021 722.5.1.2, from memory): the box
+// 2(d + bf) round W and HP, 2(B + H) for rectangular HSS, π·OD for round HSS
+// and pipe.
+func TestFireHeatedPerimeterByFamily(t *testing.T) {
+	m := fireModel(t, "1h", "", "steel")
+	seen := map[string]bool{}
+	for _, f := range m.Families {
+		for i := 0; i < f.Len(); i++ {
+			fc := f.Static(i).Fire
+			a, b := fc.BareFootprintMM[0], fc.BareFootprintMM[1]
+			want := 2 * (a + b)
+			if f.Name() == "HSS round" || f.Name() == "Pipe" {
+				want = math.Pi * a
+			}
+			require.InDelta(t, want, fc.HeatedPerimeterMM, 1e-6, f.Static(i).Designation)
+			seen[f.Name()] = true
+		}
+	}
+	assert.Len(t, seen, len(SteelFamilies))
+}

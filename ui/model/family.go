@@ -121,6 +121,7 @@ type Detail struct {
 	Calc     map[string]any // machine-readable trace, keys stable (see the CLI JSON)
 	Steps    []Step         // readable trace in the order the standard gives
 	Plain    string         // one sentence a client understands on what governs
+	Checks   []Check        // every load combination checked (filled by Model.Detail)
 }
 
 // Family is one group of candidates of one material that the model evaluates

@@ -8,8 +8,8 @@ import (
 
 	"github.com/stretchr/testify/assert"
 
-	"upright/concrete"
 	"github.com/stretchr/testify/require"
+	"upright/concrete"
 )
 
 func concreteFamilies(t testing.TB, sc Scheme, ls LoadSummary) []Family {

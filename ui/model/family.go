@@ -56,10 +56,23 @@ func (e EndCondition) Valid() bool {
 // Setting is the geometry and method at which a family is evaluated.
 type Setting struct {
 	LengthMM float64      // strong-axis (x) unbraced length, mm
-	WeakMM   float64      // weak-axis (y) unbraced length, mm; also the torsional length
+	WeakMM   float64      // weak-axis (y) unbraced length, mm
 	Ends     EndCondition // idealized end condition
 	K        float64      // typed effective-length factor; 0 means the end condition's recommended value
 	Method   Method       // LRFD or ASD
+	// TwistBraced says the weak-axis braces also restrain twisting, so the
+	// torsional unbraced length is WeakMM; otherwise it is the full length
+	// LengthMM (a girt or wall brace rarely restrains twist).
+	TwistBraced bool
+}
+
+// TwistMM returns the torsional unbraced length, mm: WeakMM when the braces
+// restrain twist, else the full length.
+func (s Setting) TwistMM() float64 {
+	if s.TwistBraced && s.WeakMM > 0 {
+		return s.WeakMM
+	}
+	return s.LengthMM
 }
 
 // AtLength returns a copy of s at a new strong-axis length, keeping the

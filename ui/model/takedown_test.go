@@ -262,14 +262,14 @@ func TestTakedownDemandAddsSelfWeightToEveryCombination(t *testing.T) {
 // follow as in a takedown (ASCE 7-22 2.3.1 and 2.4.1). Hand calculations.
 func TestLoadDirectSummary(t *testing.T) {
 	rows := []struct {
-		m                  Method
-		share              float64
-		deadKN, liveKN     float64
-		lrfdKN, asdKN      float64
-		alpha, beta        float64
-		deadFactor         float64
-		lrfdGov, asdGov    string
-		src                string
+		m               Method
+		share           float64
+		deadKN, liveKN  float64
+		lrfdKN, asdKN   float64
+		alpha, beta     float64
+		deadFactor      float64
+		lrfdGov, asdGov string
+		src             string
 	}{
 		{LRFD, 0, 500, 250, 1000, 750, 1000.0 / 750, 0.6, 1.2, "LRFD 2: 1.2D + 1.6L", "ASD 2: D + L",
 			"hand calc, default s = 2/3: P = 1000 kN = max(1.4s, 1.2s + 1.6(1 − s)) × S = 4/3 S (ASCE 7-22 2.3.1-1, -2), S = 750, D = 500, L = 250; " +

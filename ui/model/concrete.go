@@ -2,6 +2,7 @@ package model
 
 import (
 	"errors"
+	"math"
 	"sync"
 
 	"upright/concrete"
@@ -224,9 +225,11 @@ func (f *concreteFamily) CaseFactors(c *LoadCase, selfN float64) map[string]floa
 // Quick returns the governing check over every LRFD combination, with the
 // capacity on the scale of the method's largest combination (under ASD the
 // service load); it does not allocate. βdns only lowers the strength of a
-// slender column (Eq. 6.6.4.4.4), so when the combination with the highest
-// βdns is held by the axial limit φPn,max, every combination has that
-// strength and the largest load governs.
+// slender column (Eq. 6.6.4.4.4), so the combination with the highest βdns
+// has the lowest strength Cmin: when it is held by the axial limit
+// φPn,max, every combination has that strength and the largest load
+// governs; otherwise a combination whose load over Cmin cannot exceed the
+// highest utilization found so far is not evaluated.
 func (f *concreteFamily) Quick(i int, s Setting) Quick {
 	selfN := selfWeightN(f.selfW, &f.static[i], s.LengthMM)
 	demandN := f.ls.DemandFor(s.Method, selfN)
@@ -234,27 +237,50 @@ func (f *concreteFamily) Quick(i int, s Setting) Quick {
 	if len(cases) == 0 {
 		return Quick{Governing: concreteNotPerm, Reason: "no load combination to check"}
 	}
-	hb, maxN := 0, 0.0
+	hb, big, maxN := 0, 0, 0.0
 	for k := range cases {
 		if f.betaOf(&cases[k], selfN) > f.betaOf(&cases[hb], selfN) {
 			hb = k
 		}
 		if d := cases[k].DemandN(selfN); d > maxN {
-			maxN = d
+			big, maxN = k, d
 		}
 	}
-	q := f.CaseQuick(i, s, &cases[hb], selfN)
-	if !q.Permitted {
-		return q
+	gov := f.CaseQuick(i, s, &cases[hb], selfN)
+	if !gov.Permitted {
+		return gov
 	}
-	if q.Mode == int(concrete.Crushing) || f.betaFixed >= 0 {
+	cmin := gov.CapacityN
+	if gov.Mode == int(concrete.Crushing) || f.betaFixed >= 0 || hb == big {
 		if maxN > 0 {
-			q.CapacityN *= demandN / maxN
+			gov.CapacityN *= demandN / maxN
 		}
-		return q
+		return gov
 	}
-	q, _ = governCases(f, i, s, cases, nil, selfN, demandN)
-	return q
+	worst := utilOf(cases[hb].DemandN(selfN), cmin)
+	try := func(k int) {
+		d := cases[k].DemandN(selfN)
+		if k == hb || utilOf(d, cmin) <= worst {
+			return // its strength is at least Cmin, so it cannot govern
+		}
+		q := f.CaseQuick(i, s, &cases[k], selfN)
+		if u := utilOf(d, q.CapacityN); u > worst {
+			gov, worst = q, u
+		}
+	}
+	try(big)
+	for k := range cases {
+		if k != big {
+			try(k)
+		}
+	}
+	switch {
+	case math.IsInf(worst, 1):
+		gov.CapacityN = 0
+	case worst > 0:
+		gov.CapacityN = demandN / worst
+	}
+	return gov
 }
 
 // Detail returns the strength at a setting with the full trace, at the

@@ -188,6 +188,9 @@ func (f *concreteFamily) conditions(s Setting) concrete.Conditions {
 // quick converts the package result: the design strength φPn.
 func (f *concreteFamily) quick(sec *concrete.Section, cq *concrete.Quick) Quick {
 	q := Quick{Governing: concreteNotPerm, Mode: int(cq.Mode), Slenderness: cq.KLR, Permitted: cq.Permitted, Reason: cq.Reason}
+	if cq.Reason == concrete.ReasonTooSlender {
+		q.Limit = LimitConcrete
+	}
 	if cq.Permitted {
 		q.Governing = sec.ModeWords(cq.Mode)
 		q.CapacityN = cq.PhiPn

@@ -116,6 +116,7 @@ type Quick struct {
 	Slenderness float64 // governing slenderness ratio (KL/r, le/d, k·lu/r)
 	Permitted   bool    // false when the method does not apply (e.g. le/d > 50)
 	Reason      string  // why not permitted, when Permitted is false
+	Limit       string  // the slenderness limit passed, shown as a visible mark (see LimitMark); "" when none
 }
 
 // Step is one line of a calculation trace.

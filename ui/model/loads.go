@@ -57,9 +57,10 @@ type LoadSummary struct {
 	SnowN     float64 // service snow load, N
 	Reduction float64 // live-load reduction multiplier applied (1 when none)
 
-	Combos    []Combo // every combination checked
-	Governing int     // index into Combos of the governing one; -1 for a typed load
-	DemandN   float64 // governing axial demand without self-weight, N
+	Combos        []Combo // every combination checked
+	Governing     int     // index into Combos of the governing one
+	GoverningName string  // the governing combination's name without its zero-load terms
+	DemandN       float64 // governing axial demand without self-weight, N
 
 	BetaDns float64 // ACI 318-19 βdns of the governing LRFD combination: factored sustained (dead) over total factored axial
 	Lambda  float64 // NDS 2018 time effect factor λ of the governing (largest) LRFD combination; timber checks every combination with its own

@@ -185,13 +185,17 @@ func (f *steelFamily) Quick(i int, s Setting) Quick {
 	if st.Mode == 0 {
 		return Quick{Governing: steelNotPerm, Reason: steelOutside}
 	}
-	return Quick{
+	q := Quick{
 		CapacityN:   st.Available * steelNPerKip,
 		Governing:   st.Mode.Words(f.fam),
 		Mode:        int(st.Mode),
 		Slenderness: st.Slenderness,
 		Permitted:   true,
 	}
+	if sh := f.cols[i].Shape; k*lx/sh.Rx > 200 || k*ly/sh.Ry > 200 {
+		q.Limit = LimitSteel // AISC 360-22 E2 User Note
+	}
+	return q
 }
 
 // steelOutside is the reason given when the steel package declines a
@@ -230,6 +234,9 @@ func (f *steelFamily) Detail(i int, s Setting) Detail {
 		},
 		Warnings: r.Warnings,
 		Plain:    r.Plain,
+	}
+	if r.LcxRx > 200 || r.LcyRy > 200 {
+		d.Limit = LimitSteel // AISC 360-22 E2 User Note
 	}
 	d.Steps = make([]Step, 0, len(r.Steps)+1)
 	d.Steps = append(d.Steps, Step{Clause: "AISC 360-22 E4", Quantity: "Lz", Formula: steelTwistWords(s), Value: s.TwistMM(), Unit: "mm"})

@@ -351,6 +351,7 @@ func combine(ls *LoadSummary, v loads, occ string, m Method, steps []Step) {
 	}
 	ls.FireCase = fireCase(ac[ag], af[ag], v)
 	ls.DemandN = ls.Combos[ls.Governing].ValueN
+	ls.GoverningName = comboLabel(&ls.Combos[ls.Governing], v)
 	ls.DirectDeadFactor = ls.Combos[ls.Governing].D
 	ls.Steps = steps
 }

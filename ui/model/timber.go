@@ -181,6 +181,9 @@ func timberGeometry(s Setting) timber.Geometry {
 func timberQuick(tq *timber.Quick) Quick {
 	q := Quick{Slenderness: tq.LeD, Permitted: tq.Permitted, Reason: tq.Reason, Governing: timberNotPerm}
 	if !tq.Permitted {
+		if tq.Reason == timber.ReasonSlender {
+			q.Limit = LimitTimber
+		}
 		return q
 	}
 	q.CapacityN = tq.Capacity * timberNPerLb
@@ -193,7 +196,11 @@ func timberQuick(tq *timber.Quick) Quick {
 // its slenderness is the charred section's.
 func timberFireQuick(fq *timber.FireQuick) Quick {
 	if !fq.Permitted {
-		return Quick{Governing: timberFireNote, Mode: timberModeFire, Slenderness: fq.LeD, Reason: fq.Reason}
+		q := Quick{Governing: timberFireNote, Mode: timberModeFire, Slenderness: fq.LeD, Reason: fq.Reason}
+		if fq.Reason == timber.ReasonFireSlender {
+			q.Limit = LimitTimberCh
+		}
+		return q
 	}
 	return Quick{CapacityN: fq.Capacity * timberNPerLb, Governing: timberFireGoverning[fq.Mode],
 		Mode: timberModeFire + int(fq.Mode), Slenderness: fq.LeD, Permitted: true}

@@ -444,7 +444,14 @@ func (w *Window) updateLoadSummary() {
 	ls := &m.Loads
 	var b strings.Builder
 	fmt.Fprintf(&b, "Demand %s", fmtForce(ls.DemandN, sys))
-	if ls.Governing >= 0 && ls.Governing < len(ls.Combos) {
+	if ls.Typed {
+		kind := "factored"
+		if m.Scheme.Setting.Method == model.ASD {
+			kind = "service"
+		}
+		fmt.Fprintf(&b, " typed (%s); dead share %.2f gives D %s and L %s, and every combination follows (%s governs)",
+			kind, ls.DeadN/(ls.DeadN+ls.LiveN), fmtForce(ls.DeadN, sys), fmtForce(ls.LiveN, sys), ls.GoverningName)
+	} else if ls.Governing >= 0 && ls.Governing < len(ls.Combos) {
 		c := ls.Combos[ls.Governing]
 		fmt.Fprintf(&b, " from %s (%s)", c.Name, c.Clause)
 		if ls.Reduction < 1 {

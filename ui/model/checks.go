@@ -143,3 +143,29 @@ func newCheck(c *LoadCase, k int, q Quick, selfN float64, factors map[string]flo
 	ch.Util = utilOf(ch.DemandN, ch.CapacityN)
 	return ch
 }
+
+// dominantCases drops the combinations that can never govern a strength
+// depending only on the time factor returned by timeOf: one with the same
+// time factor and dead factor as another but a smaller load (with any
+// self-weight its load stays the smaller). The order is kept.
+func dominantCases(cs []LoadCase, timeOf func(*LoadCase) float64) []LoadCase {
+	out := make([]LoadCase, 0, len(cs))
+	for k := range cs {
+		c := &cs[k]
+		dominated := false
+		for j := range cs {
+			o := &cs[j]
+			if j == k || timeOf(o) != timeOf(c) || o.DeadFactor != c.DeadFactor {
+				continue
+			}
+			if o.ValueN > c.ValueN || (o.ValueN == c.ValueN && j < k) {
+				dominated = true
+				break
+			}
+		}
+		if !dominated {
+			out = append(out, *c)
+		}
+	}
+	return out
+}

@@ -198,7 +198,7 @@ func (m *Model) evalFamily(ctx context.Context, fi int, s Setting, out *FamilyRe
 		}
 		rows[i] = m.row(fi, i, s)
 	}
-	sortRows(rows)
+	rows = sortedRows(rows)
 	w := 0
 	for w < n && rows[w].OK {
 		w++
@@ -206,11 +206,17 @@ func (m *Model) evalFamily(ctx context.Context, fi int, s Setting, out *FamilyRe
 	*out = FamilyResult{Family: fi, Rows: rows, Working: w}
 }
 
-// sortRows ranks working rows first by score (then designation), then
-// failing rows by utilization.
-func sortRows(rows []Row) {
-	sort.SliceStable(rows, func(a, b int) bool {
-		ra, rb := &rows[a], &rows[b]
+// sortedRows returns the rows ranked: working rows first by score (then
+// designation), then failing rows by utilization. It sorts an index and
+// moves each row once into a new slice: rows are large, and a stable sort
+// of the rows themselves spends most of its time moving them.
+func sortedRows(rows []Row) []Row {
+	idx := make([]int32, len(rows))
+	for i := range idx {
+		idx[i] = int32(i)
+	}
+	sort.SliceStable(idx, func(a, b int) bool {
+		ra, rb := &rows[idx[a]], &rows[idx[b]]
 		if ra.OK != rb.OK {
 			return ra.OK
 		}
@@ -225,6 +231,11 @@ func sortRows(rows []Row) {
 		}
 		return ra.Static.Designation < rb.Static.Designation
 	})
+	sorted := make([]Row, len(rows))
+	for i, k := range idx {
+		sorted[i] = rows[k]
+	}
+	return sorted
 }
 
 // Detail returns a candidate's full trace at a setting, with every load

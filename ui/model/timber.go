@@ -40,7 +40,9 @@ type timberFamily struct {
 	asd, lrfd []*timber.Candidate
 	static    []Static
 	fire      bool
-	cdFixed   float64 // ASD load duration factor typed in the options; 0 takes each combination's own
+	cdFixed   float64    // ASD load duration factor typed in the options; 0 takes each combination's own
+	fastLRFD  []LoadCase // the LRFD combinations that can govern (dominantCases), for Quick
+	fastASD   []LoadCase // the ASD ones
 	selfW     bool
 	ls        LoadSummary
 }
@@ -65,7 +67,10 @@ func buildTimber(sc *Scheme, ls LoadSummary) ([]Family, error) {
 		Fire: timber.Fire{Hours: timberFireHours(o.Fire), Sides: sides},
 	}
 	newFam := func(name string) *timberFamily {
-		return &timberFamily{name: name, fire: base.Fire.On(), cdFixed: cdFixed, selfW: sc.SelfWeight, ls: ls}
+		f := &timberFamily{name: name, fire: base.Fire.On(), cdFixed: cdFixed, selfW: sc.SelfWeight, ls: ls}
+		f.fastLRFD = dominantCases(ls.LRFDCases, func(c *LoadCase) float64 { return f.timeOf(c, LRFD) })
+		f.fastASD = dominantCases(ls.ASDCases, func(c *LoadCase) float64 { return f.timeOf(c, ASD) })
+		return f
 	}
 	add := func(f *timberFamily, sec timber.Section, mat timber.Material, kind string) error {
 		ca, lr := base, base
@@ -247,7 +252,11 @@ func (f *timberFamily) FireQuick(i int, s Setting) (Quick, bool) {
 // with the capacity restated on the scale of the largest combination's load.
 func (f *timberFamily) Quick(i int, s Setting) Quick {
 	selfN := selfWeightN(f.selfW, &f.static[i], s.LengthMM)
-	q, _ := governCases(f, i, s, f.ls.CasesFor(s.Method), &f.ls.FireCase, selfN, f.ls.DemandFor(s.Method, selfN))
+	cases := f.fastLRFD
+	if s.Method == ASD {
+		cases = f.fastASD
+	}
+	q, _ := governCases(f, i, s, cases, &f.ls.FireCase, selfN, f.ls.DemandFor(s.Method, selfN))
 	return q
 }
 

@@ -106,7 +106,7 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		o.betaFromLoads = widget.NewCheck("βdns from the takedown's dead/live split", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.BetaFromLoads = on })
 		})
-		o.cap14 = widget.NewCheck("Hold the moment magnifier to 1.4 (ACI 318-19 6.2.5.3)", func(on bool) {
+		o.cap14 = widget.NewCheck("δ above 1.4 never works (ACI 318-19 6.2.5.3); untick to see the uncapped strength as a note", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.SecondOrderCap = on })
 		})
 		return container.NewVBox(

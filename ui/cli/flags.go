@@ -83,7 +83,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1 (default from the takedown, else 0.6)")
 	fs.StringVar(&f.ei, "ei", "", "(EI)eff expression of ACI 318-19 6.6.4.4.4: a or b")
 	fs.StringVar(&f.transverse, "transverse", "", "concrete columns: ties, spiral or all")
-	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "hold the concrete moment magnifier to 1.4 (ACI 318-19 6.2.5.3)")
+	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "concrete: δ above 1.4 never works (ACI 318-19 6.2.5.3); false only adds the strength without the limit to the trace as a note")
 	fs.StringVar(&f.carbon, "carbon", "", "embodied-carbon factors to change, e.g. concrete=300,rolled-steel=1.1 (kinds: "+carbonKindList()+")")
 
 	fs.StringVar(&f.species, "species", "", "sawn timber species: DF-L, SP, HF, SPF")

@@ -344,6 +344,10 @@ func (f *concreteFamily) Detail(i int, s Setting) Detail {
 		}
 	}
 	d.Calc = f.calc(sec, &r, &c, s, &d)
+	d.Calc["k_source"] = c.Ends.KWords()
+	if c.K != 0 {
+		d.Calc["k_source"] = "typed"
+	}
 	d.Calc["combination"] = gc.Name
 	d.Calc["combination_demand_kN"] = puN / 1e3
 	d.Calc["combination_capacity_kN"] = r.PhiPn / 1e3

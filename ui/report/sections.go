@@ -803,8 +803,11 @@ func assumptions(d *doc, f *facts) {
 	}
 	items = append(items, loadItem)
 	ks := kFactors(f)
-	twist := " Steel twists over the full height (the braces are not taken to restrain twisting)."
-	if s.TwistBraced {
+	twist := ""
+	switch {
+	case s.WeakMM < s.LengthMM && !s.TwistBraced:
+		twist = " Steel twists over the full height: the weak-axis braces are not taken to restrain twisting."
+	case s.WeakMM < s.LengthMM:
 		twist = " The braces are stated to restrain twisting too, so steel twists over the weak-axis length."
 	}
 	kItem := "Effective length: " + endsWords(s) + ", idealized; the weak-axis unbraced length is " + f.both(units.Length, s.WeakMM) + "." + twist

@@ -97,7 +97,11 @@ func loadCases(cs []Combo, factors []float64, v loads, m Method) []LoadCase {
 // fireCase is the load of a fire-case check: the governing ASD (service)
 // combination (NDS 2018 16.2.2 checks the residual section under ASD loads).
 func fireCase(c Combo, cd float64, v loads) LoadCase {
-	return LoadCase{Name: "fire: " + comboLabel(&c, v)[strings.Index(comboLabel(&c, v), ":")+2:], Clause: "NDS 2018 16.2.2 with " + c.Clause,
+	label := comboLabel(&c, v)
+	if i := strings.Index(label, ": "); i >= 0 {
+		label = label[i+2:]
+	}
+	return LoadCase{Name: "fire: " + label, Clause: "NDS 2018 16.2.2 with " + c.Clause,
 		Method: ASD, ValueN: c.ValueN, DeadFactor: c.D, DeadN: c.D * v.D, Time: cd}
 }
 

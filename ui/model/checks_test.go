@@ -205,3 +205,46 @@ func TestConcreteNonswayK(t *testing.T) {
 		}
 	}
 }
+
+// TestDominantCases: a combination with the same time factor and dead
+// factor as another but a smaller load can never govern, with any self-weight.
+func TestDominantCases(t *testing.T) {
+	cs := []LoadCase{
+		{Name: "a", ValueN: 100, DeadFactor: 1.4, Time: 0.6},
+		{Name: "b", ValueN: 150, DeadFactor: 1.2, Time: 0.8},
+		{Name: "c", ValueN: 160, DeadFactor: 1.2, Time: 0.8},
+		{Name: "d", ValueN: 160, DeadFactor: 1.2, Time: 0.8},
+		{Name: "e", ValueN: 90, DeadFactor: 1.0, Time: 0.8},
+	}
+	got := dominantCases(cs, func(c *LoadCase) float64 { return c.Time })
+	var names []string
+	for _, c := range got {
+		names = append(names, c.Name)
+	}
+	assert.Equal(t, []string{"a", "c", "e"}, names, "b is below c; d equals c and comes later; e has another dead factor")
+	// With one time factor for all (a typed CD), only the dead factor separates them.
+	got = dominantCases(cs, func(*LoadCase) float64 { return 1 })
+	names = names[:0]
+	for _, c := range got {
+		names = append(names, c.Name)
+	}
+	assert.Equal(t, []string{"a", "c", "e"}, names)
+}
+
+// TestLoadCaseBetaDnsWithSelfWeight: the column's own weight counts as
+// sustained dead load in βdns (ACI 318-19 6.6.4.4.4): for 1.2D + 1.6L with
+// D = 500, L = 250 kN and a 10 kN column, (1.2 × 510)/(1000 + 12) = 0.6047 (hand calc).
+func TestLoadCaseBetaDnsWithSelfWeight(t *testing.T) {
+	ls, err := Summarize(Load{Mode: LoadDirect, DirectN: 1000e3}, LRFD)
+	require.NoError(t, err)
+	var c *LoadCase
+	for k := range ls.LRFDCases {
+		if ls.LRFDCases[k].Name == "LRFD 2: 1.2D + 1.6L" {
+			c = &ls.LRFDCases[k]
+		}
+	}
+	require.NotNil(t, c)
+	assert.InDelta(t, 1.2*510/1012, c.BetaDns(10e3), 1e-12)
+	assert.InDelta(t, 1012e3, c.DemandN(10e3), 1e-6)
+	assert.Equal(t, "fire: D + L", ls.FireCase.Name, "the fire case is the governing service combination (NDS 2018 16.2.2)")
+}

@@ -649,6 +649,12 @@ func takedownSection(d *doc, f *facts) {
 		{cells: []string{"Roof live Lr", forceText(ls.RoofLiveN, f.sys), forceText(ls.RoofLiveN, f.other)}},
 		{cells: []string{"Snow S", forceText(ls.SnowN, f.sys), forceText(ls.SnowN, f.other)}},
 	}
+	if ls.Typed {
+		rows = []row{
+			{cells: []string{"Dead D", forceText(ls.DeadN, f.sys), forceText(ls.DeadN, f.other)}},
+			{cells: []string{"Live L", forceText(ls.LiveN, f.sys), forceText(ls.LiveN, f.other)}},
+		}
+	}
 	d.table(cols, rows)
 	d.pdf.Ln(1)
 	cols = []column{{"Combination", 2.6, "L"}, {"Clause", 2.4, "L"}, {"Axial load", 1.2, "R"}, {systemName(f.other), 1.2, "R"}}

@@ -80,7 +80,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.barGrade, "bar-grade", "", "reinforcing bar grade: 60 or 80")
 	fs.StringVar(&f.rhoMax, "rho-max", "", "largest reinforcement ratio, e.g. 0.04 or 4%")
 	fs.StringVar(&f.m1m2, "m1m2", "", "end-moment ratio M1/M2, -1 (single curvature) to 1")
-	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1 (default from the takedown, else 0.6)")
+	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1, used for every combination (default: each LRFD combination's own, factored dead over total)")
 	fs.StringVar(&f.ei, "ei", "", "(EI)eff expression of ACI 318-19 6.6.4.4.4: a or b")
 	fs.StringVar(&f.transverse, "transverse", "", "concrete columns: ties, spiral or all")
 	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "concrete: δ above 1.4 never works (ACI 318-19 6.2.5.3); false only adds the strength without the limit to the trace as a note")

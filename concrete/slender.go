@@ -1,6 +1,9 @@
 package concrete
 
-import "math"
+import (
+	"fmt"
+	"math"
+)
 
 // Ends is one of the six idealized end conditions (bottom–top).
 type Ends int
@@ -15,25 +18,34 @@ const (
 	PinnedGuided
 )
 
-// K returns the recommended effective-length factor for idealized ends:
-// 0.65, 0.80, 1.2, 1.0, 2.1 and 2.0 (common practice for idealized ends,
-// the same values as AISC 360-22 Commentary Table C-A-7.1); 0 for an invalid value.
+// K returns the effective-length factor used for idealized ends when none
+// is typed: 1.0 for the nonsway ends (fixed-fixed, fixed-pinned,
+// pinned-pinned), which ACI 318-19 6.6.4.4.3 permits (from memory) and which
+// does not count on fixity that cast-in-place ends rarely give; for the sway
+// ends the idealized values 1.2 (fixed-guided), 2.1 (fixed-free) and 2.0
+// (pinned-guided), common practice for idealized ends, the same values as
+// AISC 360-22 Commentary Table C-A-7.1, since a sway column's k is above 1.0
+// and the code gives no single value. 0 for an invalid value.
 func (e Ends) K() float64 {
 	switch e {
-	case FixedFixed:
-		return 0.65
-	case FixedPinned:
-		return 0.80
+	case FixedFixed, FixedPinned, PinnedPinned:
+		return 1.0 // ACI 318-19 6.6.4.4.3: k = 1.0 permitted for nonsway members (from memory)
 	case FixedGuided:
 		return 1.2
-	case PinnedPinned:
-		return 1.0
 	case FixedFree:
 		return 2.1
 	case PinnedGuided:
 		return 2.0
 	}
 	return 0
+}
+
+// KWords says where Ends.K comes from, for the trace.
+func (e Ends) KWords() string {
+	if e.Sway() {
+		return fmt.Sprintf("%s ends: sway, k above 1.0; idealized value (common practice, as AISC 360-22 C-A-7.1)", e)
+	}
+	return fmt.Sprintf("%s ends: nonsway, k = 1.0 (ACI 318-19 6.6.4.4.3 permits it; cast-in-place ends are rarely fully fixed)", e)
 }
 
 // Sway reports whether the top of the column can translate sideways.

@@ -72,10 +72,10 @@ func TestSlendernessLimits(t *testing.T) {
 		ends Ends
 		k    float64
 	}{
-		{FixedFixed, 0.65}, {FixedPinned, 0.80}, {FixedGuided, 1.2}, {PinnedPinned, 1.0}, {FixedFree, 2.1}, {PinnedGuided, 2.0},
+		{FixedFixed, 1.0}, {FixedPinned, 1.0}, {FixedGuided, 1.2}, {PinnedPinned, 1.0}, {FixedFree, 2.1}, {PinnedGuided, 2.0},
 	}
 	for _, r := range kRows {
-		assert.Equal(t, r.k, r.ends.K(), "recommended K for %s (common practice for idealized ends, AISC 360-22 C-A-7.1)", r.ends)
+		assert.Equal(t, r.k, r.ends.K(), "K for %s: nonsway 1.0 (ACI 318-19 6.6.4.4.3, from memory); sway idealized values (common practice, AISC 360-22 C-A-7.1)", r.ends)
 	}
 }
 
@@ -129,8 +129,10 @@ func TestInputsMoveStrengthTheRightWay(t *testing.T) {
 	more.BetaDns = 1
 	assert.Less(t, sq.Quick(&more).PhiPn, q0.PhiPn, "more sustained load, less stiffness (Eq. 6.6.4.4.4)")
 	fixed := base
-	fixed.Ends = FixedFixed
-	assert.Greater(t, sq.Quick(&fixed).PhiPn, q0.PhiPn, "k = 0.65 is stronger than k = 1")
+	fixed.K = 0.65
+	assert.Greater(t, sq.Quick(&fixed).PhiPn, q0.PhiPn, "typed k = 0.65 is stronger than k = 1")
+	fixed.K, fixed.Ends = 0, FixedFixed
+	assert.Equal(t, q0.PhiPn, sq.Quick(&fixed).PhiPn, "nonsway fixed-fixed takes k = 1.0 like pinned-pinned (ACI 318-19 6.6.4.4.3, from memory)")
 	typed := base
 	typed.K = 1.0
 	assert.Equal(t, q0.PhiPn, sq.Quick(&typed).PhiPn, "typed K = 1 equals pinned-pinned")

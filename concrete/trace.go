@@ -114,7 +114,7 @@ func (s *Section) Evaluate(c Conditions) (Result, error) {
 
 	// Slenderness about each axis in turn.
 	k := c.KFactor()
-	kWords := fmt.Sprintf("%s ends (common practice for idealized ends, as AISC 360-22 C-A-7.1)", c.Ends)
+	kWords := c.Ends.KWords()
 	if c.K != 0 {
 		kWords = "typed"
 	}

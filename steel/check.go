@@ -140,7 +140,12 @@ func (c *Column) Check(in Input) (Result, error) {
 
 	step("AISC 360-22 A3.1", "Fy", c.Grade.Name, c.fy, "ksi")
 	step("AISC 360-22 A3.1", "E", "modulus of elasticity", E, "ksi")
-	step("AISC 360-22 B3", "Ag", "gross area", c.ag, "in2")
+	agWords := "gross area"
+	if s.AreaNote != "" {
+		agWords = "gross area: " + s.AreaNote
+		r.Notes = append(r.Notes, s.AreaNote)
+	}
+	step("AISC 360-22 B3", "Ag", agWords, c.ag, "in2")
 
 	// B4.1: classify the elements for uniform compression.
 	for i := 0; i < c.nElem; i++ {

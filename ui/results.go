@@ -366,7 +366,8 @@ func (w *Window) updateCalc() {
 	} else {
 		w.calcWarn.Hide()
 	}
-	w.stepRows = append(w.stepRows[:0], d.Steps...)
+	w.stepRows = append(w.stepRows[:0], checkSteps(d.Checks, sys)...)
+	w.stepRows = append(w.stepRows, d.Steps...)
 	w.steps.update(false)
 }
 

@@ -216,13 +216,21 @@ var columns = []column{
 			if !r.Permitted && r.Reason != "" {
 				return r.Reason
 			}
+			if _, why := model.LimitMark(&r.Quick); why != "" {
+				return r.Governing + "; ⚠ " + why
+			}
 			return r.Governing
 		},
 		key: func(_ *cellCtx, r *model.Row) sortKey { return text(r.Governing) }},
 	{id: "slenderness", width: 105, right: true,
 		title: func(units.System, model.Method) string { return "Slenderness" },
-		cell:  func(_ *cellCtx, r *model.Row) string { return num(r.Slenderness, 1) },
-		key:   func(_ *cellCtx, r *model.Row) sortKey { return n(r.Slenderness) }},
+		cell: func(_ *cellCtx, r *model.Row) string {
+			if mark, _ := model.LimitMark(&r.Quick); mark != "" {
+				return num(r.Slenderness, 1) + " ⚠"
+			}
+			return num(r.Slenderness, 1)
+		},
+		key: func(_ *cellCtx, r *model.Row) sortKey { return n(r.Slenderness) }},
 }
 
 // columnIndex returns the index of a column id, or -1.

@@ -68,6 +68,7 @@ type Window struct {
 	fields      map[string]*field
 	sketches    map[model.EndCondition]*widgets.EndSketch
 	weakCheck   *widget.Check
+	twistCheck  *widget.Check // the weak-axis braces also restrain twisting (steel Lcz)
 	loadMode    *widget.RadioGroup
 	directBox   *fyne.Container
 	takedownBox *fyne.Container

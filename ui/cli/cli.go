@@ -173,6 +173,37 @@ type Candidate struct {
 
 	// Fire is how the size meets the scheme's fire rating.
 	Fire model.FireCheck `json:"fire"`
+	Checks      []CheckJSON    `json:"checks"`
+	Limit       string         `json:"limit"`
+}
+
+// CheckJSON is one load combination checked on one candidate.
+type CheckJSON struct {
+	Combination string             `json:"combination"`
+	Clause      string             `json:"clause"`
+	DemandKN    float64            `json:"demand_kN"`
+	CapacityKN  float64            `json:"capacity_kN"`
+	Utilization *float64           `json:"utilization"`
+	Factors     map[string]float64 `json:"factors"`
+	Governing   bool               `json:"governing"`
+}
+
+// checksJSON converts the model's checks, rounding as the candidate does.
+func checksJSON(cs []model.Check) []CheckJSON {
+	out := make([]CheckJSON, 0, len(cs))
+	for _, c := range cs {
+		j := CheckJSON{Combination: c.Combination, Clause: c.Clause, DemandKN: round(c.DemandN/1e3, 2),
+			CapacityKN: round(c.CapacityN/1e3, 2), Factors: map[string]float64{}, Governing: c.Governing}
+		if !math.IsInf(c.Util, 0) && !math.IsNaN(c.Util) {
+			u := round(c.Util, 4)
+			j.Utilization = &u
+		}
+		for k, v := range c.Factors {
+			j.Factors[k] = round(v, 4)
+		}
+		out = append(out, j)
+	}
+	return out
 }
 
 func round(x float64, digits int) float64 {
@@ -240,6 +271,7 @@ func NewCandidate(m *model.Model, r *model.Row, s model.Setting) Candidate {
 		PlanAreaMM2: round(r.Static.PlanAreaMM2, 0), CarbonKg: round(r.CarbonKg, 1),
 		Governing: r.Governing, Slenderness: round(r.Slenderness, 1),
 		Warnings: d.Warnings, Explanation: d.Plain, Steps: d.Steps,
+		Checks: checksJSON(d.Checks), Limit: r.Limit,
 	}
 	c.Fire = fireJSON(r.Static)
 	if c.Warnings == nil {
@@ -350,21 +382,27 @@ func printHeader(w io.Writer, m *model.Model) {
 	fmt.Fprintf(w, "Unbraced length %s (weak axis %s), %s, %s\n",
 		units.Length(s.LengthMM, sys), units.Length(s.WeakMM, sys), endsText(s), strings.ToUpper(string(s.Method)))
 	ls := m.Loads
-	if ls.Governing >= 0 && ls.Governing < len(ls.Combos) {
-		c := ls.Combos[ls.Governing]
-		fmt.Fprintf(w, "Demand %s from the takedown, governed by %s (%s)", units.Force(ls.DemandN, sys), c.Name, c.Clause)
-	} else {
+	switch {
+	case ls.Typed && ls.Governing >= 0:
 		kind := "factored"
 		if s.Method == model.ASD {
 			kind = "service"
 		}
-		fmt.Fprintf(w, "Demand %s typed (%s)", units.Force(ls.DemandN, sys), kind)
+		c := ls.Combos[ls.Governing]
+		fmt.Fprintf(w, "Demand %s typed (%s), dead share %.2f: D %s, L %s, governed by %s (%s)", units.Force(ls.DemandN, sys), kind,
+			ls.DeadN/(ls.DeadN+ls.LiveN), units.Force(ls.DeadN, sys), units.Force(ls.LiveN, sys), ls.GoverningName, c.Clause)
+	case ls.Governing >= 0 && ls.Governing < len(ls.Combos):
+		c := ls.Combos[ls.Governing]
+		fmt.Fprintf(w, "Demand %s from the takedown, governed by %s (%s)", units.Force(ls.DemandN, sys), c.Name, c.Clause)
+	default:
+		fmt.Fprintf(w, "Demand %s", units.Force(ls.DemandN, sys))
 	}
 	if sc.SelfWeight {
 		fmt.Fprint(w, ", plus each column's self-weight")
 	}
 	fmt.Fprintf(w, "; ranked by %s\n", sc.Metric)
 	printFireLine(w, sc)
+	fmt.Fprintln(w, "Every combination is checked with its own factors (timber λ or CD, concrete βdns); the highest utilization governs.")
 	fmt.Fprintln(w)
 }
 
@@ -376,6 +414,8 @@ func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System
 		fu, wu = "kN", "kg/m"
 	}
 	fmt.Fprintf(tw, "Status\tFamily\tSize\tPlan\tWeight (%s)\tCapacity (%s)\tDemand (%s)\tUtil\tGoverning\tSlenderness\n", wu, fu, fu)
+	seen := map[string]bool{}
+	var marks []string
 	for _, r := range rows {
 		status := "OK"
 		if !r.OK {
@@ -394,10 +434,21 @@ func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System
 		if !math.IsInf(r.Util, 0) {
 			util = fmt.Sprintf("%.2f", r.Util)
 		}
-		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%.1f\t%.0f\t%.0f\t%s\t%s\t%.0f\n", status, m.Families[r.Family].Name(), r.Static.Designation,
-			units.PlanSize(r.Static.FootprintMM, sys), wt, capV, demV, util, r.Governing, r.Slenderness)
+		slender := fmt.Sprintf("%.0f", r.Slenderness)
+		if mark, why := model.LimitMark(&r.Quick); mark != "" {
+			slender += " " + mark
+			if !seen[why] {
+				seen[why] = true
+				marks = append(marks, why)
+			}
+		}
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%.1f\t%.0f\t%.0f\t%s\t%s\t%s\n", status, m.Families[r.Family].Name(), r.Static.Designation,
+			units.PlanSize(r.Static.FootprintMM, sys), wt, capV, demV, util, r.Governing, slender)
 	}
 	tw.Flush()
+	for _, why := range marks {
+		fmt.Fprintf(w, "%s %s\n", model.LimitMarkText, why)
+	}
 }
 
 func runCrossovers(args []string, stdout, stderr io.Writer) error {

@@ -27,6 +27,8 @@ type schemeFlags struct {
 
 	scheme, length, ends, k, weak, load, method, materials, units, rank string
 	selfWeight                                                          bool
+	deadShare                                                           string
+	twistBraced                                                         bool
 
 	tributary, floors, dead, live, roofDead, roofLive, snow, kll, occupancy string
 	noReduction                                                             bool
@@ -54,7 +56,9 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.ends, "ends", "", "end conditions: pinned-pinned, fixed-fixed, fixed-pinned, fixed-guided, pinned-guided, fixed-free")
 	fs.StringVar(&f.k, "k", "", "effective-length factor typed in (overrides --ends' recommended value)")
 	fs.StringVar(&f.weak, "weak-length", "", "weak-axis unbraced length (a brace); defaults to --length")
-	fs.StringVar(&f.load, "load", "", "axial load, e.g. 1800kN, 400kip (factored for LRFD, service for ASD)")
+	fs.StringVar(&f.load, "load", "", "axial load, e.g. 1800kN, 400kip (the governing factored load for LRFD, the service load for ASD)")
+	fs.StringVar(&f.deadShare, "dead-share", "", "part of a typed load's service load that is dead, as a fraction or percent, e.g. 0.6, 60% or 2/3 (default 2/3); D, L and every combination follow from it")
+	fs.BoolVar(&f.twistBraced, "twist-braced", false, "the weak-axis braces also restrain twisting, so the steel torsional length Lcz is the weak-axis length (default: the full length)")
 	fs.StringVar(&f.method, "method", "", "lrfd or asd (default lrfd)")
 	fs.StringVar(&f.materials, "materials", "", "comma list of "+strings.Join(model.Materials(), ", ")+" (default all)")
 	fs.StringVar(&f.units, "units", "", "units shown: us or si (default us)")
@@ -79,10 +83,10 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.barGrade, "bar-grade", "", "reinforcing bar grade: 60 or 80")
 	fs.StringVar(&f.rhoMax, "rho-max", "", "largest reinforcement ratio, e.g. 0.04 or 4%")
 	fs.StringVar(&f.m1m2, "m1m2", "", "end-moment ratio M1/M2, -1 (single curvature) to 1")
-	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1 (default from the takedown, else 0.6)")
+	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1, used for every combination (default: each LRFD combination's own, factored dead over total)")
 	fs.StringVar(&f.ei, "ei", "", "(EI)eff expression of ACI 318-19 6.6.4.4.4: a or b")
 	fs.StringVar(&f.transverse, "transverse", "", "concrete columns: ties, spiral or all")
-	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "hold the concrete moment magnifier to 1.4 (ACI 318-19 6.2.5.3)")
+	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "concrete: δ above 1.4 never works (ACI 318-19 6.2.5.3); false only adds the strength without the limit to the trace as a note")
 	fs.StringVar(&f.carbon, "carbon", "", "embodied-carbon factors to change, e.g. concrete=300,rolled-steel=1.1 (kinds: "+carbonKindList()+")")
 
 	fs.StringVar(&f.species, "species", "", "sawn timber species: DF-L, SP, HF, SPF")
@@ -98,6 +102,11 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 
 	fs.StringVar(&f.fillFc, "fill-fc", "", "f'c of the concrete filling the composite HSS, 3000 to 10000 psi, e.g. 6ksi, 40MPa (default: --fc)")
 	fs.StringVar(&f.compositeFamilies, "composite-families", "", "comma list of "+strings.Join(model.CompositeFamilies, ", "))
+	fs.Usage = func() {
+		fmt.Fprintf(fs.Output(), "Usage of %s:\n", name)
+		fs.PrintDefaults()
+		fmt.Fprintf(fs.Output(), "\n%s", model.AssumptionsText())
+	}
 	return f
 }
 
@@ -154,6 +163,9 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 		s.WeakMM = v
 	} else if lengthSet {
 		s.WeakMM = s.LengthMM
+	}
+	if f.set("twist-braced") {
+		s.TwistBraced = f.twistBraced
 	}
 	if f.ends != "" {
 		e := model.EndCondition(strings.ToLower(f.ends))
@@ -234,6 +246,17 @@ func (f *schemeFlags) buildLoad(sc *model.Scheme) error {
 	if f.load != "" && takedown {
 		return usagef("--load %q: give either --load or the takedown flags (--tributary, --floors, --dead, ...), not both", f.load)
 	}
+	share := 0.0
+	if f.deadShare != "" {
+		if takedown {
+			return usagef("--dead-share %q: applies to a typed --load only; a takedown gives its own dead and live loads", f.deadShare)
+		}
+		v, err := parseShare(f.deadShare)
+		if err != nil {
+			return err
+		}
+		share = v
+	}
 	if f.load != "" {
 		v, err := units.ParseForce(f.load)
 		if err != nil {
@@ -242,7 +265,19 @@ func (f *schemeFlags) buildLoad(sc *model.Scheme) error {
 		if v <= 0 {
 			return usagef("--load %q: not accepted; give an axial load greater than zero", f.load)
 		}
-		sc.Load = model.Load{Mode: model.LoadDirect, DirectN: v}
+		keep := 0.0 // a typed load from --scheme keeps its dead share
+		if sc.Load.Mode == model.LoadDirect {
+			keep = sc.Load.DeadShare
+		}
+		sc.Load = model.Load{Mode: model.LoadDirect, DirectN: v, DeadShare: keep}
+	}
+	if f.deadShare != "" {
+		if sc.Load.Mode != model.LoadDirect {
+			return usagef("--dead-share %q: applies to a typed --load only; the scheme's load is a takedown", f.deadShare)
+		}
+		sc.Load.DeadShare = share
+	}
+	if f.load != "" {
 		return nil
 	}
 	if !takedown {
@@ -500,4 +535,32 @@ func (f *schemeFlags) buildCarbon(sc *model.Scheme) error {
 	}
 	sc.Carbon = cf
 	return nil
+}
+
+// parseShare reads --dead-share: a fraction (0.6), a percent (60%) or a
+// ratio (2/3), above 0 and at most 1.
+func parseShare(s string) (float64, error) {
+	bad := usagef("--dead-share %q: not accepted; give the part of the service load that is dead, above 0 and at most 1, as a fraction (0.6), a percent (60%%) or a ratio (2/3)", s)
+	t := strings.TrimSpace(s)
+	var v float64
+	var err error
+	switch {
+	case strings.HasSuffix(t, "%"):
+		v, err = strconv.ParseFloat(strings.TrimSpace(strings.TrimSuffix(t, "%")), 64)
+		v /= 100
+	case strings.Contains(t, "/"):
+		parts := strings.SplitN(t, "/", 2)
+		a, e1 := strconv.ParseFloat(strings.TrimSpace(parts[0]), 64)
+		b, e2 := strconv.ParseFloat(strings.TrimSpace(parts[1]), 64)
+		if e1 != nil || e2 != nil || b == 0 {
+			return 0, bad
+		}
+		v = a / b
+	default:
+		v, err = strconv.ParseFloat(t, 64)
+	}
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) || v <= 0 || v > 1 {
+		return 0, bad
+	}
+	return v, nil
 }

@@ -54,11 +54,12 @@ func loadReference(t *testing.T) map[string]refShape {
 }
 
 // independentFcr is AISC 360-22 E3 and E4 from tabulated properties (kip, in, ksi).
-func independentFcr(s refShape, fy, lcx, lcy, lcz float64) float64 {
+// independentFcr works AISC 360-22 E3 and E4 from the reference's
+// properties with the radii of gyration given (the caller takes r from the
+// tabulated I and A: the tabulated r carries three figures, which alone
+// moves an elastic-buckling strength by up to 1%).
+func independentFcr(s refShape, rx, ry, fy, lcx, lcy, lcz float64) float64 {
 	const E, G = 29000.0, 11200.0
-	// r from the tabulated I and A: the tabulated r carries three figures,
-	// which alone moves an elastic-buckling strength by up to 1%.
-	rx, ry := math.Sqrt(s.Ix/s.A), math.Sqrt(s.Iy/s.A)
 	fe := math.Min(math.Pi*math.Pi*E/math.Pow(lcx/rx, 2), math.Pi*math.Pi*E/math.Pow(lcy/ry, 2)) // Eq. E3-4
 	if s.typ == "W" || s.typ == "HP" {
 		fez := (math.Pi*math.Pi*E*s.Cw/(lcz*lcz) + G*s.J) / (s.Ix + s.Iy) // Eq. E4-2
@@ -117,14 +118,30 @@ func TestCompareAllSteelAgreesWithIndependentCalc(t *testing.T) {
 			if !ok {
 				continue
 			}
-			if s.typ == "PIPE" && math.Abs(math.Pi*(s.OD-s.tdes)*s.tdes/s.A-1) > 0.01 {
-				// A few pipe rows tabulate an area that disagrees with their own OD
-				// and tdes by more than 1%; the independent check cannot use them.
-				continue
-			}
-			if s.Iy < 1 {
-				// Below 1 in⁴ the tabulated three figures of I (e.g. 0.0171 for
-				// a 1/2 in pipe) cannot support a 1% check of buckling strength.
+			// Section properties: the tabulated A, Ix and Iy. Pipe geometry is
+			// fixed by OD and tdes, whose small sizes' A and I are tabulated to
+			// three figures, so pipe takes them from OD and tdes, except where
+			// the tabulated A differs from them by more than rounding (0.5 %):
+			// there the published A and r are used, as the catalogue does.
+			a, rx, ry := s.A, math.Sqrt(s.Ix/s.A), math.Sqrt(s.Iy/s.A)
+			if s.typ == "PIPE" {
+				id := s.OD - 2*s.tdes
+				aOD := math.Pi / 4 * (s.OD*s.OD - id*id)
+				switch {
+				case math.Abs(aOD/s.A-1) <= 0.005:
+					i := math.Pi / 64 * (s.OD*s.OD*s.OD*s.OD - id*id*id*id)
+					a, rx = aOD, math.Sqrt(i/aOD)
+					ry = rx
+				case cand.Designation == "Pipe12XXS":
+					// Its published area is not held in the catalogue (steel/data_hss.go).
+					t.Logf("%s: published area not held in the catalogue; not checked", cand.Designation)
+					continue
+				default:
+					rx, ry = s.rx, s.ry
+				}
+			} else if s.Iy < 1 {
+				// Below 1 in⁴ the tabulated three figures of I cannot support a
+				// 1% check of buckling strength.
 				continue
 			}
 			fy := cand.Calc["Fy_MPa"].(float64) / units.MPaPerKsi
@@ -132,7 +149,12 @@ func TestCompareAllSteelAgreesWithIndependentCalc(t *testing.T) {
 				continue
 			}
 			L := c.lmm / units.MMPerInch * c.k
-			want := c.factor * independentFcr(s, fy, L, L, L) * s.A * units.NPerKip / 1000
+			if L/math.Min(rx, ry) > 300 {
+				// Far past the Lc/r = 200 recommendation (E2): the strength is a
+				// few hundredths of a kN, below the JSON's rounding to 0.01 kN.
+				continue
+			}
+			want := c.factor * independentFcr(s, rx, ry, fy, L, L, L) * a * units.NPerKip / 1000
 			assert.InEpsilon(t, want, cand.CapacityKN, 0.01, "%s at %s %s %s", cand.Designation, c.length, c.ends, c.method)
 			checked++
 		}

@@ -159,7 +159,7 @@ func (f *compositeFamily) Static(i int) *Static { return &f.static[i] }
 // Quick evaluates candidate i at the setting without a trace; it does not
 // allocate.
 func (f *compositeFamily) Quick(i int, s Setting) Quick {
-	lx, ly, k, ok := steelGeometry(s)
+	lx, ly, _, k, ok := steelGeometry(s)
 	if !ok {
 		return Quick{Governing: compositeNotPerm, Reason: steelBadSetting}
 	}

@@ -2,7 +2,7 @@ package model
 
 import (
 	"errors"
-	"fmt"
+	"math"
 	"sync"
 
 	"upright/concrete"
@@ -92,13 +92,18 @@ func concreteStatic(s *concrete.Section) Static {
 }
 
 // concreteFamily is one family of concrete candidates at the scheme's options.
+// ACI 318-19 is strength design, so each candidate is checked against every
+// LRFD combination with that combination's own βdns, under either method;
+// under ASD the governing strength is restated on the service-load scale.
 type concreteFamily struct {
-	kind    concrete.Kind
-	secs    []*concrete.Section
-	static  []Static
-	cond    concrete.Conditions // M1/M2, βdns and EI method; lengths and ends come per setting
-	alpha   float64             // ls.StrengthPerService, for ASD
-	betaSrc string              // where βdns came from, for the trace
+	kind      concrete.Kind
+	secs      []*concrete.Section
+	static    []Static
+	cond      concrete.Conditions // M1/M2, EI method and the 1.4 limit; lengths, ends and βdns come per setting and combination
+	betaFixed float64             // βdns typed in the options for every combination; -1 takes each combination's own
+	uncapped  bool                // the 1.4 limit was switched off: its uncapped strength is shown as a note only
+	selfW     bool
+	ls        LoadSummary
 }
 
 func buildConcrete(sc *Scheme, ls LoadSummary) ([]Family, error) {
@@ -114,18 +119,15 @@ func buildConcrete(sc *Scheme, ls LoadSummary) ([]Family, error) {
 	if err != nil {
 		return nil, err
 	}
-	cond := concrete.Conditions{M1M2: o.M1M2, BetaDns: o.BetaDns, Cap14: o.SecondOrderCap}
-	betaSrc := "the concrete options"
-	if o.BetaFromLoads && ls.Known && finite(ls.BetaDns) && ls.BetaDns >= 0 && ls.BetaDns <= 1 {
-		cond.BetaDns = ls.BetaDns
-		betaSrc = "the load takedown (factored dead over total factored load)"
+	// ACI 318-19 6.2.5.3: the total moment with second-order effects may not
+	// exceed 1.4 times the first-order moment, so δ > 1.4 never works.
+	cond := concrete.Conditions{M1M2: o.M1M2, Cap14: true}
+	betaFixed := -1.0
+	if !o.BetaFromLoads {
+		betaFixed = o.BetaDns
 	}
 	if o.EIMethod == "b" {
 		cond.EI = concrete.EIWithSteel
-	}
-	alpha := ls.StrengthPerService
-	if !finite(alpha) || alpha <= 0 {
-		alpha = 1.5 // common practice: D + L factored over service is about 1.5
 	}
 	var kinds []concrete.Kind
 	switch o.Transverse {
@@ -140,7 +142,7 @@ func buildConcrete(sc *Scheme, ls LoadSummary) ([]Family, error) {
 	for _, k := range kinds {
 		out = append(out, &concreteFamily{
 			kind: k, secs: e.secs[k], static: append([]Static(nil), e.static[k]...),
-			cond: cond, alpha: alpha, betaSrc: betaSrc,
+			cond: cond, betaFixed: betaFixed, uncapped: !o.SecondOrderCap, selfW: sc.SelfWeight, ls: ls,
 		})
 	}
 	return out, nil
@@ -184,54 +186,175 @@ func (f *concreteFamily) conditions(s Setting) concrete.Conditions {
 	return c
 }
 
-// quick converts the package result; ASD divides φPn by the strength-per-service ratio.
-func (f *concreteFamily) quick(sec *concrete.Section, cq *concrete.Quick, m Method) Quick {
+// quick converts the package result: the design strength φPn.
+func (f *concreteFamily) quick(sec *concrete.Section, cq *concrete.Quick) Quick {
 	q := Quick{Governing: concreteNotPerm, Mode: int(cq.Mode), Slenderness: cq.KLR, Permitted: cq.Permitted, Reason: cq.Reason}
+	if cq.Reason == concrete.ReasonTooSlender {
+		q.Limit = LimitConcrete
+	}
 	if cq.Permitted {
 		q.Governing = sec.ModeWords(cq.Mode)
 		q.CapacityN = cq.PhiPn
-		if m == ASD {
-			q.CapacityN = cq.PhiPn / f.alpha
-		}
 	}
 	return q
 }
 
-// Quick returns the strength at a setting without a trace; it does not allocate.
-func (f *concreteFamily) Quick(i int, s Setting) Quick {
-	c := f.conditions(s)
-	sec := f.secs[i]
-	cq := sec.Quick(&c)
-	return f.quick(sec, &cq, s.Method)
+// Cases implements CaseFamily: the LRFD combinations under either method
+// (ACI 318-19 is strength design).
+func (f *concreteFamily) Cases(m Method) []LoadCase { return f.ls.LRFDCases }
+
+// betaOf is the βdns used for a combination: the typed one, or the
+// combination's factored dead over its total (ACI 318-19 6.6.4.4.4).
+func (f *concreteFamily) betaOf(c *LoadCase, selfN float64) float64 {
+	if f.betaFixed >= 0 {
+		return f.betaFixed
+	}
+	return c.BetaDns(selfN)
 }
 
-// Detail returns the strength at a setting with the full trace.
+// CaseQuick implements CaseFamily: φPn with the combination's βdns.
+func (f *concreteFamily) CaseQuick(i int, s Setting, c *LoadCase, selfN float64) Quick {
+	cond := f.conditions(s)
+	cond.BetaDns = f.betaOf(c, selfN)
+	sec := f.secs[i]
+	cq := sec.Quick(&cond)
+	return f.quick(sec, &cq)
+}
+
+// CaseFactors implements CaseFamily.
+func (f *concreteFamily) CaseFactors(c *LoadCase, selfN float64) map[string]float64 {
+	return map[string]float64{"beta_dns": f.betaOf(c, selfN)}
+}
+
+// Quick returns the governing check over every LRFD combination, with the
+// capacity on the scale of the method's largest combination (under ASD the
+// service load); it does not allocate. βdns only lowers the strength of a
+// slender column (Eq. 6.6.4.4.4), so the combination with the highest βdns
+// has the lowest strength Cmin: when it is held by the axial limit
+// φPn,max, every combination has that strength and the largest load
+// governs; otherwise a combination whose load over Cmin cannot exceed the
+// highest utilization found so far is not evaluated.
+func (f *concreteFamily) Quick(i int, s Setting) Quick {
+	selfN := selfWeightN(f.selfW, &f.static[i], s.LengthMM)
+	demandN := f.ls.DemandFor(s.Method, selfN)
+	cases := f.ls.LRFDCases
+	if len(cases) == 0 {
+		return Quick{Governing: concreteNotPerm, Reason: "no load combination to check"}
+	}
+	hb, big, maxN := 0, 0, 0.0
+	for k := range cases {
+		if f.betaOf(&cases[k], selfN) > f.betaOf(&cases[hb], selfN) {
+			hb = k
+		}
+		if d := cases[k].DemandN(selfN); d > maxN {
+			big, maxN = k, d
+		}
+	}
+	gov := f.CaseQuick(i, s, &cases[hb], selfN)
+	if !gov.Permitted {
+		return gov
+	}
+	cmin := gov.CapacityN
+	if gov.Mode == int(concrete.Crushing) || f.betaFixed >= 0 || hb == big {
+		if maxN > 0 {
+			gov.CapacityN *= demandN / maxN
+		}
+		return gov
+	}
+	worst := utilOf(cases[hb].DemandN(selfN), cmin)
+	try := func(k int) {
+		d := cases[k].DemandN(selfN)
+		if k == hb || utilOf(d, cmin) <= worst {
+			return // its strength is at least Cmin, so it cannot govern
+		}
+		q := f.CaseQuick(i, s, &cases[k], selfN)
+		if u := utilOf(d, q.CapacityN); u > worst {
+			gov, worst = q, u
+		}
+	}
+	try(big)
+	for k := range cases {
+		if k != big {
+			try(k)
+		}
+	}
+	switch {
+	case math.IsInf(worst, 1):
+		gov.CapacityN = 0
+	case worst > 0:
+		gov.CapacityN = demandN / worst
+	}
+	return gov
+}
+
+// Detail returns the strength at a setting with the full trace, at the
+// βdns of the combination with the highest utilization.
 func (f *concreteFamily) Detail(i int, s Setting) Detail {
 	c := f.conditions(s)
 	sec := f.secs[i]
+	selfN := selfWeightN(f.selfW, &f.static[i], s.LengthMM)
+	gk, worst := 0, -1.0
+	for k := range f.ls.LRFDCases {
+		cq := f.CaseQuick(i, s, &f.ls.LRFDCases[k], selfN)
+		if u := utilOf(f.ls.LRFDCases[k].DemandN(selfN), cq.CapacityN); u > worst {
+			gk, worst = k, u
+		}
+	}
+	var gc LoadCase
+	if gk < len(f.ls.LRFDCases) {
+		gc = f.ls.LRFDCases[gk]
+	}
+	c.BetaDns = f.betaOf(&gc, selfN)
 	r, err := sec.Evaluate(c)
 	if err != nil {
 		q := Quick{Governing: concreteNotPerm, Reason: err.Error()}
 		return Detail{Quick: q, Warnings: []string{err.Error()}, Plain: "Not evaluated: " + err.Error(), Calc: map[string]any{"error": err.Error()}}
 	}
-	d := Detail{Quick: f.quick(sec, &r.Quick, s.Method), Warnings: r.Warnings}
-	d.Steps = make([]Step, 0, len(r.Steps)+2)
+	d := Detail{Quick: f.Quick(i, s), Warnings: r.Warnings}
+	d.Steps = make([]Step, 0, len(r.Steps)+4)
 	for _, st := range r.Steps {
 		d.Steps = append(d.Steps, Step(st))
 	}
 	d.Plain = r.Summary
+	puN := gc.DemandN(selfN)
+	betaWords := "factored dead over total factored load of " + gc.Name + " (ACI 318-19 6.6.4.4.4); every LRFD combination is checked with its own"
+	if f.betaFixed >= 0 {
+		betaWords = "typed in the concrete options, used for every combination"
+	}
+	d.Steps = append(d.Steps,
+		Step{Clause: "ACI 318-19 6.6.4.4.4", Quantity: "βdns", Formula: betaWords, Value: c.BetaDns, Unit: ""},
+		Step{Clause: gc.Clause, Quantity: "Pu", Formula: "the combination with the highest utilization: " + gc.Name + ", with self-weight", Value: puN / 1e3, Unit: "kN"},
+	)
+	if f.uncapped && r.Permitted {
+		u := c
+		u.Cap14 = false
+		if uq := sec.Quick(&u); uq.Permitted && uq.PhiPn > r.PhiPn*(1+1e-9) {
+			d.Steps = append(d.Steps, Step{Clause: "ACI 318-19 6.2.5.3", Quantity: "φPn without the 1.4 limit (note only)",
+				Formula: "where δ·M2,min meets the diagram with δ above 1.4; the code does not permit it, so it is not used", Value: uq.PhiPn / 1e3, Unit: "kN"})
+		}
+	}
 	if s.Method == ASD {
 		d.Steps = append(d.Steps, Step{
 			Clause:   "ACI 318-19 (strength design only)",
 			Quantity: "allowable axial strength",
-			Formula:  fmt.Sprintf("φPn / α, α = %.3f = governing LRFD demand / governing ASD demand", f.alpha),
+			Formula:  "φPn × (largest ASD combination / Pu of the governing LRFD combination), both with self-weight",
 			Value:    d.CapacityN / 1e3, Unit: "kN",
 		})
 		if r.Permitted {
-			d.Plain += fmt.Sprintf(" ACI 318 is strength design only, so for comparison with ASD service loads its design strength is divided by %.2f, the ratio of factored to service load.", f.alpha)
+			d.Plain += " ACI 318 is strength design only, so it is checked against the factored (LRFD) combinations and its strength is restated on the service-load scale for comparison with ASD."
 		}
 	}
 	d.Calc = f.calc(sec, &r, &c, s, &d)
+	d.Calc["k_source"] = c.Ends.KWords()
+	if c.K != 0 {
+		d.Calc["k_source"] = "typed"
+	}
+	d.Calc["combination"] = gc.Name
+	d.Calc["combination_demand_kN"] = puN / 1e3
+	d.Calc["combination_capacity_kN"] = r.PhiPn / 1e3
+	if s.Method == ASD && d.CapacityN > 0 {
+		d.Calc["alpha"] = r.PhiPn / d.CapacityN
+	}
 	return d
 }
 
@@ -282,7 +405,7 @@ func (f *concreteFamily) calc(sec *concrete.Section, r *concrete.Result, c *conc
 		"sway":           g.Sway,
 		"delta":          delta,
 		"beta_dns":       c.BetaDns,
-		"beta_source":    f.betaSrc,
+		"beta_source":    map[bool]string{true: "the concrete options", false: "the governing combination"}[f.betaFixed >= 0],
 		"EI_method":      map[concrete.EIMethod]string{concrete.EIGross: "a", concrete.EIWithSteel: "b"}[c.EI],
 		"EIeff_kNm2":     m.EIeff * 1e-9,
 		"Pc_kN":          m.Pc / 1e3,
@@ -299,9 +422,6 @@ func (f *concreteFamily) calc(sec *concrete.Section, r *concrete.Result, c *conc
 		calc["shape"] = "rect"
 		calc["b_mm"] = sec.WidthMM
 		calc["h_mm"] = sec.DepthMM
-	}
-	if s.Method == ASD {
-		calc["alpha"] = f.alpha
 	}
 	for k, v := range calc {
 		if x, ok := v.(float64); ok && !finite(x) {

@@ -10,11 +10,11 @@ type ConcreteOptions struct {
 	BetaDns       float64 // sustained-load ratio; used when BetaFromLoads is false or the load has no split
 	BetaFromLoads bool    // derive βdns from the takedown's dead/live split
 	EIMethod      string  // "a" or "b" of ACI 318-19 6.6.4.4.4
-	// SecondOrderCap holds the moment magnifier to 1.4 (ACI 318-19 6.2.5.3:
-	// total moment with second-order effects at most 1.4 times the
-	// first-order moment). On by default, as the code requires; switching it
-	// off shows where the magnified minimum moment alone meets the
-	// interaction diagram, with a warning whenever δ exceeds 1.4.
+	// SecondOrderCap concerns the 1.4 limit of ACI 318-19 6.2.5.3 (total
+	// moment with second-order effects at most 1.4 times the first-order
+	// moment). The limit always applies: δ above 1.4 never works. Switched
+	// off, the trace also shows, as a note only, where the magnified minimum
+	// moment alone meets the interaction diagram.
 	SecondOrderCap bool
 }
 

@@ -261,9 +261,12 @@ func sortRows(rows []Row) {
 	}
 }
 
-// Detail returns a candidate's full trace at a setting.
+// Detail returns a candidate's full trace at a setting, with every load
+// combination checked.
 func (m *Model) Detail(fi, i int, s Setting) Detail {
-	return m.Families[fi].Detail(i, s)
+	d := m.Families[fi].Detail(i, s)
+	d.Checks = m.Checks(fi, i, s)
+	return d
 }
 
 // Find returns the family and candidate index of a designation, or ok false.

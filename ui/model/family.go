@@ -56,10 +56,23 @@ func (e EndCondition) Valid() bool {
 // Setting is the geometry and method at which a family is evaluated.
 type Setting struct {
 	LengthMM float64      // strong-axis (x) unbraced length, mm
-	WeakMM   float64      // weak-axis (y) unbraced length, mm; also the torsional length
+	WeakMM   float64      // weak-axis (y) unbraced length, mm
 	Ends     EndCondition // idealized end condition
 	K        float64      // typed effective-length factor; 0 means the end condition's recommended value
 	Method   Method       // LRFD or ASD
+	// TwistBraced says the weak-axis braces also restrain twisting, so the
+	// torsional unbraced length is WeakMM; otherwise it is the full length
+	// LengthMM (a girt or wall brace rarely restrains twist).
+	TwistBraced bool
+}
+
+// TwistMM returns the torsional unbraced length, mm: WeakMM when the braces
+// restrain twist, else the full length.
+func (s Setting) TwistMM() float64 {
+	if s.TwistBraced && s.WeakMM > 0 {
+		return s.WeakMM
+	}
+	return s.LengthMM
 }
 
 // AtLength returns a copy of s at a new strong-axis length, keeping the
@@ -104,6 +117,7 @@ type Quick struct {
 	Slenderness float64 // governing slenderness ratio (KL/r, le/d, k·lu/r)
 	Permitted   bool    // false when the method does not apply (e.g. le/d > 50)
 	Reason      string  // why not permitted, when Permitted is false
+	Limit       string  // the slenderness limit passed, shown as a visible mark (see LimitMark); "" when none
 }
 
 // Step is one line of a calculation trace.
@@ -122,6 +136,7 @@ type Detail struct {
 	Calc     map[string]any // machine-readable trace, keys stable (see the CLI JSON)
 	Steps    []Step         // readable trace in the order the standard gives
 	Plain    string         // one sentence a client understands on what governs
+	Checks   []Check        // every load combination checked (filled by Model.Detail)
 }
 
 // Family is one group of candidates of one material that the model evaluates

@@ -12,7 +12,13 @@ const (
 // Load is the axial load input.
 type Load struct {
 	Mode    LoadMode
-	DirectN float64 // typed axial load, N (factored for LRFD, service for ASD)
+	DirectN float64 // typed axial load, N (governing factored load for LRFD, service load for ASD)
+
+	// DeadShare is the part of a typed load's service load that is dead
+	// load, above 0 and at most 1; 0 means DefaultDeadShare. From it the
+	// typed load is split into D and L and every combination follows, as in
+	// a takedown.
+	DeadShare float64
 
 	// Takedown inputs (Mode == LoadTakedown).
 	TributaryM2   float64 // tributary area per floor, m²
@@ -41,7 +47,8 @@ type Combo struct {
 // LoadSummary is the result of the takedown (or the typed load) that the
 // families and the demand calculation use.
 type LoadSummary struct {
-	Known bool // true when the dead/live split is known (takedown)
+	Known bool // true when the dead/live split is known (always, since a typed load declares its dead share)
+	Typed bool // true when the load was typed (D and L derived from the dead share)
 
 	DeadN     float64 // service dead load, N
 	LiveN     float64 // service floor live load after reduction, N
@@ -50,20 +57,30 @@ type LoadSummary struct {
 	SnowN     float64 // service snow load, N
 	Reduction float64 // live-load reduction multiplier applied (1 when none)
 
-	Combos    []Combo // every combination checked
-	Governing int     // index into Combos of the governing one; -1 for a typed load
-	DemandN   float64 // governing axial demand without self-weight, N
+	Combos        []Combo // every combination checked
+	Governing     int     // index into Combos of the governing one
+	GoverningName string  // the governing combination's name without its zero-load terms
+	DemandN       float64 // governing axial demand without self-weight, N
 
-	BetaDns float64 // ACI 318-19 βdns: factored sustained (dead) over total factored axial
-	Lambda  float64 // NDS 2018 time effect factor λ of the governing LRFD combination
-	CD      float64 // NDS 2018 load duration factor CD of the governing ASD combination
+	BetaDns float64 // ACI 318-19 βdns of the governing LRFD combination: factored sustained (dead) over total factored axial
+	Lambda  float64 // NDS 2018 time effect factor λ of the governing (largest) LRFD combination; timber checks every combination with its own
+	CD      float64 // NDS 2018 load duration factor CD of the governing (largest) ASD combination; timber checks every combination with its own
 
-	// StrengthPerService is α = (governing LRFD demand)/(governing ASD demand).
-	// Strength-design-only materials (concrete) divide φPn by α to compare
-	// with ASD service loads; 1.5 for a typed load (common practice for D+L).
+	// Cases are the combinations of Method, without exact duplicates, that
+	// every candidate is checked against; LRFDCases are the LRFD ones
+	// (strength design, ACI 318-19, checks these under either method);
+	// FireCase is the governing ASD (service) combination, the load of a
+	// fire-case check (NDS 2018 16.2.2).
+	Cases     []LoadCase
+	LRFDCases []LoadCase
+	ASDCases  []LoadCase
+	FireCase  LoadCase
+
+	// StrengthPerService is α = (governing LRFD demand)/(governing ASD
+	// demand), from the takedown or from the typed load's dead share.
 	StrengthPerService float64
 
-	DirectDeadFactor float64 // factor on self-weight added to a typed load (1.2 LRFD, 1.0 ASD)
+	DirectDeadFactor float64 // dead-load factor of the governing combination
 
 	Steps []Step // readable trace of the takedown
 
@@ -87,6 +104,27 @@ func (ls *LoadSummary) Demand(selfN float64) float64 {
 		c := &ls.Combos[i]
 		v := c.ValueN + c.D*selfN
 		if v > best {
+			best = v
+		}
+	}
+	return best
+}
+
+// CasesFor returns the combinations of method m that candidates are checked against.
+func (ls *LoadSummary) CasesFor(m Method) []LoadCase {
+	if m == ASD {
+		return ls.ASDCases
+	}
+	return ls.LRFDCases
+}
+
+// DemandFor returns the largest combination of method m with the column's
+// service self-weight selfN added as dead load, N.
+func (ls *LoadSummary) DemandFor(m Method, selfN float64) float64 {
+	best := 0.0
+	cs := ls.CasesFor(m)
+	for k := range cs {
+		if v := cs[k].DemandN(selfN); v > best {
 			best = v
 		}
 	}

@@ -156,42 +156,46 @@ func steelMethod(m Method) steel.Method {
 // axis with LengthMM; y and twisting with WeakMM, LengthMM when WeakMM is 0)
 // and the K to use (Setting.K when > 0, else the end condition's
 // recommended value). ok is false when any of them is unusable.
-func steelGeometry(s Setting) (lx, ly, k float64, ok bool) {
+func steelGeometry(s Setting) (lx, ly, lz, k float64, ok bool) {
 	weak := s.WeakMM
 	if weak == 0 {
 		weak = s.LengthMM
 	}
-	lx, ly = s.LengthMM/steelMMPerIn, weak/steelMMPerIn
+	lx, ly, lz = s.LengthMM/steelMMPerIn, weak/steelMMPerIn, s.TwistMM()/steelMMPerIn
 	k = s.K
 	if k == 0 {
 		e, valid := steelEnds(s.Ends)
 		if !valid {
-			return 0, 0, 0, false
+			return 0, 0, 0, 0, false
 		}
 		k = e.K()
 	}
-	ok = finite(lx) && finite(ly) && finite(k) && lx > 0 && ly > 0 && k > 0
+	ok = finite(lx) && finite(ly) && finite(lz) && finite(k) && lx > 0 && ly > 0 && lz > 0 && k > 0
 	return
 }
 
 // Quick evaluates candidate i at the setting without a trace; it does not
 // allocate.
 func (f *steelFamily) Quick(i int, s Setting) Quick {
-	lx, ly, k, ok := steelGeometry(s)
+	lx, ly, lz, k, ok := steelGeometry(s)
 	if !ok {
 		return Quick{Governing: steelNotPerm, Reason: steelBadSetting}
 	}
-	st := f.cols[i].Strength(k*lx, k*ly, k*ly, steelMethod(s.Method))
+	st := f.cols[i].Strength(k*lx, k*ly, k*lz, steelMethod(s.Method))
 	if st.Mode == 0 {
 		return Quick{Governing: steelNotPerm, Reason: steelOutside}
 	}
-	return Quick{
+	q := Quick{
 		CapacityN:   st.Available * steelNPerKip,
 		Governing:   st.Mode.Words(f.fam),
 		Mode:        int(st.Mode),
 		Slenderness: st.Slenderness,
 		Permitted:   true,
 	}
+	if sh := f.cols[i].Shape; k*lx/sh.Rx > 200 || k*ly/sh.Ry > 200 {
+		q.Limit = LimitSteel // AISC 360-22 E2 User Note
+	}
+	return q
 }
 
 // steelOutside is the reason given when the steel package declines a
@@ -207,7 +211,7 @@ func (f *steelFamily) Detail(i int, s Setting) Detail {
 		weak = s.LengthMM
 	}
 	in := steel.Input{Lx: s.LengthMM / steelMMPerIn, Ly: weak / steelMMPerIn, K: s.K, Method: steelMethod(s.Method)}
-	in.Lz = in.Ly // the weak-axis length is also the torsional length
+	in.Lz = s.TwistMM() / steelMMPerIn // full length unless the braces restrain twist
 	ends, valid := steelEnds(s.Ends)
 	if !valid {
 		ends = steel.EndCondition(-1) // rejected by Check unless K is typed
@@ -231,7 +235,11 @@ func (f *steelFamily) Detail(i int, s Setting) Detail {
 		Warnings: r.Warnings,
 		Plain:    r.Plain,
 	}
-	d.Steps = make([]Step, 0, len(r.Steps))
+	if r.LcxRx > 200 || r.LcyRy > 200 {
+		d.Limit = LimitSteel // AISC 360-22 E2 User Note
+	}
+	d.Steps = make([]Step, 0, len(r.Steps)+1)
+	d.Steps = append(d.Steps, Step{Clause: "AISC 360-22 E4", Quantity: "Lz", Formula: steelTwistWords(s), Value: s.TwistMM(), Unit: "mm"})
 	for _, x := range r.Steps {
 		d.Steps = append(d.Steps, steelStep(x))
 	}
@@ -273,6 +281,7 @@ func (f *steelFamily) Detail(i int, s Setting) Detail {
 		"Lcx_mm":         r.Lcx * steelMMPerIn,
 		"Lcy_mm":         r.Lcy * steelMMPerIn,
 		"Lcz_mm":         r.Lcz * steelMMPerIn,
+		"twist_braced":   s.TwistBraced,
 		"Lcx_rx":         r.LcxRx,
 		"Lcy_ry":         r.LcyRy,
 		"Fex_MPa":        mpa(r.Fex),
@@ -310,4 +319,15 @@ func steelStep(s steel.Step) Step {
 		out.Value, out.Unit = s.Value*steelNPerKip/1000, "kN"
 	}
 	return out
+}
+
+// steelTwistWords says which torsional unbraced length is used and why.
+func steelTwistWords(s Setting) string {
+	if s.TwistBraced {
+		return "torsional unbraced length = weak-axis length: the braces are stated to restrain twisting"
+	}
+	if s.WeakMM > 0 && s.WeakMM < s.LengthMM {
+		return "torsional unbraced length = full length: the weak-axis braces are not taken to restrain twisting (state it with twist-braced)"
+	}
+	return "torsional unbraced length = full length"
 }

@@ -78,7 +78,7 @@ func TestSteelBadOptions(t *testing.T) {
 func TestSteelQuickMatchesPackage(t *testing.T) {
 	fams := steelFamilies(t, DefaultScheme(), LRFD)
 	f, i := steelFind(t, fams, "W14X90")
-	s := Setting{LengthMM: 4000, WeakMM: 2000, Ends: FixedPinned, Method: LRFD}
+	s := Setting{LengthMM: 4000, WeakMM: 2000, Ends: FixedPinned, Method: LRFD, TwistBraced: true}
 	q := f.Quick(i, s)
 	require.True(t, q.Permitted)
 
@@ -101,6 +101,53 @@ func TestSteelQuickMatchesPackage(t *testing.T) {
 	s.K, s.Method = 0, ASD
 	qa := f.Quick(i, s)
 	assert.InEpsilon(t, q.CapacityN/0.90/1.67, qa.CapacityN, 1e-12)
+
+	// Without TwistBraced the torsional length is the full length.
+	s.Method, s.TwistBraced = LRFD, false
+	want = c.Strength(0.8*4000/25.4, 0.8*2000/25.4, 0.8*4000/25.4, steel.LRFD)
+	assert.InDelta(t, want.Available*4448.2216152605, f.Quick(i, s).CapacityN, 1e-6)
+}
+
+// TestSteelTwistBracing is W14X90, Lcx = 28 ft, Lcy = 14 ft (pinned ends,
+// K = 1), Fy = 50 ksi, worked by hand from the AISC Manual Table 1-1
+// properties (from memory): A = 26.5 in², Ix = 999 in⁴, Iy = 362 in⁴,
+// rx = 6.14 in, ry = 3.70 in, J = 4.06 in⁴, Cw = 16,000 in⁶; E = 29,000 ksi,
+// G = 11,200 ksi; the section is nonslender (bf/2tf = 10.2, h/tw = 25.9).
+//
+// Twist not braced, Lcz = 28 ft = 336 in: Fez = (π²E·Cw/Lcz² + GJ)/(Ix + Iy)
+// = (40,564 + 45,472)/1,361 = 63.2 ksi (Eq. E4-2) < Fex = π²E/(336/6.14)² =
+// 95.6 ksi, so Fcr = 0.658^(50/63.2)·50 = 35.9 ksi (Eq. E3-2) and φPn =
+// 0.9·35.9·26.5 = 856 kip. Twist braced, Lcz = 14 ft: Fez = 152.6 ksi, Fex
+// governs, Fcr = 0.658^(50/95.6)·50 = 40.2 ksi, φPn = 958 kip: about 11 % more.
+func TestSteelTwistBracing(t *testing.T) {
+	hand := func(lczIn float64) float64 {
+		const e, g, fy, a = 29000.0, 11200.0, 50.0, 26.5
+		pe := math.Pi * math.Pi * e
+		fex := pe / math.Pow(336/6.14, 2)                      // AISC 360-22 Eq. E3-4
+		fey := pe / math.Pow(168/3.70, 2)                      // Eq. E3-4
+		fez := (pe*16000/(lczIn*lczIn) + g*4.06) / (999 + 362) // Eq. E4-2
+		fe := math.Min(fex, math.Min(fey, fez))
+		return 0.9 * math.Pow(0.658, fy/fe) * fy * a // Eq. E3-2, E3-1, φc = 0.90
+	}
+	fams := steelFamilies(t, DefaultScheme(), LRFD)
+	f, i := steelFind(t, fams, "W14X90")
+	s := Setting{LengthMM: 28 * 304.8, WeakMM: 14 * 304.8, Ends: PinnedPinned, Method: LRFD}
+	const nPerKip = 4448.2216152605
+	free := f.Quick(i, s).CapacityN / nPerKip
+	assert.InEpsilon(t, hand(336), free, 0.02, "W14X90 Lcz = 28 ft: hand calculation from the AISC Manual Table 1-1 J and Cw")
+	assert.InDelta(t, 856, hand(336), 1, "the hand figure quoted above")
+	s.TwistBraced = true
+	braced := f.Quick(i, s).CapacityN / nPerKip
+	assert.InEpsilon(t, hand(168), braced, 0.02, "W14X90 Lcz = 14 ft: flexural buckling about x governs")
+	assert.InDelta(t, 958, hand(168), 1, "the hand figure quoted above")
+	assert.InDelta(t, 0.89, free/braced, 0.02, "twist not braced: about 11 % less")
+	d := f.Detail(i, s)
+	assert.Equal(t, true, d.Calc["twist_braced"])
+	assert.InDelta(t, 14*304.8, d.Calc["Lcz_mm"], 1e-6)
+	s.TwistBraced = false
+	d = f.Detail(i, s)
+	assert.InDelta(t, 28*304.8, d.Calc["Lcz_mm"], 1e-6)
+	assert.Contains(t, d.Steps[0].Formula, "not taken to restrain twisting", "the trace names the choice")
 }
 
 // TestSteelDetailSI checks the Detail keys and their SI values against

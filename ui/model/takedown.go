@@ -47,6 +47,9 @@ func (l Load) Validate() error {
 		if !finite(l.DirectN) || l.DirectN <= 0 || l.DirectN > 200e6 {
 			return bad("load", l.DirectN, "an axial load greater than zero and at most 200 MN (45,000 kip)")
 		}
+		if !finite(l.DeadShare) || l.DeadShare < 0 || l.DeadShare > 1 {
+			return bad("dead-share", l.DeadShare, "a dead share of the service load above 0 and at most 1 (e.g. 0.6, 60% or 2/3; default 2/3)")
+		}
 		return nil
 	case LoadTakedown:
 	default:
@@ -244,22 +247,24 @@ func evaluate(defs []comboDef, v loads, lrfd bool, occ string) ([]Combo, []float
 // Summarize turns the load input into the demand and the load split the
 // families use, for the given method.
 //
-// A typed load (LoadDirect) is taken as the demand as given: Known is false,
-// Governing is -1, βdns is NaN, α is 1.5 and self-weight is added with
-// DirectDeadFactor.
+// A typed load (LoadDirect) is split into service dead and live load by its
+// dead share (see typedSummary): under LRFD the typed load is the governing
+// factored load, under ASD the service load.
 //
 // A takedown (LoadTakedown) computes D = (floors × dead + roof dead) × AT and
 // Lo = floors × live × AT, reduces Lo by ASCE 7-22 4.7 when LiveReduction is
 // set (AT for the reduction is the sum of the tributary areas of the floors
 // carried, KLL defaulting to 4), and takes Lr and S unreduced (the optional
-// roof reduction of ASCE 7-22 4.8 is not applied). It evaluates every gravity
-// combination of ASCE 7-22 2.3.1 and 2.4.1 (wind and seismic combinations are
-// out of scope for a gravity column). Combos, Governing, DemandN and Duration
-// are those of method m; OtherCombos holds the other method's. α, βdns and λ
-// come from the governing LRFD combination and CD from the governing ASD one,
-// all without self-weight. LoadSummary.Demand(selfN) then adds self-weight as
-// dead load to every combination of Combos, with that combination's dead
-// factor, and takes the largest.
+// roof reduction of ASCE 7-22 4.8 is not applied).
+//
+// Either way every gravity combination of ASCE 7-22 2.3.1 and 2.4.1 is
+// evaluated (wind and seismic combinations are out of scope for a gravity
+// column). Combos, Governing, DemandN and Duration are those of method m;
+// OtherCombos holds the other method's; Cases, LRFDCases and FireCase are
+// the combinations each candidate is checked against. α and βdns come from
+// the governing LRFD combination, all without self-weight.
+// LoadSummary.Demand(selfN) then adds self-weight as dead load to every
+// combination of Combos, with that combination's dead factor, and takes the largest.
 func Summarize(l Load, m Method) (LoadSummary, error) {
 	if m != LRFD && m != ASD {
 		return LoadSummary{}, bad("method", m, "lrfd or asd")
@@ -268,18 +273,7 @@ func Summarize(l Load, m Method) (LoadSummary, error) {
 		return LoadSummary{}, err
 	}
 	if l.Mode == LoadDirect {
-		ls := LoadSummary{Governing: -1, DemandN: l.DirectN, Reduction: 1, BetaDns: math.NaN(),
-			StrengthPerService: 1.5, Method: m, OtherGoverning: -1}
-		if m == LRFD {
-			ls.DirectDeadFactor = 1.2
-			ls.Lambda = 0.8 // NDS 2018 Table N3: D + L with L from occupancy
-			ls.LRFDN = l.DirectN
-		} else {
-			ls.DirectDeadFactor = 1.0
-			ls.CD = 1.0 // NDS 2018 Table 2.3.2: ten-year (occupancy live) load
-			ls.ASDN = l.DirectN
-		}
-		return ls, nil
+		return typedSummary(l, m), nil
 	}
 	return takedown(l, m), nil
 }
@@ -314,9 +308,17 @@ func takedown(l Load, m Method) LoadSummary {
 		Step{"ASCE 7-22 4.8", "Lr", "roof live × tributary area (4.8 reduction not applied)", ls.RoofLiveN, "N"},
 		Step{"ASCE 7-22 7.3", "S", "roof snow × tributary area", ls.SnowN, "N"},
 	)
-	v := loads{ls.DeadN, ls.LiveN, ls.RoofLiveN, ls.SnowN}
-	lc, lf, lg := evaluate(lrfdDefs, v, true, l.Occupancy)
-	ac, af, ag := evaluate(asdDefs, v, false, l.Occupancy)
+	combine(&ls, loads{ls.DeadN, ls.LiveN, ls.RoofLiveN, ls.SnowN}, l.Occupancy, m, steps)
+	return ls
+}
+
+// combine evaluates every combination of the service loads v for both
+// methods and fills the summary's combinations, governing demands, α, βdns,
+// the duration factors of the governing combinations and the cases each
+// candidate is checked against; steps is the trace so far.
+func combine(ls *LoadSummary, v loads, occ string, m Method, steps []Step) {
+	lc, lf, lg := evaluate(lrfdDefs, v, true, occ)
+	ac, af, ag := evaluate(asdDefs, v, false, occ)
 	for _, c := range lc {
 		steps = append(steps, Step{c.Clause, "Pu", c.Name, c.ValueN, "N"})
 	}
@@ -327,45 +329,29 @@ func takedown(l Load, m Method) LoadSummary {
 	// ACI 318-19 6.6.4.4.4: βdns = factored sustained (dead) / total factored axial.
 	ls.BetaDns = lc[lg].D * ls.DeadN / ls.LRFDN
 	ls.StrengthPerService = ls.LRFDN / ls.ASDN
-	// NDS 2018 2.3.2 and N3.3: wood is checked for each combination with its
-	// own duration factor, so the combination with the largest load/factor
-	// governs timber even when its load is not the largest. Its factor is
-	// applied to the governing demand (conservative).
-	lw, aw := woodGoverning(lc, lf), woodGoverning(ac, af)
-	ls.Lambda = lf[lw]
-	ls.CD = af[aw]
-	lg0, ag0 := lg, ag
-	lg, ag = lw, aw
+	ls.Lambda = lf[lg]
+	ls.CD = af[ag]
 	steps = append(steps,
 		Step{lc[lg].Clause, "Pu", "governing LRFD: " + lc[lg].Name, ls.LRFDN, "N"},
 		Step{ac[ag].Clause, "Pa", "governing ASD: " + ac[ag].Name, ls.ASDN, "N"},
 		Step{"ASCE 7-22 2.3.1 / 2.4.1", "α", "governing LRFD / governing ASD", ls.StrengthPerService, ""},
-		Step{"ACI 318-19 6.6.4.4.4", "βdns", "factored dead / Pu of the governing LRFD combination", ls.BetaDns, ""},
-		Step{"NDS 2018 Table N3", "λ", "time effect factor of " + lc[lg].Name, ls.Lambda, ""},
-		Step{"NDS 2018 Table 2.3.2", "CD", "load duration factor of " + ac[ag].Name, ls.CD, ""},
+		Step{"ACI 318-19 6.6.4.4.4", "βdns", "factored dead / Pu of the governing LRFD combination (each combination is checked with its own)", ls.BetaDns, ""},
+		Step{"NDS 2018 N3.3, 2.3.2", "λ, CD", "timber is checked for every combination with its own time effect factor λ (LRFD, Table N3) or load duration factor CD (ASD, Table 2.3.2)", 1, ""},
 	)
-	lg, ag = lg0, ag0
+	ls.LRFDCases = loadCases(lc, lf, v, LRFD)
+	ls.ASDCases = loadCases(ac, af, v, ASD)
 	if m == LRFD {
 		ls.Combos, ls.Duration, ls.Governing = lc, lf, lg
 		ls.OtherCombos, ls.OtherGoverning = ac, ag
+		ls.Cases = ls.LRFDCases
 	} else {
 		ls.Combos, ls.Duration, ls.Governing = ac, af, ag
 		ls.OtherCombos, ls.OtherGoverning = lc, lg
+		ls.Cases = ls.ASDCases
 	}
+	ls.FireCase = fireCase(ac[ag], af[ag], v)
 	ls.DemandN = ls.Combos[ls.Governing].ValueN
+	ls.GoverningName = comboLabel(&ls.Combos[ls.Governing], v)
 	ls.DirectDeadFactor = ls.Combos[ls.Governing].D
 	ls.Steps = steps
-	return ls
-}
-
-// woodGoverning returns the index of the combination with the largest load
-// divided by its duration factor (λ or CD).
-func woodGoverning(cs []Combo, f []float64) int {
-	best, at := -1.0, 0
-	for i := range cs {
-		if f[i] > 0 && cs[i].ValueN/f[i] > best {
-			best, at = cs[i].ValueN/f[i], i
-		}
-	}
-	return at
 }

@@ -92,9 +92,10 @@ func TestTakedownCombinations(t *testing.T) {
 			load:    usTakedown(4, 400, 100, 50, 20, 20, 0),
 			lrfdGov: "LRFD 2: 1.2D + 1.6L + 0.5Lr", lrfdKip: 261.6,
 			asdGov: "ASD 2: D + L", asdKip: 203,
-			alpha: 261.6 / 203, beta: 201.6 / 261.6, lambda: 0.6, cd: 1.0,
-			src: "hand calc: D = (4×100+20)×400 = 168 k, Lo = 80 k × (0.25+15/√6400 = 0.4375) = 35 k, Lr = 8 k; " +
-				"ASCE 7-22 2.3.1-2 1.2×168+1.6×35+0.5×8 = 261.6 k, 2.4.1-2 168+35 = 203 k; wood: 1.4D/0.6 = 392 k > 261.6/0.8 = 327 k so NDS 2018 Table N3 λ 0.6 governs timber; Table 2.3.2 CD 1.0",
+			alpha: 261.6 / 203, beta: 201.6 / 261.6, lambda: 0.8, cd: 1.0,
+			src: "hand calc: D = (4×100+20)×400 = 168 k, Lo = 80 k × (0.25+15/√6400 = 0.4375) = 35 k (ASCE 7-22 Eq. 4.7-1), Lr = 8 k; " +
+				"ASCE 7-22 2.3.1-2 1.2×168+1.6×35+0.5×8 = 261.6 k at NDS 2018 Table N3 λ 0.8 (1.4D = 235.2 k is checked separately at its own λ 0.6, N3.3); " +
+				"2.4.1-2 168+35 = 203 k at Table 2.3.2 CD 1.0",
 		},
 		{
 			name: "heavy dead, light live: 1.4D governs",
@@ -105,9 +106,9 @@ func TestTakedownCombinations(t *testing.T) {
 			}(),
 			lrfdGov: "LRFD 1: 1.4D", lrfdKip: 352.8,
 			asdGov: "ASD 2: D + L", asdKip: 268,
-			alpha: 352.8 / 268, beta: 1, lambda: 0.6, cd: 0.9,
+			alpha: 352.8 / 268, beta: 1, lambda: 0.6, cd: 1.0,
 			src: "hand calc: D = 630×400 = 252 k, L = 16 k; ASCE 7-22 2.3.1-1 1.4×252 = 352.8 k > 1.2×252+1.6×16 = 328 k; " +
-				"βdns = 1 (ACI 318-19 6.6.4.4.4, all dead); NDS 2018 Table N3 λ 0.6; wood ASD: D/0.9 = 280 k > (D+L)/1.0 = 268 k so CD 0.9 (NDS 2018 2.3.2)",
+				"βdns = 1 (ACI 318-19 6.6.4.4.4, all dead); NDS 2018 Table N3 λ 0.6; D + L = 268 k at CD 1.0 (Table 2.3.2; D alone, 252 k, is checked at its own CD 0.9)",
 		},
 		{
 			name: "same dead, more live: 1.2D + 1.6L governs",
@@ -118,9 +119,9 @@ func TestTakedownCombinations(t *testing.T) {
 			}(),
 			lrfdGov: "LRFD 2: 1.2D + 1.6L + 0.5Lr", lrfdKip: 404.8,
 			asdGov: "ASD 2: D + L", asdKip: 316,
-			alpha: 404.8 / 316, beta: 302.4 / 404.8, lambda: 0.6, cd: 1.0,
+			alpha: 404.8 / 316, beta: 302.4 / 404.8, lambda: 0.8, cd: 1.0,
 			src: "hand calc: D = 252 k, L = 64 k > D/8 so ASCE 7-22 2.3.1-2 1.2×252+1.6×64 = 404.8 k > 1.4D = 352.8 k; " +
-				"wood: 1.4D/0.6 = 588 k > 404.8/0.8 = 506 k so λ 0.6 governs timber (NDS 2018 N3.3)",
+				"λ 0.8 of 1.2D + 1.6L (NDS 2018 Table N3); 1.4D is checked at its own λ 0.6 (N3.3)",
 		},
 		{
 			name:    "heavy snow: snow combination governs",
@@ -136,9 +137,9 @@ func TestTakedownCombinations(t *testing.T) {
 			load:    usTakedown(1, 400, 80, 40, 20, 20, 10),
 			lrfdGov: "LRFD 3: 1.2D + 1.6Lr + L", lrfdKip: 70.8,
 			asdGov: "ASD 4: D + 0.75L + 0.75Lr", asdKip: 53.5,
-			alpha: 70.8 / 53.5, beta: 48 / 70.8, lambda: 0.6, cd: 1.0,
+			alpha: 70.8 / 53.5, beta: 48 / 70.8, lambda: 0.8, cd: 1.25,
 			src: "hand calc: S = 4 k; ASCE 7-22 2.3.1-3 48+1.6×8+10 = 70.8 k; 2.4.1-4 40+7.5+6 = 53.5 k; " +
-				"wood: 1.4D/0.6 = 93.3 k > 70.8/0.8 = 88.5 k (λ 0.6); (D+L)/1.0 = 50 k > 53.5/1.25 = 42.8 k (CD 1.0, NDS 2018 2.3.2)",
+				"λ 0.8 of 2.3.1-3 (NDS 2018 Table N3); CD 1.25 of D + 0.75L + 0.75Lr, the shortest load present being roof live (NDS 2018 2.3.2.2, Table 2.3.2)",
 		},
 		{
 			name: "storage: λ 0.7",
@@ -198,8 +199,8 @@ func TestTakedownCombinations(t *testing.T) {
 				assert.InEpsilon(t, want*tKip, ls.DemandN, 1e-9, r.src)
 				assert.InEpsilon(t, r.alpha, ls.StrengthPerService, 1e-9, "α = LRFD/ASD: "+r.src)
 				assert.InEpsilon(t, r.beta, ls.BetaDns, 1e-9, "βdns: "+r.src)
-				assert.Equal(t, r.lambda, ls.Lambda, "λ: "+r.src)
-				assert.Equal(t, r.cd, ls.CD, "CD: "+r.src)
+				assert.Equal(t, r.lambda, ls.Lambda, "λ of the governing LRFD combination: "+r.src)
+				assert.Equal(t, r.cd, ls.CD, "CD of the governing ASD combination: "+r.src)
 				assert.Equal(t, ls.Combos[ls.Governing].D, ls.DirectDeadFactor)
 				assert.NotEmpty(t, ls.Steps)
 				for i, c := range ls.Combos {
@@ -257,29 +258,60 @@ func TestTakedownDemandAddsSelfWeightToEveryCombination(t *testing.T) {
 	}
 }
 
+// A typed load declares its dead share; D and L and every combination
+// follow as in a takedown (ASCE 7-22 2.3.1 and 2.4.1). Hand calculations.
 func TestLoadDirectSummary(t *testing.T) {
 	rows := []struct {
-		m          Method
-		deadFactor float64
-		src        string
+		m               Method
+		share           float64
+		deadKN, liveKN  float64
+		lrfdKN, asdKN   float64
+		alpha, beta     float64
+		deadFactor      float64
+		lrfdGov, asdGov string
+		src             string
 	}{
-		{LRFD, 1.2, "ASCE 7-22 2.3.1 combination 2 dead factor on self-weight"},
-		{ASD, 1.0, "ASCE 7-22 2.4.1 combination 2 dead factor on self-weight"},
+		{LRFD, 0, 500, 250, 1000, 750, 1000.0 / 750, 0.6, 1.2, "LRFD 2: 1.2D + 1.6L", "ASD 2: D + L",
+			"hand calc, default s = 2/3: P = 1000 kN = max(1.4s, 1.2s + 1.6(1 − s)) × S = 4/3 S (ASCE 7-22 2.3.1-1, -2), S = 750, D = 500, L = 250; " +
+				"βdns = 1.2 × 500 / 1000 = 0.6 (ACI 318-19 6.6.4.4.4); α = 1000/750"},
+		{ASD, 0, 1000.0 * 2 / 3, 1000.0 / 3, 1000.0 * 4 / 3, 1000, 4.0 / 3, 0.6, 1.0, "LRFD 2: 1.2D + 1.6L", "ASD 2: D + L",
+			"hand calc, default s = 2/3: P = 1000 kN service = D + L (ASCE 7-22 2.4.1-2), D = 666.7, L = 333.3; 1.2D + 1.6L = 1333.3 kN (2.3.1-2)"},
+		{ASD, 0.5, 500, 500, 1400, 1000, 1.4, 600.0 / 1400, 1.0, "LRFD 2: 1.2D + 1.6L", "ASD 2: D + L",
+			"hand calc, s = 0.5: D = L = 500 kN; 1.2×500 + 1.6×500 = 1400 kN > 1.4×500 = 700 kN (ASCE 7-22 2.3.1-2), so α = 1400/1000 = 1.4 for ASD concrete"},
+		{LRFD, 0.5, 1000 / 2.8, 1000 / 2.8, 1000, 1000 / 1.4, 1.4, 0.6 / 1.4, 1.2, "LRFD 2: 1.2D + 1.6L", "ASD 2: D + L",
+			"hand calc, s = 0.5: P = 1000 kN = (1.2 × 0.5 + 1.6 × 0.5) S = 1.4 S, so D = L = 357.1 kN"},
+		{LRFD, 1, 1000 / 1.4, 0, 1000, 1000 / 1.4, 1.4, 1, 1.4, "LRFD 1: 1.4D", "ASD 1: D",
+			"hand calc, s = 1: all dead, 1.4D governs (ASCE 7-22 2.3.1-1), βdns = 1"},
 	}
 	for _, r := range rows {
-		ls, err := Summarize(Load{Mode: LoadDirect, DirectN: 1e6}, r.m)
+		ls, err := Summarize(Load{Mode: LoadDirect, DirectN: 1e6, DeadShare: r.share}, r.m)
 		require.NoError(t, err)
-		assert.False(t, ls.Known)
-		assert.Equal(t, -1, ls.Governing)
-		assert.Equal(t, 1e6, ls.DemandN)
-		assert.True(t, math.IsNaN(ls.BetaDns))
-		assert.Equal(t, 1.5, ls.StrengthPerService, "common practice for D + L")
-		assert.InEpsilon(t, 1e6+r.deadFactor*1e4, ls.Demand(1e4), 1e-12, r.src)
+		assert.True(t, ls.Known, r.src)
+		assert.True(t, ls.Typed, r.src)
+		assert.InDelta(t, r.deadKN*1e3, ls.DeadN, 1e-3, "D: "+r.src)
+		assert.InDelta(t, r.liveKN*1e3, ls.LiveN, 1e-3, "L: "+r.src)
+		assert.InDelta(t, r.lrfdKN*1e3, ls.LRFDN, 1e-3, "LRFD: "+r.src)
+		assert.InDelta(t, r.asdKN*1e3, ls.ASDN, 1e-3, "ASD: "+r.src)
+		assert.Equal(t, 1e6, ls.DemandN, "the typed load is the governing load of its method")
+		assert.InDelta(t, r.alpha, ls.StrengthPerService, 1e-12, "α: "+r.src)
+		assert.InDelta(t, r.beta, ls.BetaDns, 1e-12, "βdns: "+r.src)
+		lg := ls.Combos[ls.Governing].Name
+		if r.m == ASD {
+			lg = ls.OtherCombos[ls.OtherGoverning].Name
+		}
+		assert.Equal(t, r.lrfdGov, strings.Replace(strings.Replace(lg, " + 0.5Lr", "", 1), " + 0.5S", "", 1), r.src)
+		assert.InEpsilon(t, 1e6+r.deadFactor*1e4, ls.Demand(1e4), 1e-12, "self-weight with the governing dead factor: "+r.src)
+		assert.NotEmpty(t, ls.Steps, "the trace shows the derivation")
 	}
 	_, err := Summarize(Load{Mode: LoadDirect, DirectN: 1e6}, "wsd")
 	var fe *FieldError
 	require.True(t, errors.As(err, &fe))
 	assert.Equal(t, "method", fe.Field)
+	for _, bad := range []float64{-0.1, 1.01, math.NaN(), math.Inf(1)} {
+		_, err := Summarize(Load{Mode: LoadDirect, DirectN: 1e6, DeadShare: bad}, LRFD)
+		require.True(t, errors.As(err, &fe), "dead share %v", bad)
+		assert.Equal(t, "dead-share", fe.Field)
+	}
 }
 
 func TestLoadValidateNamesField(t *testing.T) {

@@ -32,13 +32,17 @@ var timberFireGoverning = [...]string{
 	timber.BucklingStrong: "fire: buckling of the charred section about the strong axis",
 }
 
-// timberFamily is one family of timber candidates, prepared for both design methods.
+// timberFamily is one family of timber candidates, prepared for both design
+// methods. Each candidate is checked against every load combination with
+// that combination's own λ (LRFD) or CD (ASD), and against the fire case.
 type timberFamily struct {
 	name      string
 	asd, lrfd []*timber.Candidate
 	static    []Static
 	fire      bool
-	alphaLRFD float64 // LRFD design demand per fire-case (service) demand
+	cdFixed   float64    // ASD load duration factor typed in the options; 0 takes each combination's own
+	fastLRFD  []LoadCase // the LRFD combinations that can govern (dominantCases), for Quick
+	fastASD   []LoadCase // the ASD ones
 	selfW     bool
 	ls        LoadSummary
 }
@@ -48,17 +52,12 @@ func buildTimber(sc *Scheme, ls LoadSummary) ([]Family, error) {
 	if err := o.validate(); err != nil {
 		return nil, err
 	}
-	cd := timberDurationCD(o.Duration)
+	cdFixed := timberDurationCD(o.Duration)
+	cd := cdFixed
 	if cd == 0 {
-		cd = ls.CD
+		cd = timber.CDTenYears // the candidates' own factor; FastTime scales it per combination
 	}
-	if cd == 0 {
-		cd = timber.CDTenYears
-	}
-	lambda := ls.Lambda
-	if lambda == 0 {
-		lambda = 0.8
-	}
+	lambda := 0.8 // NDS 2018 Table N3, likewise scaled per combination
 	sides := o.FireSides
 	if sides == 0 {
 		sides = 4
@@ -67,12 +66,11 @@ func buildTimber(sc *Scheme, ls LoadSummary) ([]Family, error) {
 		CD: cd, Lambda: lambda, Wet: o.Wet, Hot: o.Hot, Incised: o.Incised,
 		Fire: timber.Fire{Hours: sc.Fire.timberHours(), Sides: sides},
 	}
-	alpha := ls.StrengthPerService
-	if !(alpha >= 1 && alpha <= 3) {
-		alpha = 1.5 // common practice: D + L factored by 1.2/1.6 over service is about 1.5
-	}
 	newFam := func(name string) *timberFamily {
-		return &timberFamily{name: name, fire: base.Fire.On(), alphaLRFD: alpha, selfW: sc.SelfWeight, ls: ls}
+		f := &timberFamily{name: name, fire: base.Fire.On(), cdFixed: cdFixed, selfW: sc.SelfWeight, ls: ls}
+		f.fastLRFD = dominantCases(ls.LRFDCases, func(c *LoadCase) float64 { return f.timeOf(c, LRFD) })
+		f.fastASD = dominantCases(ls.ASDCases, func(c *LoadCase) float64 { return f.timeOf(c, ASD) })
+		return f
 	}
 	add := func(f *timberFamily, sec timber.Section, mat timber.Material, kind string) error {
 		ca, lr := base, base
@@ -159,14 +157,6 @@ func (f *timberFamily) cand(i int, m Method) *timber.Candidate {
 	return f.lrfd[i]
 }
 
-// alpha is the design demand per fire-case demand for the method.
-func (f *timberFamily) alpha(m Method) float64 {
-	if m == ASD {
-		return 1 // ASD demand is already the service load combination
-	}
-	return f.alphaLRFD
-}
-
 // timberGeometry turns a model setting into timber geometry: x (strong axis,
 // depth d) with LengthMM, y (weak axis, width b) with WeakMM.
 func timberGeometry(s Setting) timber.Geometry {
@@ -192,36 +182,82 @@ func timberGeometry(s Setting) timber.Geometry {
 	return g
 }
 
-// timberQuick converts a timber result to the model's Quick. With a fire
-// check, the fire-case strength times α (design demand per fire-case demand)
-// is the design-load equivalent; when it is lower it governs.
-func (f *timberFamily) timberQuick(tq *timber.Quick, m Method) Quick {
+// timberQuick converts the timber package's strength of the unburnt section to the model's Quick.
+func timberQuick(tq *timber.Quick) Quick {
 	q := Quick{Slenderness: tq.LeD, Permitted: tq.Permitted, Reason: tq.Reason, Governing: timberNotPerm}
 	if !tq.Permitted {
+		if tq.Reason == timber.ReasonSlender {
+			q.Limit = LimitTimber
+		}
 		return q
 	}
 	q.CapacityN = tq.Capacity * timberNPerLb
 	q.Governing = tq.Mode.String()
 	q.Mode = int(tq.Mode)
-	if f.fire {
-		fq := &tq.Fire
-		if !fq.Permitted {
-			q.CapacityN, q.Permitted, q.Reason = 0, false, fq.Reason
-			q.Governing, q.Mode = timberFireNote, timberModeFire
-			return q
-		}
-		if eq := fq.Capacity * timberNPerLb * f.alpha(m); eq < q.CapacityN {
-			q.CapacityN = eq
-			q.Governing = timberFireGoverning[fq.Mode]
-			q.Mode = timberModeFire + int(fq.Mode)
-		}
-	}
 	return q
 }
 
+// timberFireQuick converts the fire-case strength of the charred section;
+// its slenderness is the charred section's.
+func timberFireQuick(fq *timber.FireQuick) Quick {
+	if !fq.Permitted {
+		q := Quick{Governing: timberFireNote, Mode: timberModeFire, Slenderness: fq.LeD, Reason: fq.Reason}
+		if fq.Reason == timber.ReasonFireSlender {
+			q.Limit = LimitTimberCh
+		}
+		return q
+	}
+	return Quick{CapacityN: fq.Capacity * timberNPerLb, Governing: timberFireGoverning[fq.Mode],
+		Mode: timberModeFire + int(fq.Mode), Slenderness: fq.LeD, Permitted: true}
+}
+
+// Cases implements CaseFamily: every combination of the method.
+func (f *timberFamily) Cases(m Method) []LoadCase { return f.ls.CasesFor(m) }
+
+// timeOf is the time factor used for a combination: the typed ASD load
+// duration when one is given, else the combination's own.
+func (f *timberFamily) timeOf(c *LoadCase, m Method) float64 {
+	if m == ASD && f.cdFixed > 0 {
+		return f.cdFixed
+	}
+	return c.Time
+}
+
+// CaseQuick implements CaseFamily: the unburnt section with the
+// combination's λ (LRFD, NDS 2018 N3.3) or CD (ASD, 2.3.2).
+func (f *timberFamily) CaseQuick(i int, s Setting, c *LoadCase, selfN float64) Quick {
+	tq := f.cand(i, s.Method).FastTime(timberGeometry(s), f.timeOf(c, s.Method))
+	return timberQuick(&tq)
+}
+
+// CaseFactors implements CaseFamily.
+func (f *timberFamily) CaseFactors(c *LoadCase, selfN float64) map[string]float64 {
+	if c.Method == ASD {
+		return map[string]float64{"CD": f.timeOf(c, ASD)}
+	}
+	return map[string]float64{"lambda": c.Time}
+}
+
+// FireQuick implements FireFamily: the charred section (NDS 2018 16.2) when
+// a fire exposure is set.
+func (f *timberFamily) FireQuick(i int, s Setting) (Quick, bool) {
+	if !f.fire {
+		return Quick{}, false
+	}
+	fq := f.cand(i, s.Method).FastFire(timberGeometry(s))
+	return timberFireQuick(&fq), true
+}
+
+// Quick is the governing check over every combination and the fire case,
+// with the capacity restated on the scale of the largest combination's load.
 func (f *timberFamily) Quick(i int, s Setting) Quick {
-	tq := f.cand(i, s.Method).Fast(timberGeometry(s))
-	return f.timberQuick(&tq, s.Method)
+	selfN := selfWeightN(f.selfW, &f.static[i], s.LengthMM)
+	cases := f.fastLRFD
+	if s.Method == ASD {
+		cases = f.fastASD
+	}
+	q, _ := governCases(f, i, s, cases, &f.ls.FireCase, selfN, f.ls.DemandFor(s.Method, selfN))
+	return q
 }
 
 func (f *timberFamily) Detail(i int, s Setting) Detail {
@@ -232,15 +268,25 @@ func (f *timberFamily) Detail(i int, s Setting) Detail {
 	if !finite(demandN) || demandN < 0 {
 		demandN = 0
 	}
-	alpha := f.alpha(s.Method)
-	// Fire-case load: the service (ASD) combination. With a takedown it is
-	// the governing ASD combination plus self-weight; for a typed LRFD load
-	// the design demand over α.
-	fireN := demandN / alpha
-	if s.Method == LRFD && f.ls.Known && f.ls.ASDN > 0 {
-		fireN = f.ls.ASDN + selfN
+	// The trace follows the combination with the highest utilization of
+	// the unburnt section, at that combination's own λ or CD.
+	gk := 0
+	worst := -1.0
+	cases := f.ls.CasesFor(s.Method)
+	for c := range cases {
+		cq := f.CaseQuick(i, s, &cases[c], selfN)
+		if u := utilOf(cases[c].DemandN(selfN), cq.CapacityN); u > worst {
+			gk, worst = c, u
+		}
 	}
-	r, err := k.Full(timberGeometry(s), timber.Demand{Design: demandN / timberNPerLb, Fire: fireN / timberNPerLb})
+	gc := &cases[gk]
+	if kt, err := k.WithTime(f.timeOf(gc, s.Method)); err == nil {
+		k = kt
+	}
+	caseN := gc.DemandN(selfN)
+	// Fire-case load: the governing ASD (service) combination with self-weight (NDS 2018 16.2.2).
+	fireN := f.ls.FireCase.DemandN(selfN)
+	r, err := k.Full(timberGeometry(s), timber.Demand{Design: caseN / timberNPerLb, Fire: fireN / timberNPerLb})
 	if err != nil {
 		return Detail{
 			Quick:    Quick{Governing: timberNotPerm, Reason: err.Error()},
@@ -249,7 +295,7 @@ func (f *timberFamily) Detail(i int, s Setting) Detail {
 			Plain:    "This column could not be checked: " + err.Error(),
 		}
 	}
-	d := Detail{Quick: f.timberQuick(&r.Quick, s.Method), Warnings: r.Warnings, Plain: r.Plain}
+	d := Detail{Quick: f.Quick(i, s), Warnings: r.Warnings, Plain: r.Plain}
 
 	factors := map[string]float64{}
 	for _, x := range r.FcFactors {
@@ -261,83 +307,89 @@ func (f *timberFamily) Detail(i int, s Setting) Detail {
 	mpa := func(psi float64) float64 { return psi * timberMPaPerPs }
 	kn := func(lb float64) float64 { return lb * timberNPerLb / 1000 }
 	calc := map[string]any{
-		"designation":    r.Designation,
-		"product":        r.Section.Product.String(),
-		"method":         k.Conditions().Method.String(),
-		"b_mm":           r.Section.BMM(),
-		"d_mm":           r.Section.DMM(),
-		"area_mm2":       r.Area * timberMMPerIn * timberMMPerIn,
-		"species":        timber.SpeciesName(r.Material.Species),
-		"grade":          r.Material.Grade,
-		"table":          r.Material.Table,
-		"Fc_MPa":         mpa(r.Material.Fc),
-		"E_MPa":          mpa(r.Material.E),
-		"Emin_MPa":       mpa(r.Material.Emin),
-		"G":              r.Material.G,
-		"factors":        factors,
-		"Fc_star_MPa":    mpa(r.FcStar),
-		"Emin_adj_MPa":   mpa(r.EminAdj),
-		"Ke":             r.Ke,
-		"Ke_source":      r.KeSource,
-		"le_x_mm":        r.LeX * timberMMPerIn,
-		"le_y_mm":        r.LeY * timberMMPerIn,
-		"le_d_x":         r.LeDX,
-		"le_d_y":         r.LeDY,
-		"le_d":           r.LeD,
-		"le_d_limit":     timber.LeDLimit,
-		"FcE_MPa":        mpa(r.FcE),
-		"c":              r.C,
-		"Cp":             r.Cp,
-		"Fc_adj_MPa":     mpa(r.FcAdj),
-		"capacity_kN":    kn(r.Capacity),
-		"permitted":      r.Permitted,
-		"mode":           r.Mode.String(),
-		"mc_percent":     r.MC,
-		"density_kg_m3":  r.DensityKgM3,
-		"mass_kg_m":      r.MassKgPerM,
-		"self_weight_kN": selfN / 1000,
-		"demand_kN":      demandN / 1000,
+		"designation":             r.Designation,
+		"product":                 r.Section.Product.String(),
+		"method":                  k.Conditions().Method.String(),
+		"b_mm":                    r.Section.BMM(),
+		"d_mm":                    r.Section.DMM(),
+		"area_mm2":                r.Area * timberMMPerIn * timberMMPerIn,
+		"species":                 timber.SpeciesName(r.Material.Species),
+		"grade":                   r.Material.Grade,
+		"table":                   r.Material.Table,
+		"Fc_MPa":                  mpa(r.Material.Fc),
+		"E_MPa":                   mpa(r.Material.E),
+		"Emin_MPa":                mpa(r.Material.Emin),
+		"G":                       r.Material.G,
+		"factors":                 factors,
+		"Fc_star_MPa":             mpa(r.FcStar),
+		"Emin_adj_MPa":            mpa(r.EminAdj),
+		"Ke":                      r.Ke,
+		"Ke_source":               r.KeSource,
+		"le_x_mm":                 r.LeX * timberMMPerIn,
+		"le_y_mm":                 r.LeY * timberMMPerIn,
+		"le_d_x":                  r.LeDX,
+		"le_d_y":                  r.LeDY,
+		"le_d":                    r.LeD,
+		"le_d_limit":              timber.LeDLimit,
+		"FcE_MPa":                 mpa(r.FcE),
+		"c":                       r.C,
+		"Cp":                      r.Cp,
+		"Fc_adj_MPa":              mpa(r.FcAdj),
+		"capacity_kN":             d.CapacityN / 1000,
+		"combination":             gc.Name,
+		"combination_demand_kN":   caseN / 1000,
+		"combination_capacity_kN": kn(r.Capacity),
+		"time_factor":             f.timeOf(gc, s.Method),
+		"permitted":               r.Permitted,
+		"mode":                    r.Mode.String(),
+		"mc_percent":              r.MC,
+		"density_kg_m3":           r.DensityKgM3,
+		"mass_kg_m":               r.MassKgPerM,
+		"self_weight_kN":          selfN / 1000,
+		"demand_kN":               demandN / 1000,
 	}
 	for _, x := range r.Steps {
 		d.Steps = append(d.Steps, timberStep(x))
 	}
-	if demandN > 0 {
-		d.Steps = append(d.Steps, Step{
-			Clause: "ASCE 7-22 2.3/2.4 via the load summary", Quantity: "demand",
-			Formula: "governing axial demand including self-weight", Value: demandN / 1000, Unit: "kN",
-		})
+	timeName := "λ"
+	if s.Method == ASD {
+		timeName = "CD"
 	}
+	d.Steps = append(d.Steps,
+		Step{Clause: "NDS 2018 N3.3 / 2.3.2", Quantity: "combination", Formula: fmt.Sprintf("the trace above is for %s, %s = %.2f, the combination with the highest utilization; every combination is checked with its own %s", gc.Name, timeName, f.timeOf(gc, s.Method), timeName), Value: caseN / 1000, Unit: "kN"},
+		Step{Clause: "ASCE 7-22 2.3/2.4 via the load summary", Quantity: "demand",
+			Formula: "largest combination including self-weight", Value: demandN / 1000, Unit: "kN"},
+		Step{Clause: "NDS 2018 N3.3 / 2.3.2", Quantity: "capacity on the demand scale",
+			Formula: "largest combination's load / highest utilization", Value: d.CapacityN / 1000, Unit: "kN"},
+	)
 	if fr := r.Fire; fr != nil {
 		fire := map[string]any{
-			"hours":                fr.Hours,
-			"sides":                fr.Sides,
-			"protected":            fr.Protected,
-			"aeff_mm":              fr.Aeff * timberMMPerIn,
-			"b_mm":                 fr.B * timberMMPerIn,
-			"d_mm":                 fr.D * timberMMPerIn,
-			"area_mm2":             fr.Area * timberMMPerIn * timberMMPerIn,
-			"K_Fc":                 fr.KFc,
-			"K_FcE":                fr.KFcE,
-			"CF":                   fr.CF,
-			"Fc_fire_MPa":          mpa(fr.FcStar),
-			"Emin_fire_MPa":        mpa(fr.EminFire),
-			"le_d":                 fr.LeD,
-			"FcE_MPa":              mpa(fr.FcE),
-			"Cp":                   fr.Cp,
-			"capacity_kN":          kn(fr.Capacity),
-			"permitted":            fr.Permitted,
-			"reason":               fr.Reason,
-			"demand_kN":            fireN / 1000,
-			"alpha":                alpha,
-			"design_equivalent_kN": kn(fr.Capacity) * alpha,
-			"meaning":              fr.Meaning,
+			"hours":         fr.Hours,
+			"sides":         fr.Sides,
+			"protected":     fr.Protected,
+			"aeff_mm":       fr.Aeff * timberMMPerIn,
+			"b_mm":          fr.B * timberMMPerIn,
+			"d_mm":          fr.D * timberMMPerIn,
+			"area_mm2":      fr.Area * timberMMPerIn * timberMMPerIn,
+			"K_Fc":          fr.KFc,
+			"K_FcE":         fr.KFcE,
+			"CF":            fr.CF,
+			"Fc_fire_MPa":   mpa(fr.FcStar),
+			"Emin_fire_MPa": mpa(fr.EminFire),
+			"le_d":          fr.LeD,
+			"FcE_MPa":       mpa(fr.FcE),
+			"Cp":            fr.Cp,
+			"capacity_kN":   kn(fr.Capacity),
+			"permitted":     fr.Permitted,
+			"reason":        fr.Reason,
+			"demand_kN":     fireN / 1000,
+			"combination":   f.ls.FireCase.Name,
+			"meaning":       fr.Meaning,
 		}
 		calc["fire"] = fire
 		d.Steps = append(d.Steps,
 			Step{Clause: "NDS 2018 16.2.2 (load taken as the service combination)", Quantity: "fire demand",
-				Formula: timberFireDemandWords(s.Method, f.ls.Known, alpha), Value: fireN / 1000, Unit: "kN"},
-			Step{Clause: "NDS 2018 16.2.2", Quantity: "α·P_fire",
-				Formula: "fire-case strength on the design-load scale, compared with the design capacity", Value: kn(fr.Capacity) * alpha, Unit: "kN"},
+				Formula: "governing ASD combination plus self-weight: " + f.ls.FireCase.Name, Value: fireN / 1000, Unit: "kN"},
 		)
 		if d.Mode >= timberModeFire {
 			d.Warnings = append(d.Warnings, fmt.Sprintf("The %s h fire case governs the capacity shown: the charred section must carry the service load on its own.", timberHours(fr.Hours)))
@@ -345,16 +397,6 @@ func (f *timberFamily) Detail(i int, s Setting) Detail {
 	}
 	d.Calc = calc
 	return d
-}
-
-func timberFireDemandWords(m Method, known bool, alpha float64) string {
-	switch {
-	case m == ASD:
-		return "the ASD design demand (service loads)"
-	case known:
-		return "governing ASD combination of the takedown plus self-weight"
-	}
-	return fmt.Sprintf("design demand / α, α = %.2f (design per service load)", alpha)
 }
 
 func timberHours(h float64) string {

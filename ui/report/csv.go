@@ -29,9 +29,20 @@ func CSVHeader(sys units.System) []string {
 		"material", "family", "designation", "status", "rank",
 		"length_" + lu, "width_" + du, "depth_" + du, "plan_area_" + au,
 		"weight_" + wu, "column_weight_" + mu, "capacity_" + fu, "demand_" + fu, "utilization",
-		"governing", "slenderness", "carbon_kgCO2e",
+		"governing", "slenderness", "carbon_kgCO2e", "governing_combination", "slenderness_limit",
 		"fire_rating_h", "fire_system", "fire_provided_h", "bare_width_" + du, "bare_depth_" + du,
 	}
+}
+
+// governingCombination names the load combination with the highest
+// utilization for a row ("" when none was checked).
+func governingCombination(m *model.Model, r *model.Row, s model.Setting) string {
+	for _, c := range m.Checks(r.Family, r.Index, s) {
+		if c.Governing {
+			return c.Combination
+		}
+	}
+	return ""
 }
 
 func num(v float64, decimals int) string {
@@ -122,6 +133,7 @@ func WriteCSV(w io.Writer, m *model.Model, opt CSVOptions) error {
 				num(lengthV, 3), num(dim(st.FootprintMM[0]), 2), num(dim(st.FootprintMM[1]), 2), num(area(st.PlanAreaMM2), 4),
 				num(wpl(st.MassKgPerM), 2), num(mass(st.MassKgPerM*sc.Setting.LengthMM/1000), 1),
 				num(capV, 1), num(demV, 1), util, governing, num(r.Slenderness, 1), num(r.CarbonKg, 1),
+				governingCombination(m, r, sc.Setting), r.Limit,
 			}
 			rec = append(rec, fireCSVCells(st, dim)...)
 			if err := cw.Write(rec); err != nil {

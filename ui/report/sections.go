@@ -43,6 +43,7 @@ func compose(f *facts) *doc {
 	mapSection(d, f)
 	workingSizes(d, f)
 	fireSection(d, f)
+	checksSection(d, f)
 	crossoverSection(d, f)
 	takedownSection(d, f)
 	assumptions(d, f)
@@ -491,6 +492,9 @@ func governsText(r *model.Row) string {
 	if !r.Permitted && r.Reason != "" {
 		return r.Reason
 	}
+	if _, why := model.LimitMark(&r.Quick); why != "" {
+		return r.Governing + "; " + model.LimitMarkText + " " + why
+	}
 	return r.Governing
 }
 
@@ -632,8 +636,13 @@ func takedownSection(d *doc, f *facts) {
 	if !ls.Known || len(ls.Combos) == 0 {
 		return
 	}
-	d.heading("Load takedown", 40)
-	d.para(fmt.Sprintf("Service loads on the column from the takedown (ASCE 7-22). Floor live load is %s.", reductionWords(ls)), "", sizeBody)
+	if ls.Typed {
+		d.heading("Load combinations from the typed load", 40)
+		d.para(fmt.Sprintf("The typed load is split into service dead and live load by its dead share of %.2f (ASCE 7-22 2.3.1 or 2.4.1 applied backwards), and every combination follows as in a takedown.", ls.DeadN/(ls.DeadN+ls.LiveN)), "", sizeBody)
+	} else {
+		d.heading("Load takedown", 40)
+		d.para(fmt.Sprintf("Service loads on the column from the takedown (ASCE 7-22). Floor live load is %s.", reductionWords(ls)), "", sizeBody)
+	}
 	d.pdf.Ln(1.5)
 	cols := []column{{"Load", 3.0, "L"}, {"Service value", 1.6, "R"}, {systemName(f.other), 1.6, "R"}}
 	rows := []row{
@@ -642,6 +651,12 @@ func takedownSection(d *doc, f *facts) {
 		{cells: []string{fmt.Sprintf("Floor live L, after reduction (× %.3f)", ls.Reduction), forceText(ls.LiveN, f.sys), forceText(ls.LiveN, f.other)}},
 		{cells: []string{"Roof live Lr", forceText(ls.RoofLiveN, f.sys), forceText(ls.RoofLiveN, f.other)}},
 		{cells: []string{"Snow S", forceText(ls.SnowN, f.sys), forceText(ls.SnowN, f.other)}},
+	}
+	if ls.Typed {
+		rows = []row{
+			{cells: []string{"Dead D", forceText(ls.DeadN, f.sys), forceText(ls.DeadN, f.other)}},
+			{cells: []string{"Live L", forceText(ls.LiveN, f.sys), forceText(ls.LiveN, f.other)}},
+		}
 	}
 	d.table(cols, rows)
 	d.pdf.Ln(1)
@@ -739,7 +754,7 @@ func assumptions(d *doc, f *facts) {
 	d.heading("Method, code editions and assumptions", 30)
 	var items []string
 	if s.Method == model.ASD {
-		items = append(items, fmt.Sprintf("Design method: ASD. Each column's allowable strength Pn/Ω is compared with the service demand. Concrete, designed by strength only, is compared as φPn/α with α = %.2f, the governing LRFD demand over the governing ASD demand.", ls.StrengthPerService))
+		items = append(items, fmt.Sprintf("Design method: ASD. Each column's allowable strength Pn/Ω is compared with the service demand. Concrete, designed by strength only, is checked against the factored (LRFD) combinations of the same loads and its strength restated on the service-load scale (the governing LRFD over the governing ASD load is α = %.2f here).", ls.StrengthPerService))
 	} else {
 		items = append(items, "Design method: LRFD. Each column's design strength φPn is compared with the factored demand.")
 	}
@@ -768,23 +783,24 @@ func assumptions(d *doc, f *facts) {
 				}
 			}
 		}
-		beta := fmt.Sprintf("βdns = %.2f", sc.Concrete.BetaDns)
-		if sc.Concrete.BetaFromLoads && ls.Known && !math.IsNaN(ls.BetaDns) {
-			beta = fmt.Sprintf("βdns = %.2f from the takedown", ls.BetaDns)
+		beta := fmt.Sprintf("βdns = %.2f typed, for every combination", sc.Concrete.BetaDns)
+		if sc.Concrete.BetaFromLoads {
+			beta = fmt.Sprintf("βdns of each LRFD combination (%.2f for the governing one)", ls.BetaDns)
 		}
-		cap := "moment magnifier held to 1.4 (ACI 318-19 6.2.5.3)"
+		cap := "moment magnifier held to 1.4 (ACI 318-19 6.2.5.3): δ above 1.4 never works"
 		if !sc.Concrete.SecondOrderCap {
-			cap = "moment magnifier not held to 1.4 (shown for study; ACI 318-19 6.2.5.3 requires it)"
+			cap = "moment magnifier held to 1.4 (ACI 318-19 6.2.5.3): δ above 1.4 never works; the strength without the limit is shown in the trace as a note only"
 		}
 		items = append(items, fmt.Sprintf("Concrete: ACI 318-19, Building Code Requirements for Structural Concrete: axial strength with the interaction diagram at the minimum moment (6.6.4.5.4), slenderness by moment magnification (6.6.4) with (EI)eff expression (%s) of 6.6.4.4.4 and %s; %s; grade %d bars, reinforcement ratio up to %.1f%%; %s.",
 			sc.Concrete.EIMethod, beta, fc, sc.Concrete.BarGrade, sc.Concrete.RhoMax*100, cap))
 	}
 	if mats["timber"] {
-		dur := ""
-		if s.Method == model.ASD && ls.CD > 0 {
-			dur = fmt.Sprintf(" Load duration factor CD = %.2f (NDS 2018 Table 2.3.2).", ls.CD)
-		} else if s.Method == model.LRFD && ls.Lambda > 0 {
-			dur = fmt.Sprintf(" Time effect factor λ = %.2f (NDS 2018 Table N3).", ls.Lambda)
+		dur := " Every combination is checked with its own time effect factor λ (NDS 2018 Table N3, N3.3)."
+		if s.Method == model.ASD {
+			dur = " Every combination is checked with its own load duration factor CD (NDS 2018 Table 2.3.2, 2.3.2.2)."
+			if sc.Timber.Duration != "" {
+				dur = " The load duration is typed (" + sc.Timber.Duration + ") and used for every combination (NDS 2018 Table 2.3.2)."
+			}
 		}
 		items = append(items, "Timber: NDS 2018, National Design Specification for Wood Construction: column stability factor Cp (3.7) with the adjustment factors for the service conditions; "+timberWords(sc.Timber)+"."+dur)
 	}
@@ -792,14 +808,21 @@ func assumptions(d *doc, f *facts) {
 		items = append(items, compositeAssumption(f))
 	}
 	loadItem := "Loads: ASCE 7-22, Minimum Design Loads and Associated Criteria for Buildings and Other Structures: gravity load combinations 2.3.1 (LRFD) and 2.4.1 (ASD)"
-	if ls.Known {
-		loadItem += "; live-load reduction 4.7; roof live load taken unreduced. Wind, seismic and other special loads are not included."
+	if ls.Typed {
+		loadItem += fmt.Sprintf(". The typed load is split into dead and live load by its dead share of %.2f, and every combination follows; wind, seismic and other special loads are not included.", ls.DeadN/(ls.DeadN+ls.LiveN))
 	} else {
-		loadItem += ". The typed load is taken as given; wind, seismic and other special loads are not included."
+		loadItem += "; live-load reduction 4.7; roof live load taken unreduced. Wind, seismic and other special loads are not included."
 	}
 	items = append(items, loadItem)
 	ks := kFactors(f)
-	kItem := "Effective length: " + endsWords(s) + ", idealized; the weak-axis unbraced length is " + f.both(units.Length, s.WeakMM) + "."
+	twist := ""
+	switch {
+	case s.WeakMM < s.LengthMM && !s.TwistBraced:
+		twist = " Steel twists over the full height: the weak-axis braces are not taken to restrain twisting."
+	case s.WeakMM < s.LengthMM:
+		twist = " The braces are stated to restrain twisting too, so steel twists over the weak-axis length."
+	}
+	kItem := "Effective length: " + endsWords(s) + ", idealized; the weak-axis unbraced length is " + f.both(units.Length, s.WeakMM) + "." + twist
 	if len(ks) > 0 {
 		kItem += " Factors used: " + strings.Join(ks, "; ") + "."
 	}
@@ -821,6 +844,7 @@ func assumptions(d *doc, f *facts) {
 	items = append(items, fmt.Sprintf("Crossover lengths are searched from %s to %s and found to within ±%.0f mm.",
 		f.both(units.Length, f.opt.Range.FromMM), f.both(units.Length, f.opt.Range.ToMM), model.ToleranceMM))
 	d.bullets(items, sizeBody-0.5)
+	assumptionsTable(d)
 }
 
 // trimFloat prints a factor without trailing zeros.

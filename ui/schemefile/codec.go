@@ -26,8 +26,8 @@ const MaxSize = 1 << 20
 // The file's objects and their fields, in the order Marshal writes them.
 var (
 	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "composite", "fire", "carbon"}
-	settingKeys  = []string{"length", "weak_axis_length", "ends", "k", "method"}
-	loadKeys     = []string{"mode", "direct", "takedown"}
+	settingKeys  = []string{"length", "weak_axis_length", "ends", "k", "method", "twist_braced"}
+	loadKeys     = []string{"mode", "direct", "dead_share", "takedown"}
 	takedownKeys = []string{"tributary_area", "floors", "floor_dead", "floor_live", "roof_dead", "roof_live", "snow", "live_reduction", "kll", "occupancy"}
 	steelKeys    = []string{"families", "fy"}
 	concreteKeys = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap"}
@@ -68,12 +68,14 @@ type wSetting struct {
 	Ends           string   `json:"ends"`
 	K              *float64 `json:"k"`
 	Method         string   `json:"method"`
+	TwistBraced    bool     `json:"twist_braced"`
 }
 
 type wLoad struct {
-	Mode     string    `json:"mode"`
-	Direct   string    `json:"direct"`
-	Takedown wTakedown `json:"takedown"`
+	Mode      string    `json:"mode"`
+	Direct    string    `json:"direct"`
+	DeadShare *float64  `json:"dead_share"`
+	Takedown  wTakedown `json:"takedown"`
 }
 
 type wTakedown struct {
@@ -169,10 +171,10 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 		Units: string(sc.Units), Rank: string(sc.Metric),
 		Setting: wSetting{
 			Length: lengthKind.format(s.LengthMM, sys), WeakAxisLength: lengthKind.format(s.WeakMM, sys),
-			Ends: string(s.Ends), K: optNumber(s.K), Method: string(s.Method),
+			Ends: string(s.Ends), K: optNumber(s.K), Method: string(s.Method), TwistBraced: s.TwistBraced,
 		},
 		Load: wLoad{
-			Mode: string(l.Mode), Direct: forceKind.format(l.DirectN, sys),
+			Mode: string(l.Mode), Direct: forceKind.format(l.DirectN, sys), DeadShare: optNumber(l.DeadShare),
 			Takedown: wTakedown{
 				TributaryArea: areaKind.format(l.TributaryM2, sys), Floors: l.Floors,
 				FloorDead: pressureKind.format(l.FloorDeadKPa, sys), FloorLive: pressureKind.format(l.FloorLiveKPa, sys),
@@ -605,6 +607,10 @@ func (r *reader) setting(root *node, s *model.Setting) error {
 	}
 	method, err := r.str(n, p, "method", `"lrfd" or "asd"`)
 	s.Method = model.Method(method)
+	if err != nil {
+		return err
+	}
+	s.TwistBraced, err = r.absentBool(n, p, "twist_braced", false, "true when the weak-axis braces also restrain twisting (steel Lcz = weak-axis length), false for the full length")
 	return err
 }
 
@@ -627,6 +633,9 @@ func (r *reader) load(root *node, l *model.Load) error {
 	}
 	l.Mode = model.LoadMode(mode)
 	if l.DirectN, err = r.quantity(n, p, "direct", forceKind); err != nil {
+		return err
+	}
+	if l.DeadShare, err = r.absentNum(n, p, "dead_share", "the part of the typed load's service load that is dead, above 0 and at most 1, or null for the default 2/3"); err != nil {
 		return err
 	}
 	t, tp, err := r.sub(n, p, "takedown", takedownKeys, "the takedown inputs")

@@ -33,12 +33,18 @@
 //	                                   pinned-pinned, fixed-free or pinned-guided
 //	    "k": null,                     effective-length factor 0.5 to 10;
 //	                                   null: the end condition's recommended value
-//	    "method": "lrfd" | "asd"
+//	    "method": "lrfd" | "asd",
+//	    "twist_braced": false          true: the weak-axis braces also restrain
+//	                                   twisting (steel Lcz = weak-axis length);
+//	                                   false: Lcz is the full length
 //	  },
 //	  "load": {
 //	    "mode": "direct" | "takedown", which of the two below is used
-//	    "direct": "400 kip",           typed axial load (factored for LRFD,
-//	                                   service for ASD); kept when unused
+//	    "direct": "400 kip",           typed axial load (the governing factored
+//	                                   load for LRFD, the service load for ASD);
+//	                                   kept when unused
+//	    "dead_share": null,            part of the typed load's service load that
+//	                                   is dead, above 0 and at most 1; null: 2/3
 //	    "takedown": {                  kept when unused; then only finite, ≥ 0
 //	      "tributary_area": "900 ft2", per floor
 //	      "floors": 3,                 floors carried below the roof, 0 to 100
@@ -124,7 +130,9 @@
 // A file whose version is higher than Version was written by a newer
 // program and is refused with a message saying so; a later version of this
 // package will read every older version. Files have no other version
-// markers.
+// markers. Two fields were added to version 1 after its first release,
+// setting.twist_braced and load.dead_share: Marshal always writes them, and
+// when absent on reading they take their defaults (false, and null: 2/3).
 //
 // Version 1 had the fire exposure inside "timber" ("fire": none, 1h, 1.5h
 // or 2h) and no top-level "fire" object or "gypsum-board" factor. A

@@ -8,6 +8,7 @@ import (
 	"reflect"
 	"slices"
 	"sort"
+	"strings"
 	"testing"
 	"unicode"
 
@@ -53,6 +54,7 @@ func genScheme(t *rapid.T) model.Scheme {
 	s.Ends = rapid.SampledFrom(model.EndConditions).Draw(t, "ends")
 	s.K = maybeZero(t, 0.5, 10, "K")
 	s.Method = rapid.SampledFrom([]model.Method{model.LRFD, model.ASD}).Draw(t, "method")
+	s.TwistBraced = rapid.Bool().Draw(t, "twist braced")
 
 	l := &sc.Load
 	l.Mode = rapid.SampledFrom([]model.LoadMode{model.LoadDirect, model.LoadTakedown}).Draw(t, "mode")
@@ -66,6 +68,7 @@ func genScheme(t *rapid.T) model.Scheme {
 	l.LiveReduction = rapid.Bool().Draw(t, "reduction")
 	l.KLL = rapid.SampledFrom([]float64{0, 1, 2, 3, 4}).Draw(t, "kll")
 	l.Occupancy = rapid.SampledFrom([]string{"", model.OccGeneral, model.OccAssembly, model.OccStorage, model.OccGarage}).Draw(t, "occupancy")
+	l.DeadShare = maybeZero(t, 0.01, 1, "dead share")
 	if l.Mode == model.LoadDirect {
 		l.DirectN = rapid.Float64Range(1, 200e6).Draw(t, "direct")
 	} else {
@@ -156,8 +159,8 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 	walk("", reflect.TypeOf(model.Scheme{}))
 	want := []string{
 		"Name", "Units", "Metric", "SelfWeight", "Materials", "Carbon", "ReportMap",
-		"Setting.LengthMM", "Setting.WeakMM", "Setting.Ends", "Setting.K", "Setting.Method",
-		"Load.Mode", "Load.DirectN", "Load.TributaryM2", "Load.Floors", "Load.FloorDeadKPa", "Load.FloorLiveKPa",
+		"Setting.LengthMM", "Setting.WeakMM", "Setting.Ends", "Setting.K", "Setting.Method", "Setting.TwistBraced",
+		"Load.Mode", "Load.DirectN", "Load.DeadShare", "Load.TributaryM2", "Load.Floors", "Load.FloorDeadKPa", "Load.FloorLiveKPa",
 		"Load.RoofDeadKPa", "Load.RoofLiveKPa", "Load.SnowKPa", "Load.LiveReduction", "Load.KLL", "Load.Occupancy",
 		"Steel.Families", "Steel.FyMPa",
 		"Concrete.FcMPa", "Concrete.BarGrade", "Concrete.RhoMax", "Concrete.Transverse", "Concrete.M1M2",
@@ -237,4 +240,31 @@ func FuzzUnmarshal(f *testing.F) {
 			t.Fatalf("re-parse differs:\n got %#v\nwant %#v", back, sc)
 		}
 	})
+}
+
+// TestAddedFieldsAreOptional: twist_braced and dead_share came after the
+// first release of version 1; a file without them reads with the defaults
+// (torsional length over the full height, dead share 2/3).
+func TestAddedFieldsAreOptional(t *testing.T) {
+	sc := model.DefaultScheme()
+	sc.Setting.TwistBraced = true
+	sc.Load.DeadShare = 0.5
+	b, err := Marshal(sc)
+	require.NoError(t, err)
+	old := strings.Replace(string(b), ",\n    \"twist_braced\": true", "", 1)
+	old = strings.Replace(old, "    \"dead_share\": 0.5,\n", "", 1)
+	require.NotContains(t, old, "twist_braced")
+	require.NotContains(t, old, "dead_share")
+	back, err := Unmarshal([]byte(old))
+	require.NoError(t, err)
+	assert.False(t, back.Setting.TwistBraced)
+	assert.Zero(t, back.Load.DeadShare, "absent means the default dead share")
+	back, err = Unmarshal(b)
+	require.NoError(t, err)
+	assert.True(t, back.Setting.TwistBraced)
+	assert.Equal(t, 0.5, back.Load.DeadShare)
+	bad := strings.Replace(string(b), `"dead_share": 0.5`, `"dead_share": 1.5`, 1)
+	_, err = Unmarshal([]byte(bad))
+	require.Error(t, err)
+	assert.Contains(t, err.Error(), "dead")
 }

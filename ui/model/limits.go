@@ -1,0 +1,38 @@
+package model
+
+// Slenderness limits of each material's standard, shown as a visible mark
+// beside the slenderness wherever a row is shown.
+const (
+	LimitSteel    = "Lc/r above 200: AISC 360-22 E2 (User Note) recommends not to exceed it; strength still given"
+	LimitTimber   = "le/d above 50: not permitted (NDS 2018 3.7.1.4)"
+	LimitTimberCh = "le/d of the charred section above 50: not permitted (NDS 2018 3.7.1.4 with 16.2)"
+	LimitConcrete = "k·lu/r above 100: not permitted (ACI 318-19 6.2.6; the moment magnifier method does not apply)"
+)
+
+// LimitMarkText is the visible mark put beside a slenderness that passes its limit.
+const LimitMarkText = "!"
+
+// SlendernessLimit is one material's slenderness limit, for the
+// assumptions table.
+type SlendernessLimit struct {
+	Material string  // "steel", "concrete" or "timber"
+	Ratio    string  // the ratio limited, e.g. "Lc/r"
+	Max      float64 // the limit
+	Effect   string  // what passing it means
+}
+
+// SlendernessLimits lists every material's limit in display order.
+var SlendernessLimits = []SlendernessLimit{
+	{"steel", "Lc/r", 200, LimitSteel},
+	{"concrete", "k·lu/r", 100, LimitConcrete},
+	{"timber", "le/d", 50, LimitTimber},
+}
+
+// LimitMark returns the mark and its reason for a row whose slenderness
+// passes its material's limit, or two empty strings.
+func LimitMark(q *Quick) (mark, why string) {
+	if q.Limit == "" {
+		return "", ""
+	}
+	return LimitMarkText, q.Limit
+}

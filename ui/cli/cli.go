@@ -172,9 +172,9 @@ type Candidate struct {
 	Steps       []model.Step   `json:"steps"`
 
 	// Fire is how the size meets the scheme's fire rating.
-	Fire model.FireCheck `json:"fire"`
-	Checks      []CheckJSON    `json:"checks"`
-	Limit       string         `json:"limit"`
+	Fire   model.FireCheck `json:"fire"`
+	Checks []CheckJSON     `json:"checks"`
+	Limit  string          `json:"limit"`
 }
 
 // CheckJSON is one load combination checked on one candidate.

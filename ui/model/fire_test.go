@@ -168,7 +168,7 @@ func TestFireConcreteCoverRecomputesStrength(t *testing.T) {
 			q0 := bare.Families[bf].Quick(bi, s)
 			q := m.Families[fi].Quick(i, s)
 			if q.Permitted && q0.Permitted {
-				assert.LessOrEqual(t, q.CapacityN, q0.CapacityN*(1+1e-9), des)
+				assert.LessOrEqual(t, q.CapacityN, q0.CapacityN*(1+1e-6), des) // within the section solver's tolerance
 				if q.CapacityN < q0.CapacityN*(1-1e-6) {
 					lower++
 				}

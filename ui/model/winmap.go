@@ -447,24 +447,15 @@ func (wk *mapWorker) row(ctx context.Context, base *Model, sc Scheme, axis MapAx
 	return nil
 }
 
-// WithLoad returns the model at another load. A typed load's summary
-// differs from the model's only in its magnitude, which the families do not
-// read when they are built, so the families are shared; a takedown's
-// summary changes its combinations and factors with the area, so the model
-// is built afresh. TestWithLoadMatchesNew guards the sharing.
+// WithLoad returns the model at another load, built afresh: every load
+// summary, typed or taken down, carries per-combination factors (λ, CD,
+// βdns with the self-weight share) that the families read when they are
+// built, so no family can be shared between loads. TestWithLoadMatchesNew
+// guards it.
 func (m *Model) WithLoad(l Load) (*Model, error) {
 	sc := m.Scheme
 	sc.Load = l
-	if l.Mode != LoadDirect || m.Scheme.Load.Mode != LoadDirect {
-		return New(sc)
-	}
-	ls, err := Summarize(l, sc.Setting.Method)
-	if err != nil {
-		return nil, err
-	}
-	out := *m
-	out.Scheme, out.Loads = sc, ls
-	return &out, nil
+	return New(sc)
 }
 
 // gridReach returns the last of the lengths at which a candidate works, or

@@ -148,6 +148,9 @@ type PlanLayout struct {
 	Sections []PlanBox
 	// Reference is the reference square's box (zero when none).
 	Reference PlanBox
+	// Labels holds, per section, the lines of text drawn under it (size
+	// first); filled by WritePlan and SavePlan.
+	Labels [][]string
 	// Polygons holds, per section, its body and fill parts in pixels
 	// (top-left origin) exactly as drawn; filled only when asked for.
 	Polygons [][]PlanPolygon

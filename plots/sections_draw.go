@@ -77,6 +77,8 @@ type planDrawer struct {
 	slots []planSlot
 	scale vg.Length // points per mm
 	path  vg.Path
+	// labels collects the text drawn for each section, when not nil.
+	labels [][]string
 }
 
 // lineHeight is the spacing of text lines of a size in points.
@@ -440,6 +442,9 @@ func (p *planDrawer) drawSlot(c draw.Canvas, sl *planSlot) {
 		p.drawSection(c, sl.sec, cx, cy)
 	}
 	y := labelTop
+	if p.labels != nil && sl.index >= 0 {
+		p.labels[sl.index] = append(append(p.labels[sl.index][:0], sl.title), sl.lines...)
+	}
 	c.FillText(p.sty.name, vg.Point{X: cx, Y: y}, sl.title)
 	y -= lineHeight(planNameSize)
 	for _, l := range sl.lines {

@@ -2,9 +2,12 @@ package plots
 
 import (
 	"bufio"
+	"bytes"
+	"encoding/xml"
 	"fmt"
 	"io"
 	"os"
+	"strings"
 
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
@@ -95,12 +98,67 @@ func WritePlan(w io.Writer, f Format, s *PlanSheet, size Size) (PlanLayout, erro
 		cv = &outlinedText{CanvasWriterTo: vgpdf.New(wd, ht)}
 	}
 	p := newPlanDrawer(s)
+	p.labels = make([][]string, len(s.Sections))
 	c := draw.New(cv)
 	p.draw(c, f != PNG)
-	if _, err := cv.WriteTo(w); err != nil {
+	if f == SVG {
+		// Text is drawn as glyph outlines; a <desc> element carries it as
+		// words for screen readers, search and tests.
+		var buf bytes.Buffer
+		if _, err := cv.WriteTo(&buf); err != nil {
+			return PlanLayout{}, fmt.Errorf("plots: writing %s: %w", f, err)
+		}
+		if _, err := w.Write(withDesc(buf.Bytes(), s, p.labels)); err != nil {
+			return PlanLayout{}, fmt.Errorf("plots: writing %s: %w", f, err)
+		}
+	} else if _, err := cv.WriteTo(w); err != nil {
 		return PlanLayout{}, fmt.Errorf("plots: writing %s: %w", f, err)
 	}
-	return p.result(size.dpi(), c.Max.Y, true), nil
+	l := p.result(size.dpi(), c.Max.Y, true)
+	l.Labels = p.labels
+	return l, nil
+}
+
+// withDesc inserts after the opening <svg> tag a <title> (the sheet's
+// title) and a <desc> listing every drawn label and the caution.
+func withDesc(svg []byte, s *PlanSheet, labels [][]string) []byte {
+	i := bytes.Index(svg, []byte("<svg"))
+	if i < 0 {
+		return svg
+	}
+	j := bytes.IndexByte(svg[i:], '>')
+	if j < 0 {
+		return svg
+	}
+	at := i + j + 1
+	var b bytes.Buffer
+	esc := func(t string) { _ = xml.EscapeText(&b, []byte(t)) }
+	b.WriteString("\n<title>")
+	title := s.Title
+	if title == "" {
+		title = "Plan sections to one scale"
+	}
+	esc(title)
+	b.WriteString("</title>\n<desc>")
+	for k, ls := range labels {
+		if k > 0 {
+			b.WriteString("; ")
+		}
+		esc(strings.Join(ls, ", "))
+	}
+	if s.Note != "" {
+		b.WriteString(". ")
+		esc(s.Note)
+	}
+	if s.Caution != "" {
+		b.WriteString(" ")
+		esc(s.Caution)
+	}
+	b.WriteString("</desc>")
+	out := make([]byte, 0, len(svg)+b.Len())
+	out = append(out, svg[:at]...)
+	out = append(out, b.Bytes()...)
+	return append(out, svg[at:]...)
 }
 
 // SavePlan writes s to the file at path, choosing the format from its extension.

@@ -38,13 +38,15 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 		sh.ScaleBarMM, sh.ScaleBarDivisions, sh.ScaleBarLabel = refFootMM, 4, "1 ft (3 in steps)"
 	}
 	if opt.Caution {
-		sh.Caution = "⚠ " + model.Caution
+		sh.Caution = model.Caution
 	}
 	var keys []Key
+	var none []string
 	char, fill, prot := false, false, false
 	for fi := range res.Families {
 		r := res.Families[fi].Best()
 		if r == nil {
+			none = append(none, m.Families[res.Families[fi].Family].Name())
 			continue
 		}
 		f := m.Families[r.Family]
@@ -69,6 +71,9 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 	}
 	if prot {
 		note += " Dashed pink: fire-protection board."
+	}
+	if len(none) > 0 {
+		note += " No working size: " + strings.Join(none, ", ") + "."
 	}
 	sh.Note = note
 	if len(sh.Sections) == 0 {

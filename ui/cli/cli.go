@@ -114,6 +114,7 @@ func usage(w io.Writer) {
   upright crossovers [flags]    lengths where the answer changes
   upright curve --designation NAME --from 1m --to 10m [flags]
   upright report --scheme FILE --out report.pdf
+  upright sections [flags] --out FILE  plan sections to one scale (.png, .svg or .pdf; --json for the layout)
   upright table [flags] --csv table.csv
   upright scheme [flags] --out FILE     write the scheme built from the flags as a file
   upright --version

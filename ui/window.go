@@ -101,6 +101,9 @@ type Window struct {
 	xsStatus    *widget.Label
 	xsAllCheck  *widget.Check
 
+	sections     *sectionsView      // the Sections tab beside the chart
+	sectionsTabs *container.AppTabs // the chart and Sections tabs
+
 	// results
 	table       *liveTable
 	tableSys    units.System // units of the headers shown
@@ -175,6 +178,7 @@ func (w *Window) Close() {
 	w.stopAutosave()
 	unregisterWindow(w)
 	w.eng.Close()
+	w.sections.close()
 	w.win.Close()
 }
 
@@ -317,6 +321,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	newScheme := w.snap == nil || w.snap.SchemeGen != s.SchemeGen
 	w.snap = s
 	w.refreshRows()
+	w.sections.show(s)
 	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()

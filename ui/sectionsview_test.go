@@ -1,0 +1,113 @@
+package ui
+
+import (
+	"testing"
+	"time"
+
+	"fyne.io/fyne/v2"
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+// openSections shows the Sections tab at a set image size and waits for its first figure.
+func openSections(t *testing.T, h *harness) {
+	t.Helper()
+	h.ui(func() {
+		h.w.sections.wantW, h.w.sections.wantH = 1200, 500
+		h.w.ShowSections(true)
+	})
+	waitSections(t, h, func() bool { return h.w.sections.front != nil && len(h.w.sections.shown) > 0 })
+}
+
+// waitSections polls, under the UI lock, until ok holds.
+func waitSections(t *testing.T, h *harness, ok func() bool) {
+	t.Helper()
+	deadline := time.Now().Add(20 * time.Second)
+	for time.Now().Before(deadline) {
+		done := false
+		h.ui(func() { done = ok() })
+		if done {
+			return
+		}
+		time.Sleep(5 * time.Millisecond)
+	}
+	t.Fatal("the Sections view did not update")
+}
+
+// bestShown returns each family's best working size in the snapshot on screen.
+func bestShown(h *harness) []string {
+	var out []string
+	h.ui(func() {
+		for i := range h.w.snap.Result.Families {
+			if b := h.w.snap.Result.Families[i].Best(); b != nil {
+				out = append(out, b.Static.Designation)
+			}
+		}
+	})
+	return out
+}
+
+// TestSectionsViewFollowsTheSlider opens the Sections tab and checks it
+// draws each family's best working size, and follows the slider.
+func TestSectionsViewFollowsTheSlider(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	openSections(t, h)
+	assert.Equal(t, bestShown(h), h.w.SectionsShown())
+
+	var before []string
+	h.ui(func() { before = h.w.SectionsShown() })
+	h.setSlider(3000)
+	want := bestShown(h)
+	require.NotEqual(t, before, want, "the best sizes change between the demo length and 3 m")
+	waitSections(t, h, func() bool { return equalStrings(h.w.sections.shown, want) })
+}
+
+// TestSectionsViewTapSelects taps a drawn section and checks the candidate is
+// selected in the table and the calculation view.
+func TestSectionsViewTapSelects(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	openSections(t, h)
+	var target string
+	var pos fyne.Position
+	var size fyne.Size
+	h.ui(func() {
+		v := h.w.sections
+		size = fyne.NewSize(600, 250) // half the image: window units are image pixels / 2
+		v.area.Resize(size)
+		i := len(v.shown) - 1
+		b := v.layout.Sections[i]
+		target = v.shown[i]
+		pos = fyne.NewPos(float32((b.X+b.W/2)/2), float32((b.Y+b.H/2)/2))
+		v.area.Tapped(&fyne.PointEvent{Position: pos})
+	})
+	h.settle()
+	h.ui(func() {
+		assert.Equal(t, target, h.w.selected)
+		assert.Contains(t, h.w.calcTitle.Text, target)
+	})
+	// The highlight follows: the view redraws with the selection.
+	waitSections(t, h, func() bool { return h.w.sections.renders.Load() >= 2 })
+	h.ui(func() {
+		assert.Equal(t, "", h.w.sections.pick(fyne.NewPos(1, 1), size), "a tap on the background selects nothing")
+	})
+}
+
+// TestSectionsViewIdleWhenHidden checks that nothing is drawn while the chart tab shows.
+func TestSectionsViewIdleWhenHidden(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	h.setSlider(3000)
+	h.setSlider(5000)
+	assert.Equal(t, int64(0), h.w.sections.renders.Load())
+}
+
+func equalStrings(a, b []string) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	for i := range a {
+		if a[i] != b[i] {
+			return false
+		}
+	}
+	return true
+}

@@ -3,6 +3,7 @@ package plots
 import (
 	"image/color"
 	"math"
+	"strings"
 
 	"gonum.org/v1/plot/text"
 	"gonum.org/v1/plot/vg"
@@ -79,6 +80,8 @@ type planDrawer struct {
 	path  vg.Path
 	// labels collects the text drawn for each section, when not nil.
 	labels [][]string
+	// noteLines and cautionLines are the footer texts wrapped to the width.
+	noteLines, cautionLines []string
 }
 
 // lineHeight is the spacing of text lines of a size in points.
@@ -288,6 +291,9 @@ func (p *planDrawer) place(r vg.Rectangle) (foot vg.Point, area vg.Rectangle) {
 		area.Max.Y -= lineHeight(planTitleSize) + vg.Points(6)
 	}
 	foot = area.Min
+	w := area.Max.X - area.Min.X
+	p.cautionLines = wrapText(p.sty.footBold, s.Caution, w, p.cautionLines[:0])
+	p.noteLines = wrapText(p.sty.foot, s.Note, w, p.noteLines[:0])
 	area.Min.Y += p.footerHeight() + vg.Points(6)
 	p.prepare()
 	p.scale = 0
@@ -309,9 +315,16 @@ func (p *planDrawer) draw(c draw.Canvas, fill bool) {
 	if s.Title != "" {
 		c.FillText(p.sty.title, vg.Point{X: area.Min.X, Y: c.Max.Y - vg.Points(planMargin)}, s.Title)
 	}
-	if s.Caution != "" {
-		c.FillText(p.sty.footBold, foot, s.Caution)
-		foot.Y += lineHeight(planFootSize) + vg.Points(4)
+	for k := len(p.cautionLines) - 1; k >= 0; k-- {
+		c.FillText(p.sty.footBold, foot, p.cautionLines[k])
+		foot.Y += lineHeight(planFootSize)
+	}
+	if len(p.cautionLines) > 0 {
+		foot.Y += vg.Points(3)
+	}
+	for k := len(p.noteLines) - 1; k >= 0; k-- {
+		c.FillText(p.sty.foot, foot, p.noteLines[k])
+		foot.Y += lineHeight(planFootSize)
 	}
 	if len(s.Sections) == 0 {
 		msg := s.Empty
@@ -322,7 +335,7 @@ func (p *planDrawer) draw(c draw.Canvas, fill bool) {
 		c.FillText(st, vg.Point{X: (area.Min.X + area.Max.X) / 2, Y: (area.Min.Y + area.Max.Y) / 2}, msg)
 		return
 	}
-	p.drawScaleBar(c, foot.X, foot.Y+vg.Points(2))
+	p.drawScaleBar(c, foot.X, foot.Y+vg.Points(3))
 	for k := range p.slots {
 		p.drawSlot(c, &p.slots[k])
 	}
@@ -379,20 +392,41 @@ func (p *planDrawer) result(dpi int, heightPt vg.Length, polygons bool) PlanLayo
 	return out
 }
 
-// footerHeight is the room the footer takes.
+// footerHeight is the room the footer takes: the scale bar, the note and the caution lines.
 func (p *planDrawer) footerHeight() vg.Length {
-	s := p.sheet
-	h := vg.Length(0)
-	if s.ScaleBarMM > 0 || s.Note != "" {
-		h += lineHeight(planFootSize) + vg.Points(planBarHeight) + vg.Points(4)
+	h := vg.Length(len(p.noteLines)+len(p.cautionLines)) * lineHeight(planFootSize)
+	if p.sheet.ScaleBarMM > 0 {
+		h += lineHeight(planFootSize) + vg.Points(3)
 	}
-	if s.Caution != "" {
-		h += lineHeight(planFootSize) + vg.Points(2)
+	if len(p.cautionLines) > 0 {
+		h += vg.Points(3)
 	}
 	return h
 }
 
-// drawScaleBar draws the scale bar and the note at the footer's upper line.
+// wrapText breaks text into lines no wider than width, at spaces, appending to out.
+func wrapText(sty text.Style, t string, width vg.Length, out []string) []string {
+	words := strings.Fields(t)
+	line := ""
+	for _, w := range words {
+		try := w
+		if line != "" {
+			try = line + " " + w
+		}
+		if line != "" && sty.Width(try) > width {
+			out = append(out, line)
+			line = w
+			continue
+		}
+		line = try
+	}
+	if line != "" {
+		out = append(out, line)
+	}
+	return out
+}
+
+// drawScaleBar draws the scale bar and its label with the bar's lower edge at y.
 func (p *planDrawer) drawScaleBar(c draw.Canvas, x, y vg.Length) {
 	s := p.sheet
 	if s.ScaleBarMM > 0 {
@@ -411,10 +445,6 @@ func (p *planDrawer) drawScaleBar(c draw.Canvas, x, y vg.Length) {
 		c.Stroke(p.rect(x, y, x+vg.Length(n)*seg, y+vg.Points(planBarHeight)))
 		lx := x + vg.Length(n)*seg + vg.Points(5)
 		c.FillText(p.sty.footBold, vg.Point{X: lx, Y: y - vg.Points(1)}, s.ScaleBarLabel)
-		x = lx + p.sty.footBold.Width(s.ScaleBarLabel) + vg.Points(14)
-	}
-	if s.Note != "" {
-		c.FillText(p.sty.foot, vg.Point{X: x, Y: y - vg.Points(1)}, s.Note)
 	}
 }
 

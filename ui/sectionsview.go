@@ -3,6 +3,7 @@ package ui
 import (
 	"fmt"
 	"image"
+	"os"
 	"strings"
 	"sync"
 	"sync/atomic"
@@ -86,6 +87,11 @@ func (w *Window) plotViews(chartView fyne.CanvasObject) fyne.CanvasObject {
 		w.sections.setVisible(t.Content == w.sections.area)
 	}
 	w.sectionsTabs = tabs
+	// UPRIGHT_VIEW=sections opens on the Sections tab (screenshots, demonstrations).
+	if os.Getenv("UPRIGHT_VIEW") == "sections" {
+		tabs.SelectIndex(1)
+		w.sections.setVisible(true)
+	}
 	return tabs
 }
 

@@ -14,6 +14,9 @@ type SectionsOptions struct {
 	Selected string // designation drawn highlighted; "" for none
 	Title    string // figure title; empty for none
 	Caution  bool   // write the caution along the bottom (every exported figure)
+	// AtLength names the length in the note (exports); the window leaves it
+	// out, as its view is redrawn only when the sizes shown change.
+	AtLength bool
 }
 
 // Reference square and scale bar of each unit system: 1 ft in 3 in steps, or 300 mm in 100 mm steps.
@@ -42,6 +45,7 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 	}
 	var keys []Key
 	var none []string
+	mats := map[string]bool{}
 	char, fill, prot := false, false, false
 	for fi := range res.Families {
 		r := res.Families[fi].Best()
@@ -54,15 +58,28 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 		if !ok {
 			continue
 		}
-		sec := PlanSection(o, f.Material(), f.Name(), r.Static, sys)
+		sec := PlanSection(o, f.Material(), r.Static, sys)
 		sec.Selected = opt.Selected != "" && r.Static.Designation == opt.Selected
 		sh.Sections = append(sh.Sections, sec)
 		keys = append(keys, Key{Family: r.Family, Index: r.Index})
+		mats[f.Material()] = true
 		char = char || len(o.Char) > 0
 		fill = fill || len(o.Fill) > 0
 		prot = prot || o.ProtectionMM > 0
 	}
-	note := "Plan sections to one scale: the best working size of each family at " + units.Length(res.Setting.LengthMM, sys) + "."
+	note := "Plan sections to one scale: the best working size of each family."
+	if opt.AtLength {
+		note = "Plan sections to one scale: the best working size of each family at " + units.Length(res.Setting.LengthMM, sys) + "."
+	}
+	var key []string
+	for _, k := range materialKeys {
+		if mats[k[0]] {
+			key = append(key, k[1])
+		}
+	}
+	if len(key) > 0 {
+		note += " " + strings.Join(key, ", ") + "."
+	}
 	if char {
 		note += " Dark: the layer charred in the fire rating."
 	}
@@ -82,8 +99,16 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 	return sh, keys
 }
 
+// materialKeys say how each material is drawn, for the figure's note.
+var materialKeys = [][2]string{
+	{"steel", "Blue: steel"},
+	{"composite", "blue wall with grey fill: filled tube"},
+	{"concrete", "grey with bars: reinforced concrete"},
+	{"timber", "tan: timber"},
+}
+
 // PlanSection turns one candidate's outline into a drawn section with its labels.
-func PlanSection(o model.Outline, material, family string, st *model.Static, sys units.System) plots.PlanSection {
+func PlanSection(o model.Outline, material string, st *model.Static, sys units.System) plots.PlanSection {
 	title, rest := splitDesignation(st.Designation)
 	sec := plots.PlanSection{
 		Group: material, Title: title,
@@ -92,10 +117,7 @@ func PlanSection(o model.Outline, material, family string, st *model.Static, sys
 	if rest != "" {
 		sec.Lines = append(sec.Lines, rest)
 	}
-	sec.Lines = append(sec.Lines,
-		materialWord(material)+" · "+family,
-		units.PlanSize(st.FootprintMM, sys),
-		units.MassPerLength(st.MassKgPerM, sys))
+	sec.Lines = append(sec.Lines, units.PlanSize(st.FootprintMM, sys), units.MassPerLength(st.MassKgPerM, sys))
 	if o.ProtectionMM > 0 {
 		sec.Lines = append(sec.Lines, "board "+units.Dim(o.ProtectionMM, sys)+unitWord(sys))
 	}
@@ -157,14 +179,6 @@ func splitDesignation(d string) (string, string) {
 		return d[:i+len(" glulam")], d[i+len(" glulam "):]
 	}
 	return d, ""
-}
-
-// materialWord capitalises a material name for a label.
-func materialWord(m string) string {
-	if m == "" {
-		return ""
-	}
-	return strings.ToUpper(m[:1]) + m[1:]
 }
 
 // unitWord is the unit written after a plan dimension.

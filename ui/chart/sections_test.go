@@ -98,7 +98,7 @@ func TestDrawnAreasMatchTheCatalogue(t *testing.T) {
 			for i := lo; i < min(lo+12, f.Len()); i++ {
 				o, ok := model.OutlineOf(f, i, sc.Setting)
 				require.True(t, ok)
-				sheet.Sections = append(sheet.Sections, PlanSection(o, f.Material(), f.Name(), f.Static(i), units.US))
+				sheet.Sections = append(sheet.Sections, PlanSection(o, f.Material(), f.Static(i), units.US))
 				idx = append(idx, i)
 			}
 			l, err := plots.LayoutPlan(&sheet, plots.DefaultPlanSize)
@@ -211,7 +211,7 @@ func TestSectionsProtectionAdds(t *testing.T) {
 	o := model.SteelOutline(sh)
 	o.ProtectionMM = 15.9 // 5/8 in board (common practice)
 	st := &model.Static{Designation: sh.Name, FootprintMM: [2]float64{o.WidthMM, o.DepthMM}, MassKgPerM: sh.MassKgPerM()}
-	sheet := plots.PlanSheet{Sections: []plots.PlanSection{PlanSection(o, "steel", "W", st, units.US)}}
+	sheet := plots.PlanSheet{Sections: []plots.PlanSection{PlanSection(o, "steel", st, units.US)}}
 	l, err := plots.LayoutPlan(&sheet, plots.DefaultPlanSize)
 	require.NoError(t, err)
 	assert.InDelta(t, (o.WidthMM+2*15.9)*l.PxPerMM, l.Sections[0].W, 1e-6)
@@ -229,7 +229,7 @@ const (
 // compares it with testdata/plots/sections-demo.png.
 func TestSectionsGolden(t *testing.T) {
 	m, res := planModel(t, "demo")
-	sh, _ := Sections(m, res, SectionsOptions{Title: m.Scheme.Name, Caution: true})
+	sh, _ := Sections(m, res, SectionsOptions{Title: m.Scheme.Name, Caution: true, AtLength: true})
 	r, err := plots.NewRaster(1200, 500)
 	require.NoError(t, err)
 	_, err = r.RenderPlan(&sh)

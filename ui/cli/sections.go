@@ -76,7 +76,7 @@ func runSections(args []string, stdout, stderr io.Writer) error {
 	if err != nil {
 		return err
 	}
-	sheet, keys := chart.Sections(m, res, chart.SectionsOptions{Title: m.Scheme.Name, Caution: true})
+	sheet, keys := chart.Sections(m, res, chart.SectionsOptions{Title: m.Scheme.Name, Caution: true, AtLength: true})
 	size := plots.DefaultPlanSize
 	var layout plots.PlanLayout
 	if *out != "" {

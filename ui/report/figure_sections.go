@@ -21,7 +21,7 @@ func sectionsFigure(d *doc, f *facts) {
 	if len(f.m.Families) == 0 {
 		return
 	}
-	sheet, keys := chart.Sections(f.m, f.res, chart.SectionsOptions{Caution: true})
+	sheet, keys := chart.Sections(f.m, f.res, chart.SectionsOptions{Caution: true, AtLength: true})
 	if len(keys) == 0 {
 		return
 	}

@@ -7,6 +7,9 @@ import (
 	"fyne.io/fyne/v2"
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+
+	"upright/ui/model"
+	"upright/ui/units"
 )
 
 // openSections shows the Sections tab at a set image size and waits for its first figure.
@@ -110,4 +113,32 @@ func equalStrings(a, b []string) bool {
 		}
 	}
 	return true
+}
+
+// BenchmarkSliderStepWithSections is BenchmarkSliderStep with the Sections
+// view showing: each step is evaluated and shown while the view follows,
+// redrawing (on its own goroutine) whenever the best sizes change.
+func BenchmarkSliderStepWithSections(b *testing.B) {
+	h := newHarness(b, everyFamily())
+	h.ui(func() {
+		h.w.sections.wantW, h.w.sections.wantH = 1200, 500
+		h.w.ShowSections(true)
+	})
+	var r model.Range
+	var sys units.System
+	h.ui(func() { r, sys = h.w.st.Range, h.w.sys() })
+	r0 := h.w.sections.renders.Load()
+	b.ResetTimer()
+	for i := 0; i < b.N; i++ {
+		var gen uint64
+		h.ui(func() {
+			h.w.slider.SetValue(toDisplay(sweep(r, i), sys))
+			gen = h.w.reqGen
+		})
+		if !h.w.eng.WaitEvaluated(gen, 10*time.Second) {
+			b.Fatal("engine stalled")
+		}
+	}
+	b.StopTimer()
+	b.ReportMetric(float64(h.w.sections.renders.Load()-r0)/float64(b.N), "sections/step")
 }

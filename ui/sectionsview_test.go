@@ -1,6 +1,9 @@
 package ui
 
 import (
+	"os"
+	"path/filepath"
+	"strings"
 	"testing"
 	"time"
 
@@ -141,4 +144,32 @@ func BenchmarkSliderStepWithSections(b *testing.B) {
 	}
 	b.StopTimer()
 	b.ReportMetric(float64(h.w.sections.renders.Load()-r0)/float64(b.N), "sections/step")
+}
+
+// TestExportSectionsFile writes the plan sections from the window in each
+// format, with the caution and every shown size.
+func TestExportSectionsFile(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	dir := t.TempDir()
+	for _, ext := range []string{".svg", ".png", ".pdf"} {
+		path := filepath.Join(dir, "sections"+ext)
+		var err error
+		h.ui(func() { err = h.w.ExportSectionsFile(path) })
+		require.NoError(t, err, ext)
+		b, err := os.ReadFile(path)
+		require.NoError(t, err)
+		require.NotEmpty(t, b)
+		if ext == ".svg" {
+			s := string(b)
+			assert.Contains(t, s, model.Caution)
+			for _, d := range bestShown(h) {
+				first, _, _ := strings.Cut(d, ", ")
+				first, _, _ = strings.Cut(first, " glulam ")
+				assert.Contains(t, s, first)
+			}
+		}
+	}
+	var err error
+	h.ui(func() { err = h.w.ExportSectionsFile(filepath.Join(dir, "sections.gif")) })
+	assert.Error(t, err)
 }

@@ -269,6 +269,9 @@ func (p *planDrawer) rect(x0, y0, x1, y1 vg.Length) vg.Path {
 
 // bodyColours returns the fill of a group's body and the colour of its outline (nil for none).
 func bodyColours(group string) (fill, line color.Color) {
+	if strings.EqualFold(strings.TrimSpace(group), "composite") {
+		return families["steel"].colors[0], nil // a filled tube's steel wall
+	}
 	switch familyFor(group) {
 	case families["steel"]:
 		return families["steel"].colors[0], nil

@@ -2,6 +2,7 @@ package plots
 
 import (
 	"bytes"
+	"image/color"
 	"errors"
 	"math"
 	"path/filepath"
@@ -198,4 +199,32 @@ func BenchmarkRenderPlan1200x500(b *testing.B) {
 	}
 	b.StopTimer()
 	b.ReportMetric(float64(b.Elapsed().Microseconds())/1000/float64(b.N), "ms/render")
+}
+
+// TestPlanFilledTube draws a filled tube (composite): the wall and the fill
+// are both drawn, and together make the gross outline.
+func TestPlanFilledTube(t *testing.T) {
+	sh := PlanSheet{Sections: []PlanSection{{
+		Group: "composite", Title: "Filled box 300", WidthMM: 300, DepthMM: 300,
+		Parts: []PlanPart{
+			{Kind: PartBody, Loops: [][]Point{boxLoop(300, 300), boxLoop(280, 280)}},
+			{Kind: PartFill, Loops: [][]Point{boxLoop(280, 280)}},
+		},
+	}}}
+	l, err := LayoutPlan(&sh, DefaultPlanSize)
+	require.NoError(t, err)
+	require.Len(t, l.Polygons[0], 2)
+	k := l.PxPerMM * l.PxPerMM
+	assert.Equal(t, PartFill, l.Polygons[0][1].Kind)
+	assert.InEpsilon(t, 300*300, (l.Polygons[0][0].Area()+l.Polygons[0][1].Area())/k, 1e-9, "wall 300² − 280², fill 280²")
+	r, err := NewRaster(600, 250)
+	require.NoError(t, err)
+	rl, err := r.RenderPlan(&sh)
+	require.NoError(t, err)
+	// The centre of the fill is drawn in the concrete tint, the wall in steel blue.
+	b := rl.Sections[0]
+	px := r.Image().RGBAAt(int(b.X+b.W/2), int(b.Y+b.H/2))
+	assert.Equal(t, planConcrete, color.NRGBA(px))
+	wall := r.Image().RGBAAt(int(b.X+b.W/2), int(b.Y+1))
+	assert.Equal(t, okabeBlue, color.NRGBA(wall))
 }

@@ -202,21 +202,46 @@ func TestSectionsCharUnderFire(t *testing.T) {
 	assert.Contains(t, sh.Note, "charred")
 }
 
-// TestSectionsProtectionAdds checks that a protection thickness on an
-// outline (set by a fire rating) widens the drawn section by twice the
-// board at the figure's one scale.
+// boarded wraps a family so that its candidates carry a fire-protection
+// board, as a fire rating gives steel (IBC 722.5.1).
+type boarded struct {
+	model.Family
+	mm float64
+}
+
+func (b boarded) Outline(i int, s model.Setting) model.Outline {
+	return b.Family.(model.Outliner).Outline(i, s)
+}
+func (b boarded) ProtectionMM(int, model.Setting) float64 { return b.mm }
+
+// TestSectionsProtectionAdds checks that a protection thickness given by a
+// family (a fire rating) widens the drawn section by twice the board at the
+// figure's one scale, and is labelled.
 func TestSectionsProtectionAdds(t *testing.T) {
-	sh, err := steel.Lookup("W14X90")
+	sc := model.DefaultScheme()
+	sc.Materials = []string{"steel"}
+	m, err := model.New(sc)
 	require.NoError(t, err)
-	o := model.SteelOutline(sh)
-	o.ProtectionMM = 15.9 // 5/8 in board (common practice)
-	st := &model.Static{Designation: sh.Name, FootprintMM: [2]float64{o.WidthMM, o.DepthMM}, MassKgPerM: sh.MassKgPerM()}
-	sheet := plots.PlanSheet{Sections: []plots.PlanSection{PlanSection(o, "steel", st, units.US)}}
+	const board = 15.9 // 5/8 in Type X gypsum board, one layer (common practice)
+	m.Families[0] = boarded{m.Families[0], board}
+	res, err := m.Evaluate(context.Background(), sc.Setting)
+	require.NoError(t, err)
+	sheet, keys := Sections(m, res, SectionsOptions{})
+	require.NotEmpty(t, keys)
+	require.Equal(t, 0, keys[0].Family)
 	l, err := plots.LayoutPlan(&sheet, plots.DefaultPlanSize)
 	require.NoError(t, err)
-	assert.InDelta(t, (o.WidthMM+2*15.9)*l.PxPerMM, l.Sections[0].W, 1e-6)
-	assert.InDelta(t, (o.DepthMM+2*15.9)*l.PxPerMM, l.Sections[0].H, 1e-6)
+	for i, sec := range sheet.Sections {
+		want := 0.0
+		if keys[i].Family == 0 {
+			want = board
+		}
+		assert.InDelta(t, want, sec.ProtectionMM, 1e-12, sec.Title)
+		assert.InDelta(t, (sec.WidthMM+2*want)*l.PxPerMM, l.Sections[i].W, 1e-6, sec.Title)
+		assert.InDelta(t, (sec.DepthMM+2*want)*l.PxPerMM, l.Sections[i].H, 1e-6, sec.Title)
+	}
 	assert.Contains(t, sheet.Sections[0].Lines, "board 0.63 in")
+	assert.Contains(t, sheet.Note, "fire-protection board")
 }
 
 // Golden comparison tolerances, as in the plots package's golden test.

@@ -52,14 +52,29 @@ type Outliner interface {
 	Outline(i int, s Setting) Outline
 }
 
-// OutlineOf returns the plan geometry of candidate i of family f, and false
-// when the family gives none.
+// Protected is a Family whose candidates need a fire-protection enclosure
+// at the scheme's fire rating (for example gypsum board around steel, IBC
+// 722.5.1); OutlineOf draws the board around their outline.
+type Protected interface {
+	// ProtectionMM returns the enclosure thickness of candidate i, mm; 0 for none.
+	ProtectionMM(i int, s Setting) float64
+}
+
+// OutlineOf returns the plan geometry of candidate i of family f, with the
+// protection thickness the family gives when it is Protected, and false
+// when the family gives no geometry.
 func OutlineOf(f Family, i int, s Setting) (Outline, bool) {
 	o, ok := f.(Outliner)
 	if !ok || i < 0 || i >= f.Len() {
 		return Outline{}, false
 	}
-	return o.Outline(i, s), true
+	out := o.Outline(i, s)
+	if p, ok := f.(Protected); ok {
+		if t := p.ProtectionMM(i, s); finite(t) && t > 0 {
+			out.ProtectionMM = t
+		}
+	}
+	return out, true
 }
 
 // Segments used to trace curves: whole circles and quarter arcs.

@@ -145,3 +145,34 @@ func TestFilledTubeFillsTheWall(t *testing.T) {
 	// 8 in square with 2t = 0.93 in corner radius: 64 − (4 − π)·0.93² in².
 	assert.InEpsilon(t, 64-(4-math.Pi)*0.93*0.93, total/steelMM2PerIn2, 1e-4)
 }
+
+// boarded is a steel family with a fire-protection board, as a fire rating gives it.
+type boarded struct {
+	Family
+	mm float64
+}
+
+func (b boarded) Outline(i int, s Setting) Outline      { return b.Family.(Outliner).Outline(i, s) }
+func (b boarded) ProtectionMM(i int, s Setting) float64 { return b.mm }
+
+// TestOutlineOfAddsProtection checks that a Protected family's board
+// thickness reaches the outline, and that a bad one is ignored.
+func TestOutlineOfAddsProtection(t *testing.T) {
+	sc := DefaultScheme()
+	sc.Materials = []string{"steel"}
+	f := allFamilies(t, sc)[0]
+	bare, ok := OutlineOf(f, 0, sc.Setting)
+	require.True(t, ok)
+	assert.Zero(t, bare.ProtectionMM)
+	// 5/8 in (15.9 mm) Type X board, one layer (common practice).
+	o, ok := OutlineOf(boarded{f, 15.9}, 0, sc.Setting)
+	require.True(t, ok)
+	assert.InDelta(t, 15.9, o.ProtectionMM, 1e-12)
+	assert.Equal(t, bare.WidthMM, o.WidthMM, "the bare size is unchanged")
+	for _, bad := range []float64{math.NaN(), math.Inf(1), -3} {
+		o, _ = OutlineOf(boarded{f, bad}, 0, sc.Setting)
+		assert.Zero(t, o.ProtectionMM, "%v", bad)
+	}
+	_, ok = OutlineOf(f, f.Len(), sc.Setting)
+	assert.False(t, ok, "an index past the end gives no outline")
+}

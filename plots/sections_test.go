@@ -2,8 +2,8 @@ package plots
 
 import (
 	"bytes"
-	"image/color"
 	"errors"
+	"image/color"
 	"math"
 	"path/filepath"
 	"strings"

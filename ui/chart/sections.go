@@ -156,7 +156,7 @@ func points(l model.Loop) []plots.Point {
 }
 
 // barSegments traces a bar's circle.
-const barSegments = 20
+const barSegments = 12
 
 // disc returns a polygon of a bar of diameter d centred on (x, y).
 func disc(x, y, d float64) []plots.Point {

@@ -79,8 +79,8 @@ func OutlineOf(f Family, i int, s Setting) (Outline, bool) {
 
 // Segments used to trace curves: whole circles and quarter arcs.
 const (
-	circleSegments = 96
-	arcSegments    = 12
+	circleSegments = 64
+	arcSegments    = 6
 )
 
 // rectLoop returns a w × h rectangle centred on (cx, cy), counter-clockwise.

@@ -3,6 +3,7 @@ package ui
 import (
 	"os"
 	"path/filepath"
+	"runtime"
 	"strings"
 	"testing"
 	"time"
@@ -172,4 +173,38 @@ func TestExportSectionsFile(t *testing.T) {
 	var err error
 	h.ui(func() { err = h.w.ExportSectionsFile(filepath.Join(dir, "sections.gif")) })
 	assert.Error(t, err)
+}
+
+// TestDragWithSectionsKeepsMemoryFlat drags the slider back and forth with
+// the Sections view showing and checks that the live heap does not grow: the
+// view reuses its raster and its image.
+func TestDragWithSectionsKeepsMemoryFlat(t *testing.T) {
+	if testing.Short() {
+		t.Skip("long drag skipped in -short mode")
+	}
+	h := newHarness(t, everyFamily())
+	openSections(t, h)
+	var r model.Range
+	var sys units.System
+	h.ui(func() { r, sys = h.w.st.Range, h.w.sys() })
+	heap := func() uint64 {
+		runtime.GC()
+		var ms runtime.MemStats
+		runtime.ReadMemStats(&ms)
+		return ms.HeapAlloc
+	}
+	const steps = 800
+	var heaps []uint64
+	r0 := h.w.sections.renders.Load()
+	for i := 0; i < steps; i++ {
+		h.ui(func() { h.w.slider.SetValue(toDisplay(sweep(r, i*8), sys)) })
+		h.settle()
+		if i == steps/4 || i == steps-1 {
+			heaps = append(heaps, heap())
+		}
+	}
+	drawn := h.w.sections.renders.Load() - r0
+	t.Logf("%d steps, %d plan figures drawn; live heap at 1/4 and end: %d kB, %d kB", steps, drawn, heaps[0]>>10, heaps[1]>>10)
+	assert.Greater(t, drawn, int64(10), "the view followed the drag")
+	assert.Less(t, int64(heaps[1])-int64(heaps[0]), int64(4<<20), "live heap grew by more than 4 MB")
 }

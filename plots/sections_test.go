@@ -228,3 +228,28 @@ func TestPlanFilledTube(t *testing.T) {
 	wall := r.Image().RGBAAt(int(b.X+b.W/2), int(b.Y+1))
 	assert.Equal(t, okabeBlue, color.NRGBA(wall))
 }
+
+// TestPlanAnySize draws the sample sheet into rasters from tiny to wide and
+// with one very large section beside small ones: nothing panics, the one
+// scale holds and every box stays finite.
+func TestPlanAnySize(t *testing.T) {
+	for _, sz := range [][2]int{{1, 1}, {40, 30}, {200, 100}, {420, 260}, {3000, 300}, {300, 3000}} {
+		for _, huge := range []bool{false, true} {
+			sh := sampleSheet()
+			if huge {
+				sh.Sections[1].WidthMM, sh.Sections[1].DepthMM = 1524, 1524
+			}
+			r, err := NewRaster(sz[0], sz[1])
+			require.NoError(t, err)
+			l, err := r.RenderPlan(&sh)
+			require.NoError(t, err, sz)
+			require.False(t, math.IsNaN(l.PxPerMM) || math.IsInf(l.PxPerMM, 0), sz)
+			for i, b := range l.Sections {
+				for _, v := range []float64{b.X, b.Y, b.W, b.H, b.SlotX, b.SlotY, b.SlotW, b.SlotH} {
+					require.False(t, math.IsNaN(v) || math.IsInf(v, 0), "%v section %d", sz, i)
+				}
+				assert.InDelta(t, sh.Sections[i].WidthMM*l.PxPerMM, b.W, 1e-6, "%v", sz)
+			}
+		}
+	}
+}

@@ -167,14 +167,23 @@ func (v *sectionsView) draw(j *sectionsJob) {
 	m, res := j.snap.Model, j.snap.Result
 	w, h := min(j.w, plots.MaxPixels), min(j.h, plots.MaxPixels)
 	dpi := max(plots.MinDPI, min(plots.MaxDPI, j.dpi))
+	// What the figure shows: each family's best working size (the sheet is
+	// built only when that, the selection, the units or the size changed).
+	var b strings.Builder
+	for fi := range res.Families {
+		if r := res.Families[fi].Best(); r != nil {
+			b.WriteString(r.Static.Designation)
+		}
+		b.WriteByte('|')
+	}
+	key := fmt.Sprintf("%s|%s|%s|%dx%d@%d|%d", b.String(), j.selected, m.Scheme.Units, w, h, dpi, j.snap.SchemeGen)
+	if key == v.lastKey {
+		return
+	}
 	sheet, keys := chart.Sections(m, res, chart.SectionsOptions{Selected: j.selected})
 	names := make([]string, len(keys))
 	for i, k := range keys {
 		names[i] = m.Families[k.Family].Static(k.Index).Designation
-	}
-	key := fmt.Sprintf("%s|%s|%s|%dx%d@%d|%d", strings.Join(names, "|"), j.selected, m.Scheme.Units, w, h, dpi, j.snap.SchemeGen)
-	if key == v.lastKey {
-		return
 	}
 	if v.rast == nil {
 		r, err := plots.NewRaster(w, h)

@@ -16,7 +16,8 @@ const (
 	planGap        = 16  // between slots in a row
 	planRowGap     = 12  // between rows
 	planLabelPad   = 5   // between a section and its labels
-	planMaxRows    = 4   // most rows tried
+	planMaxRows    = 6   // most rows tried
+	planEnough     = 40  // deepest section height that makes a label size good enough
 	planTitleSize  = 13  // sheet title
 	planNameSize   = 9   // section size
 	planLineSize   = 8.5 // further labels
@@ -56,14 +57,12 @@ type planSlot struct {
 
 // planStyles are the text styles of the sheet.
 type planStyles struct {
-	title, name, line, foot, footBold text.Style
+	title, foot, footBold text.Style
 }
 
 func newPlanStyles() planStyles {
 	return planStyles{
 		title:    aligned(textStyle(faceBold, vg.Points(planTitleSize), inkText), draw.XLeft, draw.YTop),
-		name:     aligned(textStyle(faceBold, vg.Points(planNameSize), inkText), draw.XCenter, draw.YTop),
-		line:     aligned(textStyle(faceRegular, vg.Points(planLineSize), inkMuted), draw.XCenter, draw.YTop),
 		foot:     aligned(textStyle(faceRegular, vg.Points(planFootSize), inkMuted), draw.XLeft, draw.YBottom),
 		footBold: aligned(textStyle(faceBold, vg.Points(planFootSize), inkText), draw.XLeft, draw.YBottom),
 	}
@@ -80,6 +79,10 @@ type planDrawer struct {
 	path  vg.Path
 	// labels collects the text drawn for each section, when not nil.
 	labels [][]string
+	// level indexes planLevels: the label sizes in use.
+	level            int
+	nameSty, lineSty text.Style
+	nameH, lineH     vg.Length
 	// noteLines and cautionLines are the footer texts wrapped to the width.
 	noteLines, cautionLines []string
 }
@@ -87,7 +90,40 @@ type planDrawer struct {
 // lineHeight is the spacing of text lines of a size in points.
 func lineHeight(size float64) vg.Length { return vg.Points(size * planLineFactor) }
 
-// prepare builds the slots and measures their labels.
+// planLevels are the label sizes tried, largest first: full labels, then
+// smaller type, then the size alone, so that a small view still shows the
+// sections at a useful scale.
+var planLevels = []struct {
+	name, line float64 // font sizes, points
+	lines      bool    // draw the lines under the title
+}{
+	{planNameSize, planLineSize, true},
+	{7.5, 7, true},
+	{7.5, 7, false},
+	{6.5, 6, false},
+}
+
+// setLevel chooses the label sizes of level k.
+func (p *planDrawer) setLevel(k int) {
+	lv := planLevels[k]
+	p.level = k
+	p.nameSty = aligned(textStyle(faceBold, vg.Points(lv.name), inkText), draw.XCenter, draw.YTop)
+	p.lineSty = aligned(textStyle(faceRegular, vg.Points(lv.line), inkMuted), draw.XCenter, draw.YTop)
+	p.nameH, p.lineH = lineHeight(lv.name), lineHeight(lv.line)
+	for i := range p.slots {
+		sl := &p.slots[i]
+		sl.labelW = p.nameSty.Width(sl.title)
+		sl.labelH = p.nameH
+		if lv.lines {
+			for _, l := range sl.lines {
+				sl.labelW = max(sl.labelW, p.lineSty.Width(l))
+				sl.labelH += p.lineH
+			}
+		}
+	}
+}
+
+// prepare builds the slots and measures their labels at full size.
 func (p *planDrawer) prepare() {
 	s := p.sheet
 	p.slots = p.slots[:0]
@@ -99,15 +135,7 @@ func (p *planDrawer) prepare() {
 		pr := 2 * sec.ProtectionMM
 		p.slots = append(p.slots, planSlot{sec: sec, index: i, wMM: sec.WidthMM + pr, dMM: sec.DepthMM + pr, title: sec.Title, lines: trimLines(sec.Lines)})
 	}
-	for k := range p.slots {
-		sl := &p.slots[k]
-		sl.labelW = p.sty.name.Width(sl.title)
-		sl.labelH = lineHeight(planNameSize)
-		for _, l := range sl.lines {
-			sl.labelW = max(sl.labelW, p.sty.line.Width(l))
-			sl.labelH += lineHeight(planLineSize)
-		}
-	}
+	p.setLevel(0)
 }
 
 // rowsOf splits n slots into r rows of nearly equal count.
@@ -173,22 +201,46 @@ func (p *planDrawer) bestScale(rows [][2]int, w, h vg.Length, labels bool) float
 func (p *planDrawer) layout(area vg.Rectangle) {
 	n := len(p.slots)
 	w, h := area.Max.X-area.Min.X, area.Max.Y-area.Min.Y
+	maxD := 0.0
+	for _, sl := range p.slots {
+		maxD = math.Max(maxD, sl.dMM)
+	}
+	// A level is good enough when the deepest section is drawn at least
+	// this tall; otherwise smaller labels are tried.
+	enough := min(vg.Points(planEnough), h*0.3)
 	var best [][2]int
-	bestS := 0.0
-	for _, labels := range []bool{true, false} {
+	bestS, bestLevel := 0.0, 0
+	for k := range planLevels {
+		p.setLevel(k)
+		var rows [][2]int
+		s := 0.0
 		for r := 1; r <= min(n, planMaxRows); r++ {
-			rows := rowsOf(n, r)
-			if s := p.bestScale(rows, w, h, labels); s > bestS*1.03 {
-				best, bestS = rows, s
+			rr := rowsOf(n, r)
+			if v := p.bestScale(rr, w, h, true); v > s*1.03 {
+				rows, s = rr, v
 			}
 		}
-		if bestS > 0 {
+		if s > bestS {
+			best, bestS, bestLevel = rows, s, k
+		}
+		if vg.Length(s*maxD) >= enough {
 			break
 		}
 	}
 	if bestS == 0 {
+		// Even the smallest labels overflow: fit the sections alone.
+		for r := 1; r <= min(n, planMaxRows); r++ {
+			rr := rowsOf(n, r)
+			if v := p.bestScale(rr, w, h, false); v > bestS*1.03 {
+				best, bestS = rr, v
+			}
+		}
+		bestLevel = len(planLevels) - 1
+	}
+	if bestS == 0 {
 		best, bestS = rowsOf(n, 1), 1e-3
 	}
+	p.setLevel(bestLevel)
 	p.scale = vg.Length(bestS)
 	s := bestS
 	y := area.Max.Y
@@ -475,14 +527,21 @@ func (p *planDrawer) drawSlot(c draw.Canvas, sl *planSlot) {
 		p.drawSection(c, sl.sec, cx, cy)
 	}
 	y := labelTop
+
+	c.FillText(p.nameSty, vg.Point{X: cx, Y: y}, sl.title)
+	y -= p.nameH
 	if p.labels != nil && sl.index >= 0 {
-		p.labels[sl.index] = append(append(p.labels[sl.index][:0], sl.title), sl.lines...)
+		p.labels[sl.index] = append(p.labels[sl.index][:0], sl.title)
 	}
-	c.FillText(p.sty.name, vg.Point{X: cx, Y: y}, sl.title)
-	y -= lineHeight(planNameSize)
+	if !planLevels[p.level].lines {
+		return
+	}
+	if p.labels != nil && sl.index >= 0 {
+		p.labels[sl.index] = append(p.labels[sl.index], sl.lines...)
+	}
 	for _, l := range sl.lines {
-		c.FillText(p.sty.line, vg.Point{X: cx, Y: y}, l)
-		y -= lineHeight(planLineSize)
+		c.FillText(p.lineSty, vg.Point{X: cx, Y: y}, l)
+		y -= p.lineH
 	}
 }
 

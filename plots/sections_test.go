@@ -253,3 +253,26 @@ func TestPlanAnySize(t *testing.T) {
 		}
 	}
 }
+
+// TestPlanSmallViewShrinksLabels checks that a small view trades label
+// lines for scale (the sizes alone are labelled), while the export size
+// keeps every label line.
+func TestPlanSmallViewShrinksLabels(t *testing.T) {
+	sh := sampleSheet()
+	sh.Sections = append(append(sh.Sections, sh.Sections...), sh.Sections...)
+	var buf bytes.Buffer
+	small, err := WritePlan(&buf, PNG, &sh, Size{Width: 400, Height: 200, DPI: 96})
+	require.NoError(t, err)
+	deepest := 0.0
+	for i, b := range small.Sections {
+		deepest = math.Max(deepest, b.H)
+		assert.Equal(t, []string{sh.Sections[i].Title}, small.Labels[i], "the size alone in a small view")
+	}
+	assert.Greater(t, deepest, 20.0, "the sections stay readable")
+
+	l, err := WritePlan(&buf, SVG, &sh, DefaultPlanSize)
+	require.NoError(t, err)
+	for i, sec := range sh.Sections {
+		assert.Equal(t, append([]string{sec.Title}, sec.Lines...), l.Labels[i], "full labels at the export size")
+	}
+}

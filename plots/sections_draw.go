@@ -128,7 +128,11 @@ func (p *planDrawer) prepare() {
 	s := p.sheet
 	p.slots = p.slots[:0]
 	if s.ReferenceMM > 0 {
-		p.slots = append(p.slots, planSlot{index: -1, wMM: s.ReferenceMM, dMM: s.ReferenceMM, title: "Reference", lines: []string{s.ReferenceLabel}})
+		title := s.ReferenceLabel
+		if title == "" {
+			title = "Reference"
+		}
+		p.slots = append(p.slots, planSlot{index: -1, wMM: s.ReferenceMM, dMM: s.ReferenceMM, title: title, lines: []string{"for scale"}})
 	}
 	for i := range s.Sections {
 		sec := &s.Sections[i]

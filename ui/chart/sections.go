@@ -26,8 +26,8 @@ const (
 )
 
 // Sections builds the plan-sections figure at a result: the best working
-// size of each family, in family order, each labelled with its size, family,
-// plan dimensions and weight per length in the scheme's units, all at one
+// size of each family, in family order, each labelled with its size, plan
+// dimensions and weight per length in the scheme's units, all at one
 // scale beside a reference square. It also returns the candidate each
 // drawn section shows, in the same order.
 func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.PlanSheet, []Key) {
@@ -44,7 +44,7 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 		sh.Caution = model.Caution
 	}
 	var keys []Key
-	var none []string
+	var none, undrawn []string
 	mats := map[string]bool{}
 	char, fill, prot := false, false, false
 	for fi := range res.Families {
@@ -56,6 +56,7 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 		f := m.Families[r.Family]
 		o, ok := model.OutlineOf(f, r.Index, res.Setting)
 		if !ok {
+			undrawn = append(undrawn, f.Name()+" ("+r.Static.Designation+")")
 			continue
 		}
 		sec := PlanSection(o, f.Material(), r.Static, sys)
@@ -91,6 +92,9 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 	}
 	if len(none) > 0 {
 		note += " No working size: " + strings.Join(none, ", ") + "."
+	}
+	if len(undrawn) > 0 {
+		note += " Not drawn (no plan geometry yet): " + strings.Join(undrawn, ", ") + "."
 	}
 	sh.Note = note
 	if len(sh.Sections) == 0 {

@@ -322,3 +322,23 @@ func BenchmarkSectionsDemo1200x500(b *testing.B) {
 	b.StopTimer()
 	b.ReportMetric(float64(b.Elapsed().Microseconds())/1000/float64(b.N), "ms/render")
 }
+
+// plain hides a family's outline, as a material without plan geometry would.
+type plain struct{ model.Family }
+
+// TestSectionsNameWhatIsNotDrawn checks that a family without plan geometry
+// is named in the note instead of silently left out.
+func TestSectionsNameWhatIsNotDrawn(t *testing.T) {
+	sc := model.DefaultScheme()
+	sc.Materials = []string{"timber"}
+	m, err := model.New(sc)
+	require.NoError(t, err)
+	m.Families[0] = plain{m.Families[0]}
+	res, err := m.Evaluate(context.Background(), sc.Setting)
+	require.NoError(t, err)
+	sheet, keys := Sections(m, res, SectionsOptions{})
+	for _, k := range keys {
+		assert.NotEqual(t, 0, k.Family)
+	}
+	assert.Contains(t, sheet.Note, "Not drawn (no plan geometry yet): "+m.Families[0].Name())
+}

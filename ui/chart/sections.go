@@ -79,7 +79,8 @@ func Sections(m *model.Model, res *model.Result, opt SectionsOptions) (plots.Pla
 		}
 	}
 	if len(key) > 0 {
-		note += " " + strings.Join(key, ", ") + "."
+		k := strings.Join(key, ", ")
+		note += " " + strings.ToUpper(k[:1]) + k[1:] + "."
 	}
 	if char {
 		note += " Dark: the layer charred in the fire rating."

@@ -21,8 +21,8 @@ func init() { RegisterCommand("sections", runSections) }
 // family's best working size lies in the figure, at one scale.
 type SectionsJSON struct {
 	PxPerMM  float64           `json:"px_per_mm"`
-	WidthPx  int               `json:"width_px"`  // figure size in pixels (the PNG)
-	HeightPx int               `json:"height_px"` //
+	WidthPx  int               `json:"width_px"`  // figure width in pixels (the PNG's)
+	HeightPx int               `json:"height_px"` // figure height in pixels
 	LengthMM float64           `json:"length_mm"` // unbraced length the sizes work at
 	Sections []SectionLayout   `json:"sections"`
 	Caution  string            `json:"caution"`

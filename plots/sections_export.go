@@ -5,6 +5,7 @@ import (
 	"bytes"
 	"encoding/xml"
 	"fmt"
+	"image/color"
 	"io"
 	"os"
 	"strings"
@@ -42,8 +43,11 @@ func (r *Raster) RenderPlan(s *PlanSheet) (PlanLayout, error) {
 	r.ctx.SetDash()
 	r.ctx.SetLineCapButt()
 	cv := vgimg.NewWith(vgimg.UseImageWithContext(r.img, r.ctx), vgimg.UseDPI(r.dpi))
+	_, h := cv.Size()
+	mt := &maskedText{Canvas: cv, img: r.img, dpi: float64(r.dpi), h: h, keep: planMasks}
+	mt.ink.C = color.Black
 	p := newPlanDrawer(s)
-	c := draw.New(cv)
+	c := draw.New(mt)
 	p.draw(c, false)
 	return p.result(r.dpi, c.Max.Y, false), nil
 }

@@ -6,11 +6,13 @@ import (
 	"image/color"
 	"math"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
+	"gonum.org/v1/plot/font"
 )
 
 // ringLoop returns a circle of diameter d as an n-gon about the origin.
@@ -275,4 +277,37 @@ func TestPlanSmallViewShrinksLabels(t *testing.T) {
 	for i, sec := range sh.Sections {
 		assert.Equal(t, append([]string{sec.Title}, sec.Lines...), l.Labels[i], "full labels at the export size")
 	}
+}
+
+// TestPlanLabelsAreDrawn checks that every section's labels leave ink under
+// it in the raster (they are drawn from cached masks), and that the mask
+// cache stays bounded.
+func TestPlanLabelsAreDrawn(t *testing.T) {
+	sh := sampleSheet()
+	r, err := NewRaster(1200, 500)
+	require.NoError(t, err)
+	for pass := 0; pass < 2; pass++ { // the second pass draws from the cache
+		l, err := r.RenderPlan(&sh)
+		require.NoError(t, err)
+		img := r.Image()
+		for i, b := range l.Sections {
+			ink := 0
+			for y := int(b.Y + b.H + 2); y < int(b.SlotY+b.SlotH); y++ {
+				for x := int(b.SlotX); x < int(b.SlotX+b.SlotW); x++ {
+					if c := img.RGBAAt(x, y); int(c.R)+int(c.G)+int(c.B) < 3*128 {
+						ink++
+					}
+				}
+			}
+			assert.Greater(t, ink, 40, "pass %d: labels of %s", pass, sh.Sections[i].Title)
+		}
+	}
+	face := font.DefaultCache.Lookup(planText.foot.Font, planText.foot.Font.Size)
+	for i := 0; i < 3*maxTextMasks; i++ {
+		planMasks.get(face, 96, strconv.Itoa(i))
+	}
+	planMasks.mu.Lock()
+	n := len(planMasks.m)
+	planMasks.mu.Unlock()
+	assert.LessOrEqual(t, n, maxTextMasks)
 }

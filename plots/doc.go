@@ -15,4 +15,9 @@
 // and when printed in grey. The demand is a thick black dashed line. The y axis
 // starts at zero and is capped at DemandCapFactor times the largest demand so
 // that one very strong candidate does not flatten the others.
+//
+// The package also draws the plan-sections sheet (PlanSheet): candidates'
+// plan sections side by side at one scale with a reference square and a
+// scale bar, into a Raster (RenderPlan) or to PNG, SVG or PDF (WritePlan,
+// SavePlan), reporting where each section lies (PlanLayout).
 package plots

@@ -180,7 +180,20 @@ func (p *planDrawer) layout(area vg.Rectangle) {
 	p.setLevel(bestLevel)
 	p.scale = vg.Length(bestS)
 	s := bestS
-	y := area.Max.Y
+	// Centre the rows in the height left over.
+	used := vg.Length(0)
+	for ri, r := range best {
+		dh, lh := vg.Length(0), vg.Length(0)
+		for k := r[0]; k < r[1]; k++ {
+			dh = max(dh, vg.Length(p.slots[k].dMM*s))
+			lh = max(lh, p.slots[k].labelH)
+		}
+		used += dh + vg.Points(planLabelPad) + lh
+		if ri > 0 {
+			used += vg.Points(planRowGap)
+		}
+	}
+	y := area.Max.Y - max(0, (h-used)/2)
 	for _, r := range best {
 		rw, dh, lh := vg.Length(0), vg.Length(0), vg.Length(0)
 		for k := r[0]; k < r[1]; k++ {

@@ -11,6 +11,7 @@ import (
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
 	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/driver/desktop"
 	"fyne.io/fyne/v2/widget"
 
 	"upright/plots"
@@ -246,6 +247,9 @@ func newSectionsArea(v *sectionsView) *sectionsArea {
 func (a *sectionsArea) CreateRenderer() fyne.WidgetRenderer {
 	return widget.NewSimpleRenderer(a.v.raster)
 }
+
+// Cursor shows a pointing hand: the sections can be tapped.
+func (a *sectionsArea) Cursor() desktop.Cursor { return desktop.PointerCursor }
 
 // Tapped selects the candidate whose section (or its labels) was tapped.
 func (a *sectionsArea) Tapped(e *fyne.PointEvent) {

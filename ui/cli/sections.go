@@ -46,6 +46,7 @@ type SectionLayout struct {
 
 // sectionsLegend explains the JSON fields.
 var sectionsLegend = map[string]string{
+	"px":                  "pixels of the PNG (width_px × height_px at 96 dpi); in the SVG and PDF the same positions are in points × 96/72",
 	"x_px, y_px":          "top-left corner of the drawn section, pixels from the figure's top-left corner",
 	"width_px, height_px": "drawn size, fire-protection board included: (width_mm + 2 protection_mm) × px_per_mm",
 	"width_mm, height_mm": "plan size of the bare section (the footprint)",

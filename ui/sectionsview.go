@@ -43,7 +43,6 @@ type sectionsView struct {
 	job     *sectionsJob
 	wake    chan struct{}
 	quit    chan struct{}
-	done    chan struct{}
 	closed  atomic.Bool
 	rast    *plots.Raster // owned by the worker
 	lastKey string        // owned by the worker
@@ -60,7 +59,7 @@ type sectionsJob struct {
 
 // newSectionsView builds the view and starts its drawing goroutine.
 func newSectionsView(w *Window) *sectionsView {
-	v := &sectionsView{w: w, wake: make(chan struct{}, 1), quit: make(chan struct{}), done: make(chan struct{})}
+	v := &sectionsView{w: w, wake: make(chan struct{}, 1), quit: make(chan struct{})}
 	v.raster = canvas.NewRaster(func(pw, ph int) image.Image {
 		if pw != v.wantW || ph != v.wantH {
 			v.wantW, v.wantH = pw, ph
@@ -136,17 +135,17 @@ func (v *sectionsView) request() {
 	poke(v.wake)
 }
 
-// close stops the worker and waits for it.
+// close stops the worker. It does not wait: the worker may be waiting for
+// the UI goroutine that is closing the window; it ends on its own, and
+// hands nothing more to the window once closed.
 func (v *sectionsView) close() {
 	if v.closed.Swap(true) {
 		return
 	}
 	close(v.quit)
-	<-v.done
 }
 
 func (v *sectionsView) loop() {
-	defer close(v.done)
 	for {
 		select {
 		case <-v.quit:

@@ -22,4 +22,9 @@
 // winner changes, cross-hatched grey where nothing works, the scheme's own
 // point, a legend and the caution line; into a reusable MapRaster or to
 // PNG, SVG or PDF (WriteMap, SaveMap).
+//
+// The package also draws the plan-sections sheet (PlanSheet): candidates'
+// plan sections side by side at one scale with a reference square and a
+// scale bar, into a Raster (RenderPlan) or to PNG, SVG or PDF (WritePlan,
+// SavePlan), reporting where each section lies (PlanLayout).
 package plots

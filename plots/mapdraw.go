@@ -133,7 +133,7 @@ func (k *mapComposer) draw(c draw.Canvas, m *Map, fill bool) {
 	width := inner.Max.X - inner.Min.X
 
 	// Caution along the bottom, wrapped to the width.
-	k.lines = wrapText(k.lines[:0], k.caution, m.Caution, width)
+	k.lines = wrapMapText(k.lines[:0], k.caution, m.Caution, width)
 	lh := k.caution.Height("Ag") * 1.15
 	if len(k.lines) > 0 {
 		y := inner.Min.Y + lh*vg.Length(len(k.lines))
@@ -166,8 +166,8 @@ func (k *mapComposer) draw(c draw.Canvas, m *Map, fill bool) {
 	k.drawLegend(col, m)
 }
 
-// wrapText splits s into lines no wider than width in sty, appending to out.
-func wrapText(out []string, sty text.Style, s string, width vg.Length) []string {
+// wrapMapText splits s into lines no wider than width in sty, appending to out.
+func wrapMapText(out []string, sty text.Style, s string, width vg.Length) []string {
 	words := strings.Fields(s)
 	line := ""
 	for _, w := range words {

@@ -144,7 +144,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		widget.NewLabelWithStyle("Crossovers", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
 		w.xsStatus, w.xsAllCheck)
 	xsPanel := container.NewBorder(xsHead, nil, nil, nil, w.xsList)
-	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, chartStack), xsPanel
+	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, w.plotViews(chartStack)), xsPanel
 }
 
 // markerInk is the colour of the current-length marker.

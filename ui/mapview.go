@@ -109,8 +109,8 @@ func (s *mapSurface) Tapped(ev *fyne.PointEvent) {
 // mapViewEnv, set to "map", opens the window on the Map view (for screenshots).
 const mapViewEnv = "UPRIGHT_VIEW"
 
-// withMapView puts the chart and the Map view side by side as tabs and
-// starts the map's worker.
+// withMapView adds the Map view as a tab beside the chart (and the
+// Sections view, when the window has it) and starts the map's worker.
 func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 	mv := &mapView{w: w, wake: make(chan struct{}, 1), quit: make(chan struct{}), done: make(chan struct{})}
 	w.mapv = mv
@@ -139,17 +139,37 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 	export := widget.NewButton("Export…", w.ExportMap)
 	foot := container.NewBorder(nil, nil, nil, container.NewHBox(mv.inReport, export, fixedWidth(160, mv.progress)), mv.status)
 	view := container.NewBorder(nil, foot, nil, nil, mv.surface)
-	tabs := container.NewAppTabs(container.NewTabItem("Chart", chartArea), container.NewTabItem("Map", view))
-	tabs.OnSelected = func(t *container.TabItem) {
-		mv.visible = t.Text == "Map"
-		mv.submit()
+	item := container.NewTabItem("Map", view)
+	show := os.Getenv(mapViewEnv) == "map"
+	out := chartArea
+	if tabs := w.sectionsTabs; tabs != nil {
+		// One row of tabs above the slider: Chart, Sections, Map.
+		prev := tabs.OnSelected
+		tabs.Append(item)
+		tabs.OnSelected = func(t *container.TabItem) {
+			if prev != nil {
+				prev(t)
+			}
+			mv.visible = t == item
+			mv.submit()
+		}
+		if show {
+			tabs.Select(item)
+		}
+	} else {
+		tabs := container.NewAppTabs(container.NewTabItem("Chart", chartArea), item)
+		tabs.OnSelected = func(t *container.TabItem) {
+			mv.visible = t == item
+			mv.submit()
+		}
+		if show {
+			tabs.Select(item)
+		}
+		out = tabs
 	}
-	if os.Getenv(mapViewEnv) == "map" {
-		tabs.SelectIndex(1)
-		mv.visible = true
-	}
+	mv.visible = show
 	go mv.loop()
-	return tabs
+	return out
 }
 
 // close stops the worker, cancelling any map being computed.

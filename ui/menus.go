@@ -46,6 +46,7 @@ func (w *Window) mainMenu() *fyne.MainMenu {
 		fileItem("Export client report (PDF)…", shortcutExport, ExportHook != nil, w.Export),
 		fyne.NewMenuItem("Export candidate table (CSV)…", w.ExportCSV),
 		fyne.NewMenuItem("Export chart (PNG, SVG or PDF)…", w.ExportChart),
+		fyne.NewMenuItem("Export plan sections (PNG, SVG or PDF)…", w.ExportSections),
 		fyne.NewMenuItemSeparator(),
 		fyne.NewMenuItem("Start again from the demo scheme", func() { w.LoadScheme(DemoScheme()) }),
 	)

@@ -103,6 +103,9 @@ type Window struct {
 	xsStatus    *widget.Label
 	xsAllCheck  *widget.Check
 
+	sections     *sectionsView      // the Sections tab beside the chart
+	sectionsTabs *container.AppTabs // the chart and Sections tabs
+
 	// results
 	table       *liveTable
 	tableSys    units.System // units of the headers shown
@@ -180,6 +183,7 @@ func (w *Window) Close() {
 	unregisterWindow(w)
 	w.eng.Close()
 	w.mapv.close()
+	w.sections.close()
 	w.win.Close()
 }
 
@@ -324,6 +328,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	newScheme := w.snap == nil || w.snap.SchemeGen != s.SchemeGen
 	w.snap = s
 	w.refreshRows()
+	w.sections.show(s)
 	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()

@@ -115,6 +115,7 @@ func usage(w io.Writer) {
   upright curve --designation NAME --from 1m --to 10m [flags]
   upright map --length-range 1m..12m --load-range 500kN..5000kN [--steps 100x60] [flags] --out map.png (or --json)
   upright report --scheme FILE --out report.pdf
+  upright sections [flags] --out FILE  plan sections to one scale (.png, .svg or .pdf; --json for the layout)
   upright table [flags] --csv table.csv
   upright scheme [flags] --out FILE     write the scheme built from the flags as a file
   upright --version

@@ -319,7 +319,7 @@ func fireProtect(sc *Scheme, f Family, i int, hours float64) (Static, error) {
 	bare := f.Static(i)
 	switch f.Material() {
 	case "steel":
-		o, err := SteelOutlineOf(bare.Family)
+		o, err := BoardOutlineOf(bare.Family)
 		if err != nil {
 			return Static{}, err
 		}
@@ -380,3 +380,12 @@ func fireBare(bare *Static, hours float64) *FireCheck {
 
 // fireRound rounds a reported hour figure to 0.01 h.
 func fireRound(h float64) float64 { return math.Round(h*100) / 100 }
+
+// ProtectionMM implements Protected: the board thickness around candidate i,
+// mm, or 0 when the fire rule adds no enclosure (concrete, timber, no rating).
+func (f *fireFamily) ProtectionMM(i int, _ Setting) float64 {
+	if fc := f.static[i].Fire; fc != nil && fc.OK {
+		return fc.ThicknessMM
+	}
+	return 0
+}

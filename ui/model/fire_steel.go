@@ -6,9 +6,9 @@ import (
 	"upright/steel/fire"
 )
 
-// SteelOutline is the plan outline of a steel section as the board
+// BoardOutline is the plan outline of a steel section as the board
 // enclosure sees it (fire.Profile, fire.Box or fire.Round).
-type SteelOutline = fire.Outline
+type BoardOutline = fire.Outline
 
 // Outlines of steel sections for callers outside this file.
 const (
@@ -16,9 +16,9 @@ const (
 	fireRoundOutline = fire.Round
 )
 
-// SteelOutlineOf maps a steel family name to its outline: W and HP are
+// BoardOutlineOf maps a steel family name to its outline: W and HP are
 // I-shaped profiles, round HSS and pipe are round, the other HSS are boxes.
-func SteelOutlineOf(family string) (SteelOutline, error) {
+func BoardOutlineOf(family string) (BoardOutline, error) {
 	switch family {
 	case "W", "HP":
 		return fire.Profile, nil
@@ -45,7 +45,7 @@ const (
 // short, st.Fire says so and the candidate is not permitted. Other materials
 // with a steel shell (filled HSS) may call it with the shell's mass alone,
 // which ignores the core and errs on the safe side.
-func ProtectSteel(st Static, o SteelOutline, steelKgPerM, hours float64) (Static, error) {
+func ProtectSteel(st Static, o BoardOutline, steelKgPerM, hours float64) (Static, error) {
 	fc := fireBare(&st, hours)
 	a, b := st.FootprintMM[0]/steelMMPerIn, st.FootprintMM[1]/steelMMPerIn
 	d, err := fire.HeatedPerimeterIn(o, a, b)

@@ -38,6 +38,7 @@ func compose(f *facts) *doc {
 	titleBlock(d, f, name)
 	d.panel("Preliminary sizing, not a design", model.Caution+" The full cautions are at the end of this report.", sizeBody-0.5)
 	summary(d, f)
+	sectionsFigure(d, f)
 	inputs(d, f)
 	chartSection(d, f)
 	mapSection(d, f)

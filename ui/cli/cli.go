@@ -14,14 +14,12 @@ import (
 	"upright/plots"
 	"upright/ui/chart"
 	"upright/ui/model"
+	"upright/ui/schemefile"
 	"upright/ui/units"
 )
 
 // Version is the program's version, shown by --version and the about box.
 const Version = "0.1.0"
-
-// Commands lists the headless subcommands.
-var Commands = []string{"compare", "crossovers", "curve"}
 
 // IsCommand reports whether args start with a headless subcommand or a top-level flag.
 func IsCommand(args []string) bool {
@@ -32,28 +30,20 @@ func IsCommand(args []string) bool {
 	case "--version", "-version", "version", "help", "-h", "--help":
 		return true
 	}
-	for _, c := range Commands {
-		if args[0] == c {
-			return true
-		}
-	}
-	if _, ok := extraCommands[args[0]]; ok {
+	if lookup(args[0]) != nil {
 		return true
 	}
 	return strings.HasPrefix(args[0], "-")
 }
 
-// LoadScheme reads a scheme file; set by the scheme-file package when linked in.
-var LoadScheme func(path string) (model.Scheme, error)
-
 // Run runs a headless command and returns the process exit status: 0 on
-// success, 1 on a failure while computing or writing, 2 on bad input.
+// success, 1 on a failure while computing or writing, 2 on bad input (a
+// *UsageError or a *model.FieldError, found by type, never by message text).
 func Run(args []string, stdout, stderr io.Writer) int {
 	if len(args) == 0 {
 		usage(stderr)
 		return 2
 	}
-	var err error
 	switch args[0] {
 	case "--version", "-version", "version":
 		fmt.Fprintf(stdout, "upright %s\n", Version)
@@ -61,66 +51,29 @@ func Run(args []string, stdout, stderr io.Writer) int {
 	case "help", "-h", "--help":
 		usage(stdout)
 		return 0
-	case "compare":
-		err = runCompare(args[1:], stdout, stderr)
-	case "crossovers":
-		err = runCrossovers(args[1:], stdout, stderr)
-	case "curve":
-		err = runCurve(args[1:], stdout, stderr)
-	default:
-		if extra, ok := extraCommands[args[0]]; ok {
-			err = extra(args[1:], stdout, stderr)
-			break
-		}
-		fmt.Fprintf(stderr, "upright: unknown command %q; commands are %s\n", args[0], strings.Join(commandNames(), ", "))
+	}
+	c := lookup(args[0])
+	if c == nil {
+		fmt.Fprintf(stderr, "upright: unknown command %q; commands are %s\n", args[0], strings.Join(CommandNames(), ", "))
 		return 2
 	}
-	if err == nil {
-		return 0
-	}
-	if errors.Is(err, flag.ErrHelp) {
+	err := c.run(args[1:], stdout, stderr)
+	if err == nil || errors.Is(err, flag.ErrHelp) {
 		return 0
 	}
 	fmt.Fprintf(stderr, "upright %s: %v\n", args[0], err)
+	return ExitStatus(err)
+}
+
+// ExitStatus is the exit status for an error: 2 for bad input (a *UsageError
+// or a *model.FieldError anywhere in its chain), 1 for anything else.
+func ExitStatus(err error) int {
 	var ue *UsageError
 	var fe *model.FieldError
-	if errors.As(err, &ue) || errors.As(err, &fe) || strings.Contains(err.Error(), "flag provided but not defined") || strings.Contains(err.Error(), "invalid") {
+	if errors.As(err, &ue) || errors.As(err, &fe) {
 		return 2
 	}
 	return 1
-}
-
-// extraCommands are commands registered by other packages (report).
-var extraCommands = map[string]func(args []string, stdout, stderr io.Writer) error{}
-
-// RegisterCommand adds a headless subcommand.
-func RegisterCommand(name string, run func(args []string, stdout, stderr io.Writer) error) {
-	extraCommands[name] = run
-}
-
-func commandNames() []string {
-	out := append([]string{}, Commands...)
-	for k := range extraCommands {
-		out = append(out, k)
-	}
-	return out
-}
-
-func usage(w io.Writer) {
-	fmt.Fprintf(w, `upright %s: column scheme comparison (steel, concrete, timber)
-
-  upright                       open the window
-  upright compare [flags]       lightest working size of each family at one length
-  upright crossovers [flags]    lengths where the answer changes
-  upright curve --designation NAME --from 1m --to 10m [flags]
-  upright report --scheme FILE --out report.pdf
-  upright table [flags] --csv table.csv
-  upright scheme [flags] --out FILE     write the scheme built from the flags as a file
-  upright --version
-
-Run "upright compare -h" for the scheme flags.
-%s
-`, Version, model.Caution)
 }
 
 // schemeFrom parses flags into a scheme, starting from --scheme or the default.
@@ -136,10 +89,7 @@ func schemeFrom(f *schemeFlags, args []string) (model.Scheme, error) {
 	}
 	base := model.DefaultScheme()
 	if f.scheme != "" {
-		if LoadScheme == nil {
-			return base, usagef("--scheme %q: scheme files are not supported in this build", f.scheme)
-		}
-		sc, err := LoadScheme(f.scheme)
+		sc, err := schemefile.Load(f.scheme)
 		if err != nil {
 			return base, usagef("--scheme %q: %v", f.scheme, err)
 		}

@@ -58,7 +58,7 @@ type InputError struct {
 
 // Error returns the message naming the field, the value and the accepted range.
 func (e *InputError) Error() string {
-	return fmt.Sprintf("concrete: %s = %s is not accepted; %s", e.Field, e.Value, e.Accepted)
+	return fmt.Sprintf("concrete: %s = %s is not accepted; give %s", e.Field, e.Value, e.Accepted)
 }
 
 func badInput(field string, v float64, accepted string) error {

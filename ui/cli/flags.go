@@ -122,6 +122,9 @@ func flagErr(flagName, value string, err error) error {
 // build turns the parsed flags into a scheme, starting from base.
 func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 	sc := base
+	if err := f.refuseEmpty(); err != nil {
+		return sc, err
+	}
 	s := &sc.Setting
 	lengthSet := false
 	if f.length != "" {
@@ -214,7 +217,7 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 	}
 	if err := sc.Validate(); err != nil {
 		if fe, ok := err.(*model.FieldError); ok {
-			return sc, usagef("%s %q: not accepted; give %s", fe.Field, fe.Value, fe.Accepted)
+			return sc, f.fieldUsage(fe)
 		}
 		return sc, err
 	}
@@ -223,7 +226,7 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 
 func (f *schemeFlags) buildLoad(sc *model.Scheme) error {
 	takedown := f.tributary != "" || f.floors != "" || f.dead != "" || f.live != "" ||
-		f.roofDead != "" || f.roofLive != "" || f.snow != ""
+		f.roofDead != "" || f.roofLive != "" || f.snow != "" || f.kll != "" || f.occupancy != "" || f.set("no-reduction")
 	if f.load != "" && takedown {
 		return usagef("--load %q: give either --load or the takedown flags (--tributary, --floors, --dead, ...), not both", f.load)
 	}
@@ -303,6 +306,9 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 		if err != nil {
 			return flagErr("fy", f.fy, err)
 		}
+		if !(v >= model.FyMinMPa && v <= model.FyMaxMPa) {
+			return usagef("--fy %q: not accepted; give %s", f.fy, model.FyAccepted)
+		}
 		sc.Steel.FyMPa = v
 	}
 	if f.steelFamilies != "" {
@@ -325,6 +331,9 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 			} else {
 				return flagErr("fc", f.fc, err)
 			}
+		}
+		if !(v >= model.FcMinMPa && v <= model.FcMaxMPa) {
+			return usagef("--fc %q: not accepted; give %s", f.fc, model.FcAccepted)
 		}
 		c.FcMPa = v
 	}
@@ -494,4 +503,44 @@ func (f *schemeFlags) buildCarbon(sc *model.Scheme) error {
 	}
 	sc.Carbon = cf
 	return nil
+}
+
+// refuseEmpty refuses a text flag given with an empty value: only a flag
+// left out takes its default.
+func (f *schemeFlags) refuseEmpty() error {
+	var err error
+	f.fs.Visit(func(fl *flag.Flag) {
+		g, ok := fl.Value.(flag.Getter)
+		if !ok || err != nil {
+			return
+		}
+		if s, ok := g.Get().(string); ok && strings.TrimSpace(s) == "" {
+			err = usagef("--%s: an empty value is not accepted; give a value (%s), or leave the flag out for its default", fl.Name, fl.Usage)
+		}
+	})
+	return err
+}
+
+// fieldFlags maps the model's field names to the flags that set them.
+var fieldFlags = map[string]string{
+	"length": "length", "weak-axis length": "weak-length", "ends": "ends", "K": "k", "method": "method",
+	"load": "load", "tributary": "tributary", "floors": "floors", "dead": "dead", "live": "live",
+	"roof-dead": "roof-dead", "roof-live": "roof-live", "snow": "snow", "kll": "kll", "occupancy": "occupancy",
+	"materials": "materials", "units": "units", "rank": "rank",
+	"steel Fy": "fy", "steel families": "steel-families", "f'c": "fc", "bar grade": "bar-grade",
+	"rho-max": "rho-max", "transverse": "transverse", "m1m2": "m1m2", "beta-dns": "beta-dns", "EI method": "ei",
+	"fire": "fire", "fire sides": "fire-sides", "duration": "duration", "species": "species", "grade": "grade",
+}
+
+// fieldUsage turns a model check failure into a usage error naming the flag
+// and the text typed, or the scheme field when no flag set it.
+func (f *schemeFlags) fieldUsage(fe *model.FieldError) error {
+	if name, ok := fieldFlags[fe.Field]; ok && f.set(name) {
+		typed := f.fs.Lookup(name).Value.String()
+		return usagef("--%s %q: not accepted; give %s", name, typed, fe.Accepted)
+	}
+	if strings.HasPrefix(fe.Field, "carbon factor") && f.set("carbon") {
+		return usagef("--carbon %q: not accepted; give %s", f.carbon, fe.Accepted)
+	}
+	return usagef("%s %q (from the scheme): not accepted; give %s", fe.Field, fe.Value, fe.Accepted)
 }

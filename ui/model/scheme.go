@@ -70,7 +70,7 @@ type FieldError struct {
 }
 
 func (e *FieldError) Error() string {
-	return fmt.Sprintf("%s: %q is not accepted; %s", e.Field, e.Value, e.Accepted)
+	return fmt.Sprintf("%s: %q is not accepted; give %s", e.Field, e.Value, e.Accepted)
 }
 
 func bad(field string, v any, accepted string) error {

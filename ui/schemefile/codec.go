@@ -9,6 +9,7 @@ import (
 	"strings"
 
 	"upright/ui/model"
+	"upright/ui/units"
 )
 
 // FormatName is the value of every scheme file's "format" field.
@@ -377,7 +378,9 @@ func (r *reader) num(n *node, path, key, give string) (float64, error) {
 	return r.numberOf(v, fp, give)
 }
 
-// optNum reads a number where null means 0 (the model's default).
+// optNum reads a number where null means 0 (the model's default); a number
+// given as 0 is refused, since only null (or, for new fields, absence) means
+// the default.
 func (r *reader) optNum(n *node, path, key, give string) (float64, error) {
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
@@ -389,7 +392,11 @@ func (r *reader) optNum(n *node, path, key, give string) (float64, error) {
 	if v.kind != kindNumber {
 		return 0, r.errAt(v, fp, fmt.Sprintf("expected a number or null; found %s; give %s", v.kind, give))
 	}
-	return r.numberOf(v, fp, give)
+	x, err := r.numberOf(v, fp, give)
+	if err == nil && x == 0 {
+		return 0, r.errAt(v, fp, fmt.Sprintf("%s is not accepted; give %s", v.num, give))
+	}
+	return x, err
 }
 
 // integer reads a whole number.
@@ -409,7 +416,7 @@ func (r *reader) integer(n *node, path, key, give string) (int, error) {
 }
 
 func (r *reader) quantity(n *node, path, key string, k kind) (float64, error) {
-	give := fmt.Sprintf("a %s with its unit, e.g. %s", k.name, k.example)
+	give := fmt.Sprintf("%s with its unit, e.g. %s", units.Article(k.name), k.example)
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
 		return 0, err
@@ -424,9 +431,10 @@ func (r *reader) quantity(n *node, path, key string, k kind) (float64, error) {
 	return x, nil
 }
 
-// optQuantity reads a quantity where null means 0 (the model's default).
+// optQuantity reads a quantity where null means 0 (the model's default); a
+// quantity given as zero is refused, since only null means the default.
 func (r *reader) optQuantity(n *node, path, key string, k kind, null string) (float64, error) {
-	give := fmt.Sprintf("a %s with its unit, e.g. %s, or null for %s", k.name, k.example, null)
+	give := fmt.Sprintf("%s with its unit, e.g. %s, or null for %s", units.Article(k.name), k.example, null)
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
 		return 0, err
@@ -438,6 +446,9 @@ func (r *reader) optQuantity(n *node, path, key string, k kind, null string) (fl
 		x, err := k.read(v.str)
 		if err != nil {
 			return 0, r.errAt(v, fp, err.Error())
+		}
+		if x == 0 {
+			return 0, r.errAt(v, fp, fmt.Sprintf("%q is not accepted; give %s", v.str, give))
 		}
 		return x, nil
 	}

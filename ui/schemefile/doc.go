@@ -19,6 +19,9 @@
 //
 // Dimensionless values (k, kll, rho_max, m1_m2, beta_dns) are JSON numbers;
 // counts (floors, bar_grade, fire_sides) are whole JSON numbers.
+// Where null means a default (k, kll, fy, fc, duration), only null means it:
+// a value given there is checked against its range like any other, so 0 or
+// "0 psi" is refused rather than read as the default.
 //
 //	{
 //	  "format": "upright-scheme",      always this string

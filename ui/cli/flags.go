@@ -54,7 +54,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.load, "load", "", "axial load, e.g. 1800kN, 400kip (factored for LRFD, service for ASD)")
 	fs.StringVar(&f.method, "method", "", "lrfd or asd (default lrfd)")
 	fs.StringVar(&f.materials, "materials", "", "comma list of "+strings.Join(model.Materials(), ", ")+" (default all)")
-	fs.StringVar(&f.units, "units", "", "units shown: us or si (default us)")
+	fs.StringVar(&f.units, "units", "", "units shown: us or si (default those of --length, else of the scheme file, else us)")
 	fs.StringVar(&f.rank, "rank", "", "ranking metric: weight, footprint or carbon (default weight)")
 	fs.BoolVar(&f.selfWeight, "self-weight", true, "add the column's own weight to the demand")
 
@@ -192,6 +192,8 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 		if u != model.US && u != model.SI {
 			return sc, usagef("--units %q: not accepted; give us or si", f.units)
 		}
+		sc.Units = u
+	} else if u, ok := f.typedUnits(); ok {
 		sc.Units = u
 	}
 	if f.rank != "" {
@@ -503,6 +505,21 @@ func (f *schemeFlags) buildCarbon(sc *model.Scheme) error {
 	}
 	sc.Carbon = cf
 	return nil
+}
+
+// typedUnits is the unit system the user typed in: that of --length, else
+// (with no --scheme, whose own units stand) that of --load or --tributary.
+func (f *schemeFlags) typedUnits() (model.Units, bool) {
+	typed := []string{f.length}
+	if f.scheme == "" {
+		typed = append(typed, f.load, f.tributary)
+	}
+	for _, s := range typed {
+		if sys, ok := units.SystemOf(s); ok {
+			return model.Units(sys), true
+		}
+	}
+	return "", false
 }
 
 // refuseEmpty refuses a text flag given with an empty value: only a flag

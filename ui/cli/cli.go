@@ -103,6 +103,7 @@ type Candidate struct {
 	Material    string         `json:"material"`
 	Family      string         `json:"family"`
 	Designation string         `json:"designation"`
+	Status      string         `json:"status"` // works, fails or not permitted (model.Row.Status)
 	OK          bool           `json:"ok"`
 	Permitted   bool           `json:"permitted"`
 	CapacityKN  float64        `json:"capacity_kN"`
@@ -179,7 +180,7 @@ func NewCandidate(m *model.Model, r *model.Row, s model.Setting) Candidate {
 	d := m.Detail(r.Family, r.Index, s)
 	c := Candidate{
 		Material: f.Material(), Family: f.Name(), Designation: r.Static.Designation,
-		OK: r.OK, Permitted: r.Permitted,
+		Status: r.Status(), OK: r.OK, Permitted: r.Permitted,
 		CapacityKN: round(r.CapacityN/1e3, 2), DemandKN: round(r.DemandN/1e3, 2),
 		MassKgPerM: round(r.Static.MassKgPerM, 2), MassKg: round(r.Static.MassKgPerM*s.LengthMM/1000, 1),
 		FootprintMM: [2]float64{round(r.Static.FootprintMM[0], 1), round(r.Static.FootprintMM[1], 1)},
@@ -320,13 +321,7 @@ func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System
 	}
 	fmt.Fprintf(tw, "Status\tFamily\tSize\tPlan\tWeight (%s)\tCapacity (%s)\tDemand (%s)\tUtil\tGoverning\tSlenderness\n", wu, fu, fu)
 	for _, r := range rows {
-		status := "OK"
-		if !r.OK {
-			status = "FAILS"
-			if !r.Permitted {
-				status = "NOT PERMITTED"
-			}
-		}
+		status := r.Status()
 		capV, _ := units.ForceValue(r.CapacityN, sys)
 		demV, _ := units.ForceValue(r.DemandN, sys)
 		wt := r.Static.MassKgPerM

@@ -15,9 +15,9 @@ func TestWindowStatusUsesTheModelWords(t *testing.T) {
 		row  model.Row
 		want string
 	}{
-		{model.Row{OK: true, Permitted: true}, "✓ " + model.StatusWorks},
-		{model.Row{OK: false, Permitted: true}, "✗ " + model.StatusFails},
-		{model.Row{OK: false, Permitted: false}, "✗ " + model.StatusNotPermitted},
+		{model.Row{OK: true, Quick: model.Quick{Permitted: true}}, "✓ " + model.StatusWorks},
+		{model.Row{Quick: model.Quick{Permitted: true}}, "✗ " + model.StatusFails},
+		{model.Row{}, "✗ " + model.StatusNotPermitted},
 	}
 	for _, c := range cases {
 		assert.Equal(t, c.want, status(&c.row))

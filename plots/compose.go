@@ -71,6 +71,9 @@ func (k *composer) draw(c draw.Canvas, ch *Chart, fill bool) {
 	m := vg.Points(outerMargin)
 	inner := draw.Crop(c, m, -m, m, -m)
 	width := inner.Max.X - inner.Min.X
+	if ch.Footer != "" {
+		inner.Min.Y += drawFooter(inner, ch.Footer)
+	}
 
 	var notes []string
 	if ext.capped {

@@ -388,11 +388,11 @@ func writeChart(path string, in exportInputs) error {
 		}
 	}
 	ch := chart.NewBuilder(m).Chart(res, chart.Options{Pinned: pinned, Crossovers: in.xs, Range: in.rng, Title: in.sc.Name})
-	// plots.SaveChart writes the file itself; it goes to a temporary name
+	// chart.Save writes the file itself; it goes to a temporary name
 	// first so a failure leaves any earlier file as it was.
 	ext := filepath.Ext(path)
 	tmp := strings.TrimSuffix(path, ext) + ".upright-tmp" + ext
-	if err := plots.SaveChart(tmp, &ch, chartExportSize); err != nil {
+	if err := chart.Save(tmp, ch, chartExportSize); err != nil {
 		os.Remove(tmp)
 		return err
 	}

@@ -278,7 +278,7 @@ func writeChart(m *model.Model, res *model.Result, path string) error {
 		return err
 	}
 	ch := chart.NewBuilder(m).Chart(res, chart.Options{Crossovers: xs, Title: m.Scheme.Name})
-	return plots.SaveChart(path, &ch, plots.DefaultExportSize)
+	return chart.Save(path, ch, plots.DefaultExportSize)
 }
 
 func endsText(s model.Setting) string {

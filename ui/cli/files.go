@@ -65,6 +65,7 @@ func runTable(args []string, stdout, stderr io.Writer) error {
 	if err := report.WriteCSV(&buf, m, report.CSVOptions{All: *all}); err != nil {
 		return err
 	}
+	fmt.Fprintln(stderr, model.Caution)
 	if *out == "" || *out == "-" {
 		_, err := stdout.Write(buf.Bytes())
 		return err

@@ -157,7 +157,7 @@ func (c *Column) Check(in Input) (Result, error) {
 	// E2: effective length and slenderness.
 	kSrc := "typed K"
 	if in.K == 0 {
-		kSrc = "recommended design value for " + in.Ends.String() + " (Commentary Table C-A-7.1)"
+		kSrc = "recommended design value for " + in.Ends.String() + " (Commentary Table C-A-7.1, from memory)"
 	}
 	step("AISC 360-22 E2", "K", kSrc, k, "")
 	step("AISC 360-22 E2", "Lcx", "K Lx", r.Lcx, "in")

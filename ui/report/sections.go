@@ -278,7 +278,7 @@ func inputs(d *doc, f *facts) {
 	}
 	addQ("Unbraced length (strong axis)", units.Length, s.LengthMM)
 	addQ("Unbraced length (weak axis)", units.Length, s.WeakMM)
-	kText := "recommended design value of each material for the end condition"
+	kText := "recommended design value of each material for the end condition (each table recalled from memory)"
 	if s.K > 0 {
 		kText = fmt.Sprintf("K = %.2f, typed", s.K)
 	}
@@ -809,7 +809,11 @@ func assumptions(d *doc, f *facts) {
 		if !ok {
 			v = model.DefaultCarbon()[k.Key]
 		}
-		cf = append(cf, fmt.Sprintf("%s %s %s", strings.ToLower(k.Name), trimFloat(v), k.FactorUnit))
+		src := "typed"
+		if v == model.DefaultCarbon()[k.Key] {
+			src = "from memory"
+		}
+		cf = append(cf, fmt.Sprintf("%s %s %s (%s)", strings.ToLower(k.Name), trimFloat(v), k.FactorUnit, src))
 	}
 	items = append(items, "Ranking: working sizes (strength at least the demand, self-weight included) are ranked by "+metricWords(sc.Metric)+". Embodied-carbon factors, cradle to gate (A1–A3): "+strings.Join(cf, "; ")+".")
 	items = append(items, fmt.Sprintf("Crossover lengths are searched from %s to %s and found to within ±%.0f mm.",

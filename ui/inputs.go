@@ -324,7 +324,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		mats.Add(small("No materials are registered in this build."))
 	}
 	mats.Add(acc)
-	return container.NewVBox(column, loadBox, design, mats, layout.NewSpacer())
+	return container.NewVBox(w.buildNameField(), column, loadBox, design, mats, layout.NewSpacer())
 }
 
 // materialTitle capitalises a material name.
@@ -340,6 +340,7 @@ func (w *Window) syncInputs() {
 	w.quiet++
 	defer func() { w.quiet-- }()
 	d := &w.st.Draft
+	w.syncName()
 	w.syncTexts()
 	w.syncSketches()
 	w.weakCheck.SetChecked(w.st.WeakBraced)

@@ -312,6 +312,7 @@ func sameButLength(a, b model.Scheme) bool {
 	}
 	a.Setting.LengthMM, a.Setting.WeakMM = 0, 0
 	b.Setting.LengthMM, b.Setting.WeakMM = 0, 0
+	a.Name, b.Name = "", "" // the name changes no result
 	return reflect.DeepEqual(a, b)
 }
 

@@ -68,6 +68,7 @@ type Window struct {
 	fields      map[string]*field
 	sketches    map[model.EndCondition]*widgets.EndSketch
 	weakCheck   *widget.Check
+	nameEntry   *widget.Entry // the scheme's name
 	loadMode    *widget.RadioGroup
 	directBox   *fyne.Container
 	takedownBox *fyne.Container

@@ -39,7 +39,9 @@ type State struct {
 	Gen        uint64       // bumped on every valid change
 	SchemeGen  uint64       // bumped on every valid change other than the length
 
-	built    model.Scheme // Valid at the last SchemeGen bump
+	built     model.Scheme // Valid at the last SchemeGen bump
+	userRange bool         // Range was chosen by the user (SetRange)
+	rangeSys  units.System // the unit system Range was rounded in
 	text     map[string]string
 	parseErr map[string]string
 	check    *Problem
@@ -58,7 +60,7 @@ func (s *State) Load(sc model.Scheme) Outcome {
 	s.text = map[string]string{}
 	s.parseErr = map[string]string{}
 	s.WeakBraced = sc.Setting.WeakMM < sc.Setting.LengthMM*(1-1e-9)
-	s.Range = model.Range{}
+	s.Range, s.userRange = model.Range{}, false
 	s.reformatAll()
 	return s.revalidate(true)
 }
@@ -279,28 +281,14 @@ func (s *State) revalidate(forceRebuild bool) Outcome {
 func (s *State) rebuilt() {
 	s.SchemeGen++
 	s.built = s.Valid
-	if !s.inRange(s.Valid.Setting.LengthMM) {
-		s.Range = viewRange(s.Valid.Setting.LengthMM)
+	if !s.inRange(s.Valid.Setting.LengthMM) || (!s.userRange && s.rangeSys != s.Sys()) {
+		s.Range, s.rangeSys, s.userRange = viewRange(s.Valid.Setting.LengthMM, s.Sys()), s.Sys(), false
 	}
 }
 
 // inRange reports whether a length lies inside the current range.
 func (s *State) inRange(mm float64) bool {
 	return s.Range.ToMM > s.Range.FromMM && mm >= s.Range.FromMM && mm <= s.Range.ToMM
-}
-
-// viewRange is the slider and chart range for a length: from 0.5 m to 12 m,
-// extended in 6 m steps while the length sits in the top quarter, up to
-// model.MaxLengthMM. Steps keep the range still while the length moves.
-func viewRange(mm float64) model.Range {
-	r := model.Range{FromMM: 500, ToMM: 12000}
-	for mm > 0.75*r.ToMM && r.ToMM < model.MaxLengthMM {
-		r.ToMM = math.Min(r.ToMM+6000, model.MaxLengthMM)
-	}
-	if mm < r.FromMM {
-		r.FromMM = model.MinLengthMM
-	}
-	return r
 }
 
 // sameButLength reports whether two schemes differ at most in their length

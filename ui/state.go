@@ -39,12 +39,13 @@ type State struct {
 	Gen        uint64       // bumped on every valid change
 	SchemeGen  uint64       // bumped on every valid change other than the length
 
-	built     model.Scheme // Valid at the last SchemeGen bump
-	userRange bool         // Range was chosen by the user (SetRange)
-	rangeSys  units.System // the unit system Range was rounded in
+	built    model.Scheme // Valid at the last SchemeGen bump
 	text     map[string]string
 	parseErr map[string]string
 	check    *Problem
+
+	userRange bool         // Range was chosen by the user (SetRange)
+	rangeSys  units.System // the unit system Range was rounded in
 }
 
 // NewState returns the state of a window showing sc.

@@ -265,6 +265,13 @@ func runCompare(args []string, stdout, stderr io.Writer) error {
 	}
 	printHeader(stdout, m)
 	printTable(stdout, m, rows, units.System(sc.Units), sc.Setting)
+	if b := res.BestOverall(); b != nil {
+		fmt.Fprintf(stdout, "\nBest overall by %s: %s (%s)", sc.Metric, b.Static.Designation, m.Families[b.Family].Name())
+		if nt := m.NearTieNote(res); nt != "" {
+			fmt.Fprintf(stdout, "; %s", nt)
+		}
+		fmt.Fprintln(stdout)
+	}
 	fmt.Fprintf(stdout, "\n%s\n", model.Caution)
 	return nil
 }
@@ -309,7 +316,7 @@ func printHeader(w io.Writer, m *model.Model) {
 	if sc.SelfWeight {
 		fmt.Fprint(w, ", plus each column's self-weight")
 	}
-	fmt.Fprintf(w, "; ranked by %s\n\n", sc.Metric)
+	fmt.Fprintf(w, "; ranked by %s; near-tie tolerance %s\n\n", sc.Metric, strings.TrimPrefix(model.TieText(sc.Tie), "within "))
 }
 
 func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System, s model.Setting) {
@@ -399,7 +406,7 @@ func DescribeCrossover(x model.Crossover) string {
 		if x.To == "" {
 			return "best overall " + x.From + " (" + x.FromDesignation + "): nothing works beyond"
 		}
-		return "best overall " + x.From + " (" + x.FromDesignation + ") → " + x.To + " (" + x.ToDesignation + ")"
+		return "best overall " + x.From + " (" + x.FromDesignation + ") → " + x.To + " (" + x.ToDesignation + ")" + nearTieText(x)
 	}
 	return x.From + " → " + x.To
 }
@@ -499,4 +506,12 @@ func runCurve(args []string, stdout, stderr io.Writer) error {
 	tw.Flush()
 	fmt.Fprintf(stdout, "\n%s\n", model.Caution)
 	return nil
+}
+
+// nearTieText appends a family change's near-ties to its description.
+func nearTieText(x model.Crossover) string {
+	if t := x.NearTieText(); t != "" {
+		return "; " + t
+	}
+	return ""
 }

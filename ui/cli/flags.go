@@ -40,6 +40,8 @@ type schemeFlags struct {
 
 	carbon     string
 	limitDelta bool
+
+	tie string
 }
 
 func newSchemeFlags(name string, out io.Writer) *schemeFlags {
@@ -55,6 +57,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.method, "method", "", "lrfd or asd (default lrfd)")
 	fs.StringVar(&f.materials, "materials", "", "comma list of "+strings.Join(model.Materials(), ", ")+" (default all)")
 	fs.StringVar(&f.units, "units", "", "units shown: us or si (default those of --length, else of the scheme file, else us)")
+	fs.StringVar(&f.tie, "tie", "", "near-tie tolerance: the best family changes only when another beats it by more than this share of the ranking metric, e.g. 5% or 0.05 (default 5%)")
 	fs.StringVar(&f.rank, "rank", "", "ranking metric: weight, footprint or carbon (default weight)")
 	fs.BoolVar(&f.selfWeight, "self-weight", true, "add the column's own weight to the demand")
 
@@ -202,6 +205,13 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 			return sc, usagef("--rank %q: not accepted; give weight, footprint or carbon", f.rank)
 		}
 		sc.Metric = r
+	}
+	if f.tie != "" {
+		v, err := parseTie(f.tie)
+		if err != nil {
+			return sc, err
+		}
+		sc.Tie = v
 	}
 	if f.carbon != "" {
 		if err := f.buildCarbon(&sc); err != nil {
@@ -522,6 +532,21 @@ func (f *schemeFlags) typedUnits() (model.Units, bool) {
 	return "", false
 }
 
+// parseTie reads --tie as a percentage (5%) or a fraction (0.05), 0 to 50%.
+func parseTie(s string) (float64, error) {
+	t := strings.TrimSpace(s)
+	scale := 1.0
+	if p, ok := strings.CutSuffix(t, "%"); ok {
+		t, scale = strings.TrimSpace(p), 0.01
+	}
+	v, err := strconv.ParseFloat(t, 64)
+	v *= scale
+	if err != nil || !(v >= 0 && v <= model.MaxTie) {
+		return 0, usagef("--tie %q: not accepted; give %s", s, model.TieAccepted)
+	}
+	return v, nil
+}
+
 // refuseEmpty refuses a text flag given with an empty value: only a flag
 // left out takes its default.
 func (f *schemeFlags) refuseEmpty() error {
@@ -546,7 +571,7 @@ var fieldFlags = map[string]string{
 	"materials": "materials", "units": "units", "rank": "rank",
 	"steel Fy": "fy", "steel families": "steel-families", "f'c": "fc", "bar grade": "bar-grade",
 	"rho-max": "rho-max", "transverse": "transverse", "m1m2": "m1m2", "beta-dns": "beta-dns", "EI method": "ei",
-	"fire": "fire", "fire sides": "fire-sides", "duration": "duration", "species": "species", "grade": "grade",
+	"tie": "tie", "fire": "fire", "fire sides": "fire-sides", "duration": "duration", "species": "species", "grade": "grade",
 }
 
 // fieldUsage turns a model check failure into a usage error naming the flag

@@ -38,6 +38,9 @@ type Scheme struct {
 	Units      Units
 	Metric     Metric
 	Carbon     CarbonFactors
+	// Tie is the near-tie tolerance, a fraction of the ranking metric: the
+	// best family changes only when another beats it by more than this.
+	Tie float64
 }
 
 // CarbonFactors are cradle-to-gate (A1–A3) embodied-carbon factors per kind
@@ -59,6 +62,7 @@ func DefaultScheme() Scheme {
 		Units:      US,
 		Metric:     ByWeight,
 		Carbon:     DefaultCarbon(),
+		Tie:        DefaultTie,
 	}
 }
 
@@ -127,6 +131,9 @@ func (sc *Scheme) Validate() error {
 	}
 	if err := sc.Timber.validate(); err != nil {
 		return err
+	}
+	if !finite(sc.Tie) || sc.Tie < 0 || sc.Tie > MaxTie {
+		return bad("tie", sc.Tie, TieAccepted)
 	}
 	for k, v := range sc.Carbon {
 		if !finite(v) || v < 0 || v > 10000 {

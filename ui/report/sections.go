@@ -203,6 +203,9 @@ func summary(d *doc, f *facts) {
 		text += fmt.Sprintf(" Ranked by %s, the best working column overall is %s (%s): %s, %s plan, %s per column.",
 			metricWords(sc.Metric), best.Static.Designation, familyLabel(fam),
 			units.MassPerLength(best.Static.MassKgPerM, f.sys), units.PlanSize(best.Static.FootprintMM, f.sys), scoreText(f, best))
+		if nt := f.m.NearTieNote(f.res); nt != "" {
+			text += " Near-ties, " + nt + "."
+		}
 	} else {
 		text += " No candidate of any family carries this demand at this length."
 	}
@@ -537,7 +540,11 @@ func describe(x model.Crossover) string {
 		if x.To == "" {
 			return "beyond this length no family works (last: " + x.From + ", " + x.FromDesignation + ")"
 		}
-		return "the best family changes from " + x.From + " (" + x.FromDesignation + ") to " + x.To + " (" + x.ToDesignation + ")"
+		s := "the best family changes from " + x.From + " (" + x.FromDesignation + ") to " + x.To + " (" + x.ToDesignation + ")"
+		if nt := x.NearTieText(); nt != "" {
+			s += "; " + nt
+		}
+		return s
 	}
 	return x.From + " → " + x.To
 }

@@ -23,7 +23,7 @@ const MaxSize = 1 << 20
 
 // The file's objects and their fields, in the order Marshal writes them.
 var (
-	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "carbon"}
+	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "carbon", "tie"}
 	settingKeys  = []string{"length", "weak_axis_length", "ends", "k", "method"}
 	loadKeys     = []string{"mode", "direct", "takedown"}
 	takedownKeys = []string{"tributary_area", "floors", "floor_dead", "floor_live", "roof_dead", "roof_live", "snow", "live_reduction", "kll", "occupancy"}
@@ -46,6 +46,7 @@ type wFile struct {
 	Concrete   wConcrete `json:"concrete"`
 	Timber     wTimber   `json:"timber"`
 	Carbon     wCarbon   `json:"carbon"`
+	Tie        float64   `json:"tie"`
 }
 
 type wSetting struct {
@@ -169,6 +170,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 			},
 		},
 		SelfWeight: sc.SelfWeight,
+		Tie:        sc.Tie,
 		Materials:  append([]string{}, sc.Materials...),
 		Steel:      wSteel{Families: append([]string{}, sc.Steel.Families...)},
 		Concrete: wConcrete{
@@ -563,7 +565,19 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 	if e := r.carbon(root, &sc); e != nil {
 		return sc, e
 	}
-	return sc, nil
+	return sc, r.tie(root, &sc)
+}
+
+// tie reads the near-tie tolerance, a fraction; a file without it (written
+// before the field existed) takes model.DefaultTie.
+func (r *reader) tie(root *node, sc *model.Scheme) error {
+	sc.Tie = model.DefaultTie
+	if root.get("tie") == nil {
+		return nil
+	}
+	v, err := r.num(root, "", "tie", "the near-tie tolerance as a fraction from 0 to 0.5, e.g. 0.05")
+	sc.Tie = v
+	return err
 }
 
 func (r *reader) setting(root *node, s *model.Setting) error {

@@ -19,6 +19,10 @@
 //
 // Dimensionless values (k, kll, rho_max, m1_m2, beta_dns) are JSON numbers;
 // counts (floors, bar_grade, fire_sides) are whole JSON numbers.
+// "tie" is the one field that may be absent: files written before it
+// existed read with the default, 0.05 (5%); Marshal always writes it. The
+// format version stays 1 for it.
+//
 // Where null means a default (k, kll, fy, fc, duration), only null means it:
 // a value given there is checked against its range like any other, so 0 or
 // "0 psi" is refused rather than read as the default.
@@ -92,7 +96,9 @@
 //	    "concrete": "354 kg CO2e/m³",
 //	    "sawn-timber": "63 kg CO2e/m³",
 //	    "glulam": "137 kg CO2e/m³"
-//	  }
+//	  },
+//	  "tie": 0.05                      near-tie tolerance, a fraction 0 to 0.5 of
+//	                                   the ranking metric; may be absent (0.05)
 //	}
 //
 // Marshal writes each quantity in the unit of the scheme's own system (ft,

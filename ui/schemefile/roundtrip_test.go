@@ -101,6 +101,7 @@ func genScheme(t *rapid.T) model.Scheme {
 	tm.FireSides = rapid.SampledFrom([]int{3, 4}).Draw(t, "fire sides")
 	tm.Duration = rapid.SampledFrom([]string{"", "permanent", "ten-years", "two-months", "seven-days", "ten-minutes"}).Draw(t, "duration")
 
+	sc.Tie = rapid.Float64Range(0, model.MaxTie).Draw(t, "tie")
 	sc.Carbon = model.CarbonFactors{}
 	for _, k := range model.CarbonKinds {
 		sc.Carbon[k.Key] = rapid.Float64Range(0, 10000).Draw(t, "carbon "+k.Key)
@@ -150,7 +151,7 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 	}
 	walk("", reflect.TypeOf(model.Scheme{}))
 	want := []string{
-		"Name", "Units", "Metric", "SelfWeight", "Materials", "Carbon",
+		"Name", "Units", "Metric", "SelfWeight", "Materials", "Carbon", "Tie",
 		"Setting.LengthMM", "Setting.WeakMM", "Setting.Ends", "Setting.K", "Setting.Method",
 		"Load.Mode", "Load.DirectN", "Load.TributaryM2", "Load.Floors", "Load.FloorDeadKPa", "Load.FloorLiveKPa",
 		"Load.RoofDeadKPa", "Load.RoofLiveKPa", "Load.SnowKPa", "Load.LiveReduction", "Load.KLL", "Load.Occupancy",

@@ -293,6 +293,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 	design := container.NewVBox(heading("Design"),
 		row("Method", w.method),
 		row("Rank by", w.metric),
+		w.buildTieSelect(),
 		row("Units", w.unitsRadio),
 	)
 
@@ -341,6 +342,7 @@ func (w *Window) syncInputs() {
 	defer func() { w.quiet-- }()
 	d := &w.st.Draft
 	w.syncName()
+	w.syncTie()
 	w.syncTexts()
 	w.syncSketches()
 	w.weakCheck.SetChecked(w.st.WeakBraced)

@@ -68,7 +68,8 @@ type Window struct {
 	fields      map[string]*field
 	sketches    map[model.EndCondition]*widgets.EndSketch
 	weakCheck   *widget.Check
-	nameEntry   *widget.Entry // the scheme's name
+	nameEntry   *widget.Entry  // the scheme's name
+	tieSelect   *widget.Select // the near-tie tolerance
 	loadMode    *widget.RadioGroup
 	directBox   *fyne.Container
 	takedownBox *fyne.Container

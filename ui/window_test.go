@@ -112,7 +112,7 @@ func TestSliderAcrossACrossoverChangesTheAnswer(t *testing.T) {
 	})
 	k := -1
 	for i, y := range listed {
-		if y == *x {
+		if assert.ObjectsAreEqual(y, *x) {
 			k = i
 		}
 	}

@@ -52,8 +52,13 @@ func unitOf(sys units.System, us, si string) string {
 }
 
 func status(r *model.Row) string {
-	s := r.Status()
-	return model.StatusMark(s) + " " + s
+	switch r.Status() {
+	case model.StatusWorks:
+		return StatusWorks
+	case model.StatusNotPermitted:
+		return StatusNotPermitted
+	}
+	return StatusFails
 }
 
 func familyText(c *cellCtx, r *model.Row) string {

@@ -20,6 +20,8 @@ func TestReportMarksRecalledValues(t *testing.T) {
 		"combination 3 (factors from memory)",                     // load factors
 		"hot-rolled steel sections 1.22 kg CO2e/kg (from memory)", // the carbon line
 		"published tables, and some were recalled from memory",
+		"near-tie tolerance 5%",                             // the tolerance the crossovers were found with
+		"Near-ties, within 5%: HSS round (HSS13.375X0.250)", // beside the best overall
 	} {
 		assert.Contains(t, text, want)
 	}

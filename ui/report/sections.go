@@ -823,8 +823,9 @@ func assumptions(d *doc, f *facts) {
 		cf = append(cf, fmt.Sprintf("%s %s %s (%s)", strings.ToLower(k.Name), trimFloat(v), k.FactorUnit, src))
 	}
 	items = append(items, "Ranking: working sizes (strength at least the demand, self-weight included) are ranked by "+metricWords(sc.Metric)+". Embodied-carbon factors, cradle to gate (A1–A3): "+strings.Join(cf, "; ")+".")
-	items = append(items, fmt.Sprintf("Crossover lengths are searched from %s to %s and found to within ±%.0f mm.",
-		f.both(units.Length, f.opt.Range.FromMM), f.both(units.Length, f.opt.Range.ToMM), model.ToleranceMM))
+	items = append(items, fmt.Sprintf("Crossover lengths are searched from %s to %s and found to within ±%.0f mm; near-tie tolerance %s.",
+		f.both(units.Length, f.opt.Range.FromMM), f.both(units.Length, f.opt.Range.ToMM), model.ToleranceMM,
+		strings.TrimPrefix(model.TieText(sc.Tie), "within ")))
 	d.bullets(items, sizeBody-0.5)
 }
 

@@ -245,7 +245,7 @@ func (w *Window) configureSlider() {
 		w.slider.fine, w.slider.coarse = 1.0/12, 1
 	}
 	w.quiet--
-	w.rangeLabel.SetText(fmt.Sprintf("%s to %s", units.Length(r.FromMM, sys), units.Length(r.ToMM, sys)))
+	w.rangeLabel.SetText(fmt.Sprintf("%s to %s", rangeEnd(r.FromMM, sys), rangeEnd(r.ToMM, sys)))
 	w.syncSlider()
 }
 

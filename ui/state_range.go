@@ -3,6 +3,7 @@ package ui
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"upright/ui/model"
 	"upright/ui/units"
@@ -66,4 +67,18 @@ func (s *State) SetRange(fromMM, toMM float64) (Outcome, error) {
 	s.SchemeGen++
 	s.built = s.Valid
 	return Outcome{Submit: true, Rebuild: true}, nil
+}
+
+// rangeEnd writes an end of the slider's range: a round number in its unit
+// as such ("2 ft", "0.5 m"), any other length as units.Length writes it.
+func rangeEnd(mm float64, sys units.System) string {
+	unit, per := "m", 1000.0
+	if sys == units.US {
+		unit, per = "ft", units.MMPerFoot
+	}
+	v := mm / per
+	if r := math.Round(v*10) / 10; math.Abs(v-r) < 1e-9 {
+		return strconv.FormatFloat(r, 'f', -1, 64) + " " + unit
+	}
+	return units.Length(mm, sys)
 }

@@ -54,6 +54,7 @@ func TestSchemeFileZeroIsNotNull(t *testing.T) {
 		{`"fy": null`, `"fy": "0 ksi"`, "steel.fy"},
 		{`"k": null`, `"k": 0`, "setting.k"},
 		{`"kll": 4`, `"kll": 0`, "load.takedown.kll"},
+		{`"duration": null`, `"duration": ""`, "timber.duration"},
 	} {
 		s := string(demo)
 		require.Contains(t, s, c.from, "the demo holds %s", c.from)
@@ -64,6 +65,6 @@ func TestSchemeFileZeroIsNotNull(t *testing.T) {
 		assert.Empty(t, out)
 		assert.Contains(t, errOut, c.field, c.to)
 		assert.Contains(t, errOut, "not accepted", c.to)
-		assert.Contains(t, errOut, "null for", c.to)
+		assert.Contains(t, errOut, "or null", c.to)
 	}
 }

@@ -334,7 +334,8 @@ func (r *reader) str(n *node, path, key, give string) (string, error) {
 	return v.str, nil
 }
 
-// optStr reads a string where null means "" (the model's default).
+// optStr reads a string where null means "" (the model's default); an
+// empty string given is refused, since only null means the default.
 func (r *reader) optStr(n *node, path, key, give string) (string, error) {
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
@@ -344,6 +345,9 @@ func (r *reader) optStr(n *node, path, key, give string) (string, error) {
 	case kindNull:
 		return "", nil
 	case kindString:
+		if v.str == "" {
+			return "", r.errAt(v, fp, fmt.Sprintf(`"" is not accepted; give %s`, give))
+		}
 		return v.str, nil
 	}
 	return "", r.errAt(v, fp, fmt.Sprintf("expected a string or null; found %s; give %s", v.kind, give))

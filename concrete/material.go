@@ -58,7 +58,7 @@ type InputError struct {
 
 // Error returns the message naming the field, the value and the accepted range.
 func (e *InputError) Error() string {
-	return fmt.Sprintf("concrete: %s = %s is not accepted; %s", e.Field, e.Value, e.Accepted)
+	return fmt.Sprintf("concrete: %s = %s is not accepted; give %s", e.Field, e.Value, e.Accepted)
 }
 
 func badInput(field string, v float64, accepted string) error {
@@ -123,7 +123,7 @@ func bar(size int, diaIn, areaIn2 float64) Bar {
 	return Bar{Size: size, DiaMM: diaIn * MMPerInch, AreaMM2: areaIn2 * MMPerInch * MMPerInch}
 }
 
-// bars holds the ASTM A615 nominal dimensions (Table 1 of the standard, in inches and in²).
+// bars holds the ASTM A615 nominal dimensions (Table 1 of the standard, in inches and in², from memory).
 var bars = [...]Bar{
 	bar(3, 0.375, 0.11),
 	bar(4, 0.500, 0.20),

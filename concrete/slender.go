@@ -43,9 +43,9 @@ func (e Ends) K() float64 {
 // KWords says where Ends.K comes from, for the trace.
 func (e Ends) KWords() string {
 	if e.Sway() {
-		return fmt.Sprintf("%s ends: sway, k above 1.0; idealized value (common practice, as AISC 360-22 C-A-7.1)", e)
+		return fmt.Sprintf("%s ends: sway, k above 1.0; idealized value (common practice, as AISC 360-22 C-A-7.1, from memory)", e)
 	}
-	return fmt.Sprintf("%s ends: nonsway, k = 1.0 (ACI 318-19 6.6.4.4.3 permits it; cast-in-place ends are rarely fully fixed)", e)
+	return fmt.Sprintf("%s ends: nonsway, k = 1.0 (ACI 318-19 6.6.4.4.3 permits it, from memory; cast-in-place ends are rarely fully fixed)", e)
 }
 
 // Sway reports whether the top of the column can translate sideways.

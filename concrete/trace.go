@@ -82,7 +82,7 @@ func (s *Section) Evaluate(c Conditions) (Result, error) {
 		minBars = "at least 6 bars around a round section"
 	}
 	add("ACI 318-19 10.7.3.1", "bars", fmt.Sprintf("%d %s, %s", s.NBars, s.Bar.Name(), minBars), float64(s.NBars), "")
-	add("ASTM A615", "Ast", fmt.Sprintf("%d × %.0f mm²", s.NBars, s.Bar.AreaMM2), s.AstMM2, "mm2")
+	add("ASTM A615 (bar dimensions from memory)", "Ast", fmt.Sprintf("%d × %.0f mm²", s.NBars, s.Bar.AreaMM2), s.AstMM2, "mm2")
 	add("ACI 318-19 10.6.1.1", "ρg", "Ast/Ag, from 0.01 to 0.08", s.Rho, "")
 	add("ACI 318-19 20.5.1.3.1", "cover", "clear cover to the ties or spiral", s.CoverMM, "mm")
 	add("ACI 318-19 25.2.3", "clear spacing", fmt.Sprintf("at least max(1.5 in, 1.5db, 4/3 × 3/4 in aggregate) = %.1f mm", s.MinClearMM), s.ClearMM, "mm")

@@ -59,4 +59,7 @@ type Chart struct {
 	XRange *Range
 	// YRange fixes the y axis; nil uses zero to a little above the data, capped by DemandCapFactor.
 	YRange *Range
+	// Footer is one line of text along the bottom edge (the caution on an
+	// exported image), shrunk to fit the width; empty draws none.
+	Footer string
 }

@@ -30,6 +30,8 @@ type composer struct {
 	plot   *plot.Plot
 	scene  *scene
 	legend *legend
+
+	legendBox vg.Rectangle // where the legend was last drawn (empty when none)
 }
 
 // newComposer returns a composer with the chart's fonts and axis styles set.
@@ -71,6 +73,9 @@ func (k *composer) draw(c draw.Canvas, ch *Chart, fill bool) {
 	m := vg.Points(outerMargin)
 	inner := draw.Crop(c, m, -m, m, -m)
 	width := inner.Max.X - inner.Min.X
+	if ch.Footer != "" {
+		inner.Min.Y += drawFooter(inner, ch.Footer)
+	}
 
 	var notes []string
 	if ext.capped {
@@ -100,6 +105,9 @@ func (k *composer) draw(c draw.Canvas, ch *Chart, fill bool) {
 		col.Min.X = inner.Max.X - lw
 		col.Max.Y = k.scene.data.Max.Y
 		k.legend.draw(col, ch, k.scene.styles)
+		k.legendBox = col.Rectangle
+	} else {
+		k.legendBox = vg.Rectangle{}
 	}
 }
 

@@ -25,7 +25,8 @@ type scene struct {
 
 	pts   []vg.Point
 	path  vg.Path
-	boxes []vg.Rectangle
+	boxes []vg.Rectangle // every label placed, the marker's included
+	rings []vg.Rectangle // the crossover rings, which labels keep clear of
 	data  vg.Rectangle
 
 	markText  text.Style
@@ -62,9 +63,7 @@ func (s *scene) Plot(c draw.Canvas, plt *plot.Plot) {
 	if ch.Marker != nil {
 		s.drawMarker(c, plt, *ch.Marker)
 	}
-	for _, m := range ch.Crossovers {
-		s.drawCrossover(c, plt, m)
-	}
+	s.drawCrossovers(c, plt, ch.Crossovers)
 	if len(ch.Series) == 0 {
 		s.label(c, s.emptyText, c.Center(), emptyNote)
 	}
@@ -198,43 +197,6 @@ func (s *scene) drawMarker(c draw.Canvas, plt *plot.Plot, m Marker) {
 
 // crossoverRadius is the ring radius of a crossover mark in points.
 const crossoverRadius = 5.5
-
-// drawCrossover draws a ring with a centre dot at the crossover and places its
-// label at the first free corner (upper right, upper left, lower right, lower
-// left) that stays inside the data area and clear of earlier labels.
-func (s *scene) drawCrossover(c draw.Canvas, plt *plot.Plot, m Crossover) {
-	pt := at(&c, plt, m.X, m.Y)
-	if !c.Contains(pt) {
-		return
-	}
-	crossoverMark(&c, pt)
-	if m.Label == "" {
-		return
-	}
-	off := vg.Points(crossoverRadius + 2)
-	corners := [4]struct {
-		dx, dy vg.Length
-		xa     draw.XAlignment
-		ya     draw.YAlignment
-	}{
-		{off, off, draw.XLeft, draw.YBottom},
-		{-off, off, draw.XRight, draw.YBottom},
-		{off, -off, draw.XLeft, draw.YTop},
-		{-off, -off, draw.XRight, draw.YTop},
-	}
-	pick := 0
-	for i, k := range corners {
-		sty := aligned(s.markText, k.xa, k.ya)
-		box := padBox(sty.Rectangle(m.Label).Add(vg.Point{X: pt.X + k.dx, Y: pt.Y + k.dy}))
-		if inside(box, c.Rectangle) && !s.overlaps(box) {
-			pick = i
-			break
-		}
-	}
-	k := corners[pick]
-	sty := aligned(s.markText, k.xa, k.ya)
-	s.boxes = append(s.boxes, s.label(c, sty, vg.Point{X: pt.X + k.dx, Y: pt.Y + k.dy}, m.Label))
-}
 
 // label draws txt at pt over a translucent white box and returns the box.
 func (s *scene) label(c draw.Canvas, sty text.Style, pt vg.Point, txt string) vg.Rectangle {

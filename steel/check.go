@@ -27,7 +27,7 @@ func (in Input) Validate() error {
 			if zeroOK {
 				lo = "0 (same as Ly) or more"
 			}
-			return fmt.Errorf("%s: %v is not accepted; a length %s and at most %g in (100 ft)", field, v, lo, MaxLength)
+			return fmt.Errorf("%s: %v is not accepted; give a length %s and at most %g in (100 ft)", field, v, lo, MaxLength)
 		}
 		return nil
 	}
@@ -41,13 +41,13 @@ func (in Input) Validate() error {
 		return err
 	}
 	if math.IsNaN(in.K) || math.IsInf(in.K, 0) || in.K < 0 || (in.K != 0 && (in.K < 0.5 || in.K > 10)) {
-		return fmt.Errorf("K: %v is not accepted; an effective-length factor from 0.5 to 10, or 0 for the end condition's value", in.K)
+		return fmt.Errorf("K: %v is not accepted; give an effective-length factor from 0.5 to 10, or 0 for the end condition's value", in.K)
 	}
 	if in.K == 0 && !in.Ends.Valid() {
-		return fmt.Errorf("ends: %d is not accepted; one of the six idealized end conditions", int(in.Ends))
+		return fmt.Errorf("ends: %d is not accepted; give one of the six idealized end conditions", int(in.Ends))
 	}
 	if in.Method != LRFD && in.Method != ASD {
-		return fmt.Errorf("method: %d is not accepted; LRFD or ASD", int(in.Method))
+		return fmt.Errorf("method: %d is not accepted; give LRFD or ASD", int(in.Method))
 	}
 	return nil
 }
@@ -162,7 +162,7 @@ func (c *Column) Check(in Input) (Result, error) {
 	// E2: effective length and slenderness.
 	kSrc := "typed K"
 	if in.K == 0 {
-		kSrc = "recommended design value for " + in.Ends.String() + " (Commentary Table C-A-7.1)"
+		kSrc = "recommended design value for " + in.Ends.String() + " (Commentary Table C-A-7.1, from memory)"
 	}
 	step("AISC 360-22 E2", "K", kSrc, k, "")
 	step("AISC 360-22 E2", "Lcx", "K Lx", r.Lcx, "in")

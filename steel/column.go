@@ -348,7 +348,7 @@ func Columns(o Options) ([]Column, error) {
 	want := [len(familyNames)]bool{}
 	for _, f := range o.Families {
 		if f < 0 || int(f) >= len(familyNames) {
-			return nil, fmt.Errorf("steel family: %d is not accepted; one of 0..%d", int(f), len(familyNames)-1)
+			return nil, fmt.Errorf("steel family: %d is not accepted; give one of 0..%d", int(f), len(familyNames)-1)
 		}
 		want[f] = true
 	}

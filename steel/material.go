@@ -53,7 +53,7 @@ func CheckFy(fy float64) error {
 		return nil
 	}
 	if math.IsNaN(fy) || math.IsInf(fy, 0) || fy < MinFy || fy > MaxFy {
-		return fmt.Errorf("Fy: %v is not accepted; a yield stress from %g to %g ksi, or 0 for the family's default grade", fy, MinFy, MaxFy)
+		return fmt.Errorf("Fy: %v is not accepted; give a yield stress from %g to %g ksi, or 0 for the family's default grade", fy, MinFy, MaxFy)
 	}
 	return nil
 }
@@ -140,5 +140,5 @@ func ParseEndCondition(s string) (EndCondition, error) {
 			return EndCondition(i), nil
 		}
 	}
-	return 0, fmt.Errorf("ends: %q is not accepted; one of %s", s, strings.Join(endNames[:], ", "))
+	return 0, fmt.Errorf("ends: %q is not accepted; give one of %s", s, strings.Join(endNames[:], ", "))
 }

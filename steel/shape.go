@@ -49,7 +49,7 @@ func ParseFamily(name string) (Family, error) {
 			return Family(i), nil
 		}
 	}
-	return 0, fmt.Errorf("steel family: %q is not accepted; one of %s", name, strings.Join(familyNames[:], ", "))
+	return 0, fmt.Errorf("steel family: %q is not accepted; give one of %s", name, strings.Join(familyNames[:], ", "))
 }
 
 // IShaped reports whether the family is a rolled I-shape (W or HP).
@@ -353,7 +353,7 @@ func Lookup(name string) (*Shape, error) {
 	if i, ok := catIndex[strings.ToUpper(strings.TrimSpace(name))]; ok {
 		return &catShapes[i], nil
 	}
-	return nil, fmt.Errorf("steel shape: %q is not accepted; a designation from the catalogue such as W14X90, HSS8X8X1/2, HSS6.625X0.280 or Pipe6STD", name)
+	return nil, fmt.Errorf("steel shape: %q is not accepted; give a designation from the catalogue such as W14X90, HSS8X8X1/2, HSS6.625X0.280 or Pipe6STD", name)
 }
 
 // FamilyShapes returns the shapes of one family in catalogue order.

@@ -108,7 +108,7 @@ func (k *Candidate) Full(g Geometry, dem Demand) (Result, error) {
 	r.DensityKgM3 = DensityLbFt3(k.mat.G, r.MC) * kgM3PerLbFt3
 	r.MassKgPerM = k.MassKgPerM()
 	r.LeDX, r.LeDY = r.LeX*k.invD, r.LeY*k.invB // as in Fast, so the figures agree to the last bit
-	r.KeSource = "NDS 2018 Appendix G Table G1, " + g.Ends.String()
+	r.KeSource = "NDS 2018 Appendix G Table G1 (from memory), " + g.Ends.String()
 	if g.K != 0 {
 		r.KeSource = "typed by the user"
 	}

@@ -107,7 +107,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 	w.rangeLabel = widget.NewLabel("")
 	w.rangeLabel.Importance = widget.LowImportance
 	entryBox := container.NewGridWrap(fyne.NewSize(150, length.entry.MinSize().Height), length.entry)
-	sliderRow := container.NewBorder(nil, length.err, w.sliderUnit, container.NewHBox(entryBox, w.rangeLabel), w.slider)
+	sliderRow := container.NewBorder(nil, length.err, w.sliderUnit, container.NewHBox(entryBox, w.rangeLabel, w.newRangeButton()), w.slider)
 
 	w.xsStatus = widget.NewLabel("Finding crossovers…")
 	w.xsStatus.Wrapping = fyne.TextWrapWord
@@ -235,7 +235,7 @@ func (w *Window) configureSlider() {
 	sys := w.sys()
 	r := w.st.Range
 	if r.ToMM <= r.FromMM {
-		r = viewRange(w.st.Draft.Setting.LengthMM)
+		r = viewRange(w.st.Draft.Setting.LengthMM, sys)
 	}
 	w.quiet++
 	w.slider.Min, w.slider.Max = toDisplay(r.FromMM, sys), toDisplay(r.ToMM, sys)
@@ -245,7 +245,7 @@ func (w *Window) configureSlider() {
 		w.slider.fine, w.slider.coarse = 1.0/12, 1
 	}
 	w.quiet--
-	w.rangeLabel.SetText(fmt.Sprintf("%s to %s", units.Length(r.FromMM, sys), units.Length(r.ToMM, sys)))
+	w.rangeLabel.SetText(fmt.Sprintf("%s to %s", rangeEnd(r.FromMM, sys), rangeEnd(r.ToMM, sys)))
 	w.syncSlider()
 }
 

@@ -209,8 +209,19 @@ func (f *fieldSpec) accepted(sys units.System) string {
 	return s
 }
 
-// parse reads the text of a field and returns the value in the model's SI unit.
+// parse reads the text of a field and returns the value in the model's SI
+// unit. Only blank text means the default: a value typed that equals the
+// default's stand-in (0) is refused with what the field accepts.
 func (f *fieldSpec) parse(text string, sys units.System) (float64, error) {
+	v, err := f.parseText(text, sys)
+	if err == nil && f.blank != "" && v == f.blankOK && strings.TrimSpace(text) != "" {
+		return 0, fmt.Errorf("%q is not accepted for %s; give %s", text, f.label, f.accepted(sys))
+	}
+	return v, err
+}
+
+// parseText reads the text of a field; blank text gives blankOK where allowed.
+func (f *fieldSpec) parseText(text string, sys units.System) (float64, error) {
 	t := thousands.ReplaceAllString(strings.TrimSpace(text), "$1$2")
 	if t == "" {
 		if f.blank != "" {
@@ -219,7 +230,7 @@ func (f *fieldSpec) parse(text string, sys units.System) (float64, error) {
 		return 0, fmt.Errorf("%s is empty; give %s", f.label, f.accepted(sys))
 	}
 	bad := func() error {
-		return fmt.Errorf("%q is not read as a %s; give %s", text, kindWord(f.q), f.accepted(sys))
+		return fmt.Errorf("%q is not read as %s; give %s", text, units.Article(kindWord(f.q)), f.accepted(sys))
 	}
 	if n, err := strconv.ParseFloat(t, 64); err == nil {
 		if math.IsNaN(n) || math.IsInf(n, 0) {

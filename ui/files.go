@@ -123,6 +123,7 @@ func init() {
 
 // initFiles reads the recent list from the preferences.
 func (w *Window) initFiles() {
+	useAtomicFileWriters()
 	r, _ := schemefile.ParseRecent(w.app.Preferences().String(prefRecent))
 	w.files.recent = r
 	w.files.clean = w.st.Valid
@@ -244,8 +245,10 @@ func (w *Window) showOpenDialog() {
 
 // showSaveDialog asks for a file to write, suggesting the scheme's name with
 // the extension ext (and suffix before it), and calls write with its path.
-// Fyne's dialog hands over a writer on a file it has already truncated; the
-// writer is closed unused and the file written by path, atomically.
+// Fyne's dialog hands over a writer on the chosen file; for local files it
+// is an atomicFiles writer, which leaves the file untouched when closed
+// unused, and the file is then written by path, atomically (a temporary file
+// beside it, renamed over it), so a failed save leaves the earlier file.
 func (w *Window) showSaveDialog(title, ext, suffix string, write func(path string)) {
 	d := dialog.NewFileSave(func(wc fyne.URIWriteCloser, err error) {
 		if err != nil {
@@ -388,11 +391,11 @@ func writeChart(path string, in exportInputs) error {
 		}
 	}
 	ch := chart.NewBuilder(m).Chart(res, chart.Options{Pinned: pinned, Crossovers: in.xs, Range: in.rng, Title: in.sc.Name})
-	// plots.SaveChart writes the file itself; it goes to a temporary name
+	// chart.Save writes the file itself; it goes to a temporary name
 	// first so a failure leaves any earlier file as it was.
 	ext := filepath.Ext(path)
 	tmp := strings.TrimSuffix(path, ext) + ".upright-tmp" + ext
-	if err := plots.SaveChart(tmp, &ch, chartExportSize); err != nil {
+	if err := chart.Save(tmp, ch, chartExportSize); err != nil {
 		os.Remove(tmp)
 		return err
 	}

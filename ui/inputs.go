@@ -298,6 +298,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 	design := container.NewVBox(heading("Design"),
 		row("Method", w.method),
 		row("Rank by", w.metric),
+		w.buildTieSelect(),
 		row("Units", w.unitsRadio),
 	)
 
@@ -329,7 +330,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		mats.Add(small("No materials are registered in this build."))
 	}
 	mats.Add(acc)
-	return container.NewVBox(column, loadBox, design, w.buildFireInputs(), mats, layout.NewSpacer())
+	return container.NewVBox(w.buildNameField(), column, loadBox, design, w.buildFireInputs(), mats, layout.NewSpacer())
 }
 
 // materialTitle capitalises a material name.
@@ -345,6 +346,8 @@ func (w *Window) syncInputs() {
 	w.quiet++
 	defer func() { w.quiet-- }()
 	d := &w.st.Draft
+	w.syncName()
+	w.syncTie()
 	w.syncTexts()
 	w.syncSketches()
 	w.weakCheck.SetChecked(w.st.WeakBraced)

@@ -149,6 +149,9 @@ func (w *Window) refreshTable(full bool) {
 	note := fmt.Sprintf("at %s", units.Length(res.Setting.LengthMM, w.ctx.sys))
 	if b := res.BestOverall(); b != nil {
 		note += fmt.Sprintf(" · best overall: %s (%s) · %s", b.Static.Designation, m.Families[b.Family].Name(), metricWords(m.Scheme.Metric))
+		if nt := m.NearTieNote(res); nt != "" {
+			note += " · " + nt
+		}
 	} else {
 		note += " · nothing works at this length"
 	}

@@ -11,12 +11,12 @@ import (
 	"upright/ui/units"
 )
 
-// Status words of a row: text and symbol, so a failing row reads as failing
-// without its colour.
-const (
-	StatusWorks        = "✓ works"
-	StatusFails        = "✗ fails"
-	StatusNotPermitted = "✗ not permitted"
+// Status words of a row as the window shows them: the model's one set of
+// words with a symbol, so a failing row reads as failing without its colour.
+var (
+	StatusWorks        = model.StatusMark(model.StatusWorks) + " " + model.StatusWorks
+	StatusFails        = model.StatusMark(model.StatusFails) + " " + model.StatusFails
+	StatusNotPermitted = model.StatusMark(model.StatusNotPermitted) + " " + model.StatusNotPermitted
 )
 
 // column is one column of the results table.
@@ -52,10 +52,10 @@ func unitOf(sys units.System, us, si string) string {
 }
 
 func status(r *model.Row) string {
-	switch {
-	case r.OK:
+	switch r.Status() {
+	case model.StatusWorks:
 		return StatusWorks
-	case !r.Permitted:
+	case model.StatusNotPermitted:
 		return StatusNotPermitted
 	}
 	return StatusFails

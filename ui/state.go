@@ -43,6 +43,9 @@ type State struct {
 	text     map[string]string
 	parseErr map[string]string
 	check    *Problem
+
+	userRange bool         // Range was chosen by the user (SetRange)
+	rangeSys  units.System // the unit system Range was rounded in
 }
 
 // NewState returns the state of a window showing sc.
@@ -58,7 +61,7 @@ func (s *State) Load(sc model.Scheme) Outcome {
 	s.text = map[string]string{}
 	s.parseErr = map[string]string{}
 	s.WeakBraced = sc.Setting.WeakMM < sc.Setting.LengthMM*(1-1e-9)
-	s.Range = model.Range{}
+	s.Range, s.userRange = model.Range{}, false
 	s.reformatAll()
 	return s.revalidate(true)
 }
@@ -285,28 +288,14 @@ func (s *State) revalidate(forceRebuild bool) Outcome {
 func (s *State) rebuilt() {
 	s.SchemeGen++
 	s.built = s.Valid
-	if !s.inRange(s.Valid.Setting.LengthMM) {
-		s.Range = viewRange(s.Valid.Setting.LengthMM)
+	if !s.inRange(s.Valid.Setting.LengthMM) || (!s.userRange && s.rangeSys != s.Sys()) {
+		s.Range, s.rangeSys, s.userRange = viewRange(s.Valid.Setting.LengthMM, s.Sys()), s.Sys(), false
 	}
 }
 
 // inRange reports whether a length lies inside the current range.
 func (s *State) inRange(mm float64) bool {
 	return s.Range.ToMM > s.Range.FromMM && mm >= s.Range.FromMM && mm <= s.Range.ToMM
-}
-
-// viewRange is the slider and chart range for a length: from 0.5 m to 12 m,
-// extended in 6 m steps while the length sits in the top quarter, up to
-// model.MaxLengthMM. Steps keep the range still while the length moves.
-func viewRange(mm float64) model.Range {
-	r := model.Range{FromMM: 500, ToMM: 12000}
-	for mm > 0.75*r.ToMM && r.ToMM < model.MaxLengthMM {
-		r.ToMM = math.Min(r.ToMM+6000, model.MaxLengthMM)
-	}
-	if mm < r.FromMM {
-		r.FromMM = model.MinLengthMM
-	}
-	return r
 }
 
 // sameButLength reports whether two schemes differ at most in their length
@@ -318,6 +307,7 @@ func sameButLength(a, b model.Scheme) bool {
 	}
 	a.Setting.LengthMM, a.Setting.WeakMM = 0, 0
 	b.Setting.LengthMM, b.Setting.WeakMM = 0, 0
+	a.Name, b.Name = "", "" // the name changes no result
 	return reflect.DeepEqual(a, b)
 }
 

@@ -69,6 +69,8 @@ type Window struct {
 	sketches    map[model.EndCondition]*widgets.EndSketch
 	weakCheck   *widget.Check
 	twistCheck  *widget.Check // the weak-axis braces also restrain twisting (steel Lcz)
+	nameEntry   *widget.Entry  // the scheme's name
+	tieSelect   *widget.Select // the near-tie tolerance
 	loadMode    *widget.RadioGroup
 	directBox   *fyne.Container
 	takedownBox *fyne.Container

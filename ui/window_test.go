@@ -112,7 +112,7 @@ func TestSliderAcrossACrossoverChangesTheAnswer(t *testing.T) {
 	})
 	k := -1
 	for i, y := range listed {
-		if y == *x {
+		if assert.ObjectsAreEqual(y, *x) {
 			k = i
 		}
 	}
@@ -187,7 +187,7 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 		{"length", "14 furlongs", "Unbraced length", []string{`"14 furlongs" is not read as a length`, units.LengthForms}},
 		{"length", "400 ft", "Unbraced length", []string{`"400 ft" is not accepted`, "from 0.3 m (1 ft) to 30 m (98 ft)"}},
 		{"dead", "-5 psf", "Floor dead load", []string{`"-5 psf" is not accepted`, "from 0 to 50 kPa"}},
-		{"tributary", "lots", "Tributary area per floor", []string{`"lots" is not read as a area`, units.AreaForms}},
+		{"tributary", "lots", "Tributary area per floor", []string{`"lots" is not read as an area`, units.AreaForms}},
 	}
 	for _, c := range cases {
 		// Pasted in one go, so no half-typed text makes a valid scheme on the way.
@@ -634,7 +634,7 @@ func TestViewRangeSteps(t *testing.T) {
 	for _, c := range []struct{ mm, to float64 }{
 		{4000, 12000}, {9000, 12000}, {9100, 18000}, {13600, 24000}, {25000, 30000}, {30000, 30000},
 	} {
-		r := viewRange(c.mm)
+		r := viewRange(c.mm, units.SI)
 		assert.Equal(t, c.to, r.ToMM, "%g mm", c.mm)
 		assert.LessOrEqual(t, r.FromMM, c.mm)
 	}

@@ -14,14 +14,12 @@ import (
 	"upright/plots"
 	"upright/ui/chart"
 	"upright/ui/model"
+	"upright/ui/schemefile"
 	"upright/ui/units"
 )
 
 // Version is the program's version, shown by --version and the about box.
 const Version = "0.1.0"
-
-// Commands lists the headless subcommands.
-var Commands = []string{"compare", "crossovers", "curve"}
 
 // IsCommand reports whether args start with a headless subcommand or a top-level flag.
 func IsCommand(args []string) bool {
@@ -32,28 +30,20 @@ func IsCommand(args []string) bool {
 	case "--version", "-version", "version", "help", "-h", "--help":
 		return true
 	}
-	for _, c := range Commands {
-		if args[0] == c {
-			return true
-		}
-	}
-	if _, ok := extraCommands[args[0]]; ok {
+	if lookup(args[0]) != nil {
 		return true
 	}
 	return strings.HasPrefix(args[0], "-")
 }
 
-// LoadScheme reads a scheme file; set by the scheme-file package when linked in.
-var LoadScheme func(path string) (model.Scheme, error)
-
 // Run runs a headless command and returns the process exit status: 0 on
-// success, 1 on a failure while computing or writing, 2 on bad input.
+// success, 1 on a failure while computing or writing, 2 on bad input (a
+// *UsageError or a *model.FieldError, found by type, never by message text).
 func Run(args []string, stdout, stderr io.Writer) int {
 	if len(args) == 0 {
 		usage(stderr)
 		return 2
 	}
-	var err error
 	switch args[0] {
 	case "--version", "-version", "version":
 		fmt.Fprintf(stdout, "upright %s\n", Version)
@@ -61,68 +51,29 @@ func Run(args []string, stdout, stderr io.Writer) int {
 	case "help", "-h", "--help":
 		usage(stdout)
 		return 0
-	case "compare":
-		err = runCompare(args[1:], stdout, stderr)
-	case "crossovers":
-		err = runCrossovers(args[1:], stdout, stderr)
-	case "curve":
-		err = runCurve(args[1:], stdout, stderr)
-	default:
-		if extra, ok := extraCommands[args[0]]; ok {
-			err = extra(args[1:], stdout, stderr)
-			break
-		}
-		fmt.Fprintf(stderr, "upright: unknown command %q; commands are %s\n", args[0], strings.Join(commandNames(), ", "))
+	}
+	c := lookup(args[0])
+	if c == nil {
+		fmt.Fprintf(stderr, "upright: unknown command %q; commands are %s\n", args[0], strings.Join(CommandNames(), ", "))
 		return 2
 	}
-	if err == nil {
-		return 0
-	}
-	if errors.Is(err, flag.ErrHelp) {
+	err := c.run(args[1:], stdout, stderr)
+	if err == nil || errors.Is(err, flag.ErrHelp) {
 		return 0
 	}
 	fmt.Fprintf(stderr, "upright %s: %v\n", args[0], err)
+	return ExitStatus(err)
+}
+
+// ExitStatus is the exit status for an error: 2 for bad input (a *UsageError
+// or a *model.FieldError anywhere in its chain), 1 for anything else.
+func ExitStatus(err error) int {
 	var ue *UsageError
 	var fe *model.FieldError
-	if errors.As(err, &ue) || errors.As(err, &fe) || strings.Contains(err.Error(), "flag provided but not defined") || strings.Contains(err.Error(), "invalid") {
+	if errors.As(err, &ue) || errors.As(err, &fe) {
 		return 2
 	}
 	return 1
-}
-
-// extraCommands are commands registered by other packages (report).
-var extraCommands = map[string]func(args []string, stdout, stderr io.Writer) error{}
-
-// RegisterCommand adds a headless subcommand.
-func RegisterCommand(name string, run func(args []string, stdout, stderr io.Writer) error) {
-	extraCommands[name] = run
-}
-
-func commandNames() []string {
-	out := append([]string{}, Commands...)
-	for k := range extraCommands {
-		out = append(out, k)
-	}
-	return out
-}
-
-func usage(w io.Writer) {
-	fmt.Fprintf(w, `upright %s: column scheme comparison (steel, concrete, timber, filled composite)
-
-  upright                       open the window
-  upright compare [flags]       lightest working size of each family at one length
-  upright crossovers [flags]    lengths where the answer changes
-  upright curve --designation NAME --from 1m --to 10m [flags]
-  upright map --length-range 1m..12m --load-range 500kN..5000kN [--steps 100x60] [flags] --out map.png (or --json)
-  upright report --scheme FILE --out report.pdf
-  upright sections [flags] --out FILE  plan sections to one scale (.png, .svg or .pdf; --json for the layout)
-  upright table [flags] --csv table.csv
-  upright scheme [flags] --out FILE     write the scheme built from the flags as a file
-  upright --version
-
-Run "upright compare -h" for the scheme flags.
-%s
-`, Version, model.Caution)
 }
 
 // schemeFrom parses flags into a scheme, starting from --scheme or the default.
@@ -138,10 +89,7 @@ func schemeFrom(f *schemeFlags, args []string) (model.Scheme, error) {
 	}
 	base := model.DefaultScheme()
 	if f.scheme != "" {
-		if LoadScheme == nil {
-			return base, usagef("--scheme %q: scheme files are not supported in this build", f.scheme)
-		}
-		sc, err := LoadScheme(f.scheme)
+		sc, err := schemefile.Load(f.scheme)
 		if err != nil {
 			return base, usagef("--scheme %q: %v", f.scheme, err)
 		}
@@ -155,6 +103,7 @@ type Candidate struct {
 	Material    string         `json:"material"`
 	Family      string         `json:"family"`
 	Designation string         `json:"designation"`
+	Status      string         `json:"status"` // works, fails or not permitted (model.Row.Status)
 	OK          bool           `json:"ok"`
 	Permitted   bool           `json:"permitted"`
 	CapacityKN  float64        `json:"capacity_kN"`
@@ -265,7 +214,7 @@ func NewCandidate(m *model.Model, r *model.Row, s model.Setting) Candidate {
 	d := m.Detail(r.Family, r.Index, s)
 	c := Candidate{
 		Material: f.Material(), Family: f.Name(), Designation: r.Static.Designation,
-		OK: r.OK, Permitted: r.Permitted,
+		Status: r.Status(), OK: r.OK, Permitted: r.Permitted,
 		CapacityKN: round(r.CapacityN/1e3, 2), DemandKN: round(r.DemandN/1e3, 2),
 		MassKgPerM: round(r.Static.MassKgPerM, 2), MassKg: round(r.Static.MassKgPerM*s.LengthMM/1000, 1),
 		FootprintMM: [2]float64{round(r.Static.FootprintMM[0], 1), round(r.Static.FootprintMM[1], 1)},
@@ -352,6 +301,13 @@ func runCompare(args []string, stdout, stderr io.Writer) error {
 	}
 	printHeader(stdout, m)
 	printTable(stdout, m, rows, units.System(sc.Units), sc.Setting)
+	if b := res.BestOverall(); b != nil {
+		fmt.Fprintf(stdout, "\nBest overall by %s: %s (%s)", sc.Metric, b.Static.Designation, m.Families[b.Family].Name())
+		if nt := m.NearTieNote(res); nt != "" {
+			fmt.Fprintf(stdout, "; %s", nt)
+		}
+		fmt.Fprintln(stdout)
+	}
 	fmt.Fprintf(stdout, "\n%s\n", model.Caution)
 	return nil
 }
@@ -365,7 +321,7 @@ func writeChart(m *model.Model, res *model.Result, path string) error {
 		return err
 	}
 	ch := chart.NewBuilder(m).Chart(res, chart.Options{Crossovers: xs, Title: m.Scheme.Name})
-	return plots.SaveChart(path, &ch, plots.DefaultExportSize)
+	return chart.Save(path, ch, plots.DefaultExportSize)
 }
 
 func endsText(s model.Setting) string {
@@ -401,7 +357,7 @@ func printHeader(w io.Writer, m *model.Model) {
 	if sc.SelfWeight {
 		fmt.Fprint(w, ", plus each column's self-weight")
 	}
-	fmt.Fprintf(w, "; ranked by %s\n", sc.Metric)
+	fmt.Fprintf(w, "; ranked by %s; near-tie tolerance %s\n", sc.Metric, strings.TrimPrefix(model.TieText(sc.Tie), "within "))
 	printFireLine(w, sc)
 	fmt.Fprintln(w, "Every combination is checked with its own factors (timber λ or CD, concrete βdns); the highest utilization governs.")
 	fmt.Fprintln(w)
@@ -418,13 +374,7 @@ func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System
 	seen := map[string]bool{}
 	var marks []string
 	for _, r := range rows {
-		status := "OK"
-		if !r.OK {
-			status = "FAILS"
-			if !r.Permitted {
-				status = "NOT PERMITTED"
-			}
-		}
+		status := r.Status()
 		capV, _ := units.ForceValue(r.CapacityN, sys)
 		demV, _ := units.ForceValue(r.DemandN, sys)
 		wt := r.Static.MassKgPerM
@@ -513,7 +463,7 @@ func DescribeCrossover(x model.Crossover) string {
 		if x.To == "" {
 			return "best overall " + x.From + " (" + x.FromDesignation + "): nothing works beyond"
 		}
-		return "best overall " + x.From + " (" + x.FromDesignation + ") → " + x.To + " (" + x.ToDesignation + ")"
+		return "best overall " + x.From + " (" + x.FromDesignation + ") → " + x.To + " (" + x.ToDesignation + ")" + nearTieText(x)
 	}
 	return x.From + " → " + x.To
 }
@@ -613,4 +563,12 @@ func runCurve(args []string, stdout, stderr io.Writer) error {
 	tw.Flush()
 	fmt.Fprintf(stdout, "\n%s\n", model.Caution)
 	return nil
+}
+
+// nearTieText appends a family change's near-ties to its description.
+func nearTieText(x model.Crossover) string {
+	if t := x.NearTieText(); t != "" {
+		return "; " + t
+	}
+	return ""
 }

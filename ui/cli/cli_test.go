@@ -3,7 +3,6 @@ package cli
 import (
 	"bytes"
 	"encoding/json"
-	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -149,7 +148,33 @@ func TestComparePlainHasCaution(t *testing.T) {
 	code, out, errOut := run("compare", "--length", "4.5m", "--load", "2500kN")
 	require.Equal(t, 0, code, errOut)
 	assert.Contains(t, out, "licensed structural engineer")
-	assert.True(t, strings.Contains(out, "kip"))
+}
+
+// The units shown follow those typed: --length first, then the scheme
+// file's, then --load or --tributary; --units overrides them all.
+func TestShownUnitsFollowTheUnitsTyped(t *testing.T) {
+	cases := []struct {
+		args     []string
+		want     []string
+		dontWant string
+	}{
+		{[]string{"--length", "4.2m", "--load", "1500kN"}, []string{"4.20 m", "kN", "kg/m"}, "kip"},
+		{[]string{"--length", "14ft", "--load", "400kip"}, []string{"kip", "lb/ft"}, "kN"},
+		{[]string{"--length", `14'-6"`, "--load", "1500kN"}, []string{"kip"}, "(kN)"},
+		{[]string{"--load", "1500kN"}, []string{"kN"}, "kip"},
+		{[]string{"--length", "4.2m", "--load", "1500kN", "--units", "us"}, []string{"kip", "lb/ft"}, "(kN)"},
+		{[]string{"--scheme", "../../testdata/schemes/demo.upright.json"}, []string{"kip"}, "(kN)"},
+		{[]string{"--scheme", "../../testdata/schemes/demo.upright.json", "--length", "6m"}, []string{"6.00 m", "kN"}, "kip"},
+		{[]string{"--scheme", "../../testdata/schemes/demo.upright.json", "--load", "1500kN"}, []string{"kip"}, "(kN)"},
+	}
+	for _, c := range cases {
+		code, out, errOut := run(append([]string{"compare"}, c.args...)...)
+		require.Equal(t, 0, code, "%v: %s", c.args, errOut)
+		for _, w := range c.want {
+			assert.Contains(t, out, w, "%v", c.args)
+		}
+		assert.NotContains(t, out, c.dontWant, "%v", c.args)
+	}
 }
 
 func TestCarbonAndMagnifierFlags(t *testing.T) {

@@ -11,16 +11,6 @@ import (
 	"upright/ui/schemefile"
 )
 
-// init links scheme files (--scheme on every command) and registers the
-// commands that write files: report (the client PDF), table (the candidate
-// table as CSV) and scheme (the scheme built from the flags, as a file).
-func init() {
-	LoadScheme = schemefile.Load
-	RegisterCommand("report", runReport)
-	RegisterCommand("table", runTable)
-	RegisterCommand("scheme", runScheme)
-}
-
 // buildModel parses the scheme flags (starting from --scheme) and builds the model.
 func buildModel(f *schemeFlags, args []string) (*model.Model, error) {
 	sc, err := schemeFrom(f, args)
@@ -76,6 +66,7 @@ func runTable(args []string, stdout, stderr io.Writer) error {
 	if err := report.WriteCSV(&buf, m, report.CSVOptions{All: *all}); err != nil {
 		return err
 	}
+	fmt.Fprintln(stderr, model.Caution)
 	if *out == "" || *out == "-" {
 		_, err := stdout.Write(buf.Bytes())
 		return err

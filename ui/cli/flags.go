@@ -45,6 +45,7 @@ type schemeFlags struct {
 
 	fillFc, compositeFamilies string
 	aggregate                 string // concrete aggregate for the fire rating
+	tie string
 }
 
 func newSchemeFlags(name string, out io.Writer) *schemeFlags {
@@ -61,7 +62,8 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.BoolVar(&f.twistBraced, "twist-braced", false, "the weak-axis braces also restrain twisting, so the steel torsional length Lcz is the weak-axis length (default: the full length)")
 	fs.StringVar(&f.method, "method", "", "lrfd or asd (default lrfd)")
 	fs.StringVar(&f.materials, "materials", "", "comma list of "+strings.Join(model.Materials(), ", ")+" (default all)")
-	fs.StringVar(&f.units, "units", "", "units shown: us or si (default us)")
+	fs.StringVar(&f.units, "units", "", "units shown: us or si (default those of --length, else of the scheme file, else us)")
+	fs.StringVar(&f.tie, "tie", "", "near-tie tolerance: the best family changes only when another beats it by more than this share of the ranking metric, e.g. 5% or 0.05 (default 5%)")
 	fs.StringVar(&f.rank, "rank", "", "ranking metric: weight, footprint or carbon (default weight)")
 	fs.BoolVar(&f.selfWeight, "self-weight", true, "add the column's own weight to the demand")
 
@@ -138,6 +140,9 @@ func flagErr(flagName, value string, err error) error {
 // build turns the parsed flags into a scheme, starting from base.
 func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 	sc := base
+	if err := f.refuseEmpty(); err != nil {
+		return sc, err
+	}
 	s := &sc.Setting
 	lengthSet := false
 	if f.length != "" {
@@ -209,6 +214,8 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 			return sc, usagef("--units %q: not accepted; give us or si", f.units)
 		}
 		sc.Units = u
+	} else if u, ok := f.typedUnits(); ok {
+		sc.Units = u
 	}
 	if f.rank != "" {
 		r := model.Metric(strings.ToLower(f.rank))
@@ -216,6 +223,13 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 			return sc, usagef("--rank %q: not accepted; give weight, footprint or carbon", f.rank)
 		}
 		sc.Metric = r
+	}
+	if f.tie != "" {
+		v, err := parseTie(f.tie)
+		if err != nil {
+			return sc, err
+		}
+		sc.Tie = v
 	}
 	if f.carbon != "" {
 		if err := f.buildCarbon(&sc); err != nil {
@@ -233,7 +247,7 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 	}
 	if err := sc.Validate(); err != nil {
 		if fe, ok := err.(*model.FieldError); ok {
-			return sc, usagef("%s %q: not accepted; give %s", fe.Field, fe.Value, fe.Accepted)
+			return sc, f.fieldUsage(fe)
 		}
 		return sc, err
 	}
@@ -242,7 +256,7 @@ func (f *schemeFlags) build(base model.Scheme) (model.Scheme, error) {
 
 func (f *schemeFlags) buildLoad(sc *model.Scheme) error {
 	takedown := f.tributary != "" || f.floors != "" || f.dead != "" || f.live != "" ||
-		f.roofDead != "" || f.roofLive != "" || f.snow != ""
+		f.roofDead != "" || f.roofLive != "" || f.snow != "" || f.kll != "" || f.occupancy != "" || f.set("no-reduction")
 	if f.load != "" && takedown {
 		return usagef("--load %q: give either --load or the takedown flags (--tributary, --floors, --dead, ...), not both", f.load)
 	}
@@ -345,6 +359,9 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 		if err != nil {
 			return flagErr("fy", f.fy, err)
 		}
+		if !(v >= model.FyMinMPa && v <= model.FyMaxMPa) {
+			return usagef("--fy %q: not accepted; give %s", f.fy, model.FyAccepted)
+		}
 		sc.Steel.FyMPa = v
 	}
 	if f.steelFamilies != "" {
@@ -367,6 +384,9 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 			} else {
 				return flagErr("fc", f.fc, err)
 			}
+		}
+		if !(v >= model.FcMinMPa && v <= model.FcMaxMPa) {
+			return usagef("--fc %q: not accepted; give %s", f.fc, model.FcAccepted)
 		}
 		c.FcMPa = v
 	}
@@ -563,4 +583,74 @@ func parseShare(s string) (float64, error) {
 		return 0, bad
 	}
 	return v, nil
+}
+// typedUnits is the unit system the user typed in: that of --length, else
+// (with no --scheme, whose own units stand) that of --load or --tributary.
+func (f *schemeFlags) typedUnits() (model.Units, bool) {
+	typed := []string{f.length}
+	if f.scheme == "" {
+		typed = append(typed, f.load, f.tributary)
+	}
+	for _, s := range typed {
+		if sys, ok := units.SystemOf(s); ok {
+			return model.Units(sys), true
+		}
+	}
+	return "", false
+}
+
+// parseTie reads --tie as a percentage (5%) or a fraction (0.05), 0 to 50%.
+func parseTie(s string) (float64, error) {
+	t := strings.TrimSpace(s)
+	scale := 1.0
+	if p, ok := strings.CutSuffix(t, "%"); ok {
+		t, scale = strings.TrimSpace(p), 0.01
+	}
+	v, err := strconv.ParseFloat(t, 64)
+	v *= scale
+	if err != nil || !(v >= 0 && v <= model.MaxTie) {
+		return 0, usagef("--tie %q: not accepted; give %s", s, model.TieAccepted)
+	}
+	return v, nil
+}
+
+// refuseEmpty refuses a text flag given with an empty value: only a flag
+// left out takes its default.
+func (f *schemeFlags) refuseEmpty() error {
+	var err error
+	f.fs.Visit(func(fl *flag.Flag) {
+		g, ok := fl.Value.(flag.Getter)
+		if !ok || err != nil {
+			return
+		}
+		if s, ok := g.Get().(string); ok && strings.TrimSpace(s) == "" {
+			err = usagef("--%s: an empty value is not accepted; give a value (%s), or leave the flag out for its default", fl.Name, fl.Usage)
+		}
+	})
+	return err
+}
+
+// fieldFlags maps the model's field names to the flags that set them.
+var fieldFlags = map[string]string{
+	"length": "length", "weak-axis length": "weak-length", "ends": "ends", "K": "k", "method": "method",
+	"load": "load", "tributary": "tributary", "floors": "floors", "dead": "dead", "live": "live",
+	"roof-dead": "roof-dead", "roof-live": "roof-live", "snow": "snow", "kll": "kll", "occupancy": "occupancy",
+	"materials": "materials", "units": "units", "rank": "rank",
+	"steel Fy": "fy", "steel families": "steel-families", "f'c": "fc", "bar grade": "bar-grade",
+	"rho-max": "rho-max", "transverse": "transverse", "m1m2": "m1m2", "beta-dns": "beta-dns", "EI method": "ei",
+	"tie": "tie", "fire": "fire", "fire sides": "fire-sides", "duration": "duration", "species": "species", "grade": "grade",
+	"dead-share": "dead-share", "fill f'c": "fill-fc", "composite families": "composite-families", "aggregate": "aggregate",
+}
+
+// fieldUsage turns a model check failure into a usage error naming the flag
+// and the text typed, or the scheme field when no flag set it.
+func (f *schemeFlags) fieldUsage(fe *model.FieldError) error {
+	if name, ok := fieldFlags[fe.Field]; ok && f.set(name) {
+		typed := f.fs.Lookup(name).Value.String()
+		return usagef("--%s %q: not accepted; give %s", name, typed, fe.Accepted)
+	}
+	if strings.HasPrefix(fe.Field, "carbon factor") && f.set("carbon") {
+		return usagef("--carbon %q: not accepted; give %s", f.carbon, fe.Accepted)
+	}
+	return usagef("%s %q (from the scheme): not accepted; give %s", fe.Field, fe.Value, fe.Accepted)
 }

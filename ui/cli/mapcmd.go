@@ -17,7 +17,6 @@ import (
 )
 
 // init registers the map command.
-func init() { RegisterCommand("map", runMap) }
 
 // MapJSON is the JSON output of the map command. Cells[i][j] is load (or
 // tributary area) i and length j; null where nothing works.

@@ -15,7 +15,6 @@ import (
 )
 
 // init registers the sections command.
-func init() { RegisterCommand("sections", runSections) }
 
 // SectionsJSON is the JSON output of the sections command: where each
 // family's best working size lies in the figure, at one scale.

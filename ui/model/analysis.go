@@ -122,6 +122,11 @@ type Crossover struct {
 	To              string  `json:"to"`        // designation or family after; "" when nothing works beyond
 	FromDesignation string  `json:"from_designation,omitempty"`
 	ToDesignation   string  `json:"to_designation,omitempty"`
+	// NearTies names, for a change of best family, the other families whose
+	// best size is within the scheme's near-tie tolerance of the new one.
+	NearTies []string `json:"near_ties,omitempty"`
+	// Tie is the near-tie tolerance the change was found with (family changes only).
+	Tie float64 `json:"tie,omitempty"`
 }
 
 type reachEntry struct {
@@ -189,23 +194,8 @@ func (m *Model) Crossovers(ctx context.Context, base Setting, r Range, show [][2
 				From: t.from.name, To: t.toName()})
 		}
 	}
-	// (c) where the best family changes.
-	var all []reachEntry
-	for fi := range reaches {
-		all = append(all, reaches[fi]...)
-	}
-	for _, t := range records(all, r) {
-		from := m.Families[t.from.fi].Name()
-		to := ""
-		if t.to != nil {
-			to = m.Families[t.to.fi].Name()
-		}
-		if from == to {
-			continue
-		}
-		out = append(out, Crossover{Kind: KindFamily, LengthMM: t.at, Family: to, From: from, To: to,
-			FromDesignation: t.from.name, ToDesignation: t.toName()})
-	}
+	// (c) where the best family changes, beyond the near-tie tolerance.
+	out = append(out, m.familyChanges(reaches, m.Scheme.Tie)...)
 	sort.SliceStable(out, func(a, b int) bool { return out[a].LengthMM < out[b].LengthMM })
 	return out, nil
 }

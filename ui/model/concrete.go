@@ -396,6 +396,7 @@ func (f *concreteFamily) calc(sec *concrete.Section, r *concrete.Result, c *conc
 		"capacity_kN":    d.CapacityN / 1e3,
 		"method":         string(s.Method),
 		"k":              g.K,
+		"k_source":       concreteKSource(s),
 		"axis":           r.Governs.String(),
 		"klu_r":          r.KLR,
 		"klu_r_x":        r.Axes[concrete.AxisX].KLR,
@@ -429,4 +430,13 @@ func (f *concreteFamily) calc(sec *concrete.Section, r *concrete.Result, c *conc
 		}
 	}
 	return calc
+}
+
+// concreteKSource says where the concrete column's K came from: typed, or the
+// recommended value for idealized ends (common practice, recalled from memory).
+func concreteKSource(s Setting) string {
+	if s.K != 0 {
+		return "typed"
+	}
+	return string(s.Ends) + " (common practice for idealized ends, as AISC 360-22 C-A-7.1, from memory)"
 }

@@ -26,8 +26,8 @@ func defaultConcreteOptions() ConcreteOptions {
 }
 
 func (c ConcreteOptions) validate() error {
-	if c.FcMPa != 0 && (!finite(c.FcMPa) || c.FcMPa < 27.5 || c.FcMPa > 69) {
-		return bad("f'c", c.FcMPa, "a concrete strength from 4,000 to 10,000 psi (27.6 to 69 MPa)")
+	if c.FcMPa != 0 && (!finite(c.FcMPa) || c.FcMPa < FcMinMPa || c.FcMPa > FcMaxMPa) {
+		return bad("f'c", c.FcMPa, FcAccepted)
 	}
 	if c.BarGrade != 60 && c.BarGrade != 80 {
 		return bad("bar grade", c.BarGrade, "60 or 80")

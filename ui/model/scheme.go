@@ -41,6 +41,9 @@ type Scheme struct {
 	Metric     Metric
 	Carbon     CarbonFactors
 	ReportMap  bool // put the map of the winning family in the client report
+	// Tie is the near-tie tolerance, a fraction of the ranking metric: the
+	// best family changes only when another beats it by more than this.
+	Tie float64
 }
 
 // CarbonFactors are cradle-to-gate (A1–A3) embodied-carbon factors per kind
@@ -64,6 +67,7 @@ func DefaultScheme() Scheme {
 		Units:      US,
 		Metric:     ByWeight,
 		Carbon:     DefaultCarbon(),
+		Tie:        DefaultTie,
 	}
 }
 
@@ -75,7 +79,7 @@ type FieldError struct {
 }
 
 func (e *FieldError) Error() string {
-	return fmt.Sprintf("%s: %q is not accepted; %s", e.Field, e.Value, e.Accepted)
+	return fmt.Sprintf("%s: %q is not accepted; give %s", e.Field, e.Value, e.Accepted)
 }
 
 func bad(field string, v any, accepted string) error {
@@ -138,6 +142,9 @@ func (sc *Scheme) Validate() error {
 	}
 	if err := sc.Fire.validate(); err != nil {
 		return err
+	}
+	if !finite(sc.Tie) || sc.Tie < 0 || sc.Tie > MaxTie {
+		return bad("tie", sc.Tie, TieAccepted)
 	}
 	for k, v := range sc.Carbon {
 		if !finite(v) || v < 0 || v > 10000 {

@@ -258,7 +258,7 @@ func (f *steelFamily) Detail(i int, s Setting) Detail {
 	}
 	kSource := "typed"
 	if s.K == 0 {
-		kSource = string(s.Ends) + " (AISC 360-22 Commentary Table C-A-7.1)"
+		kSource = string(s.Ends) + " (AISC 360-22 Commentary Table C-A-7.1, from memory)"
 	}
 	var fez any // not computed for closed sections
 	if r.Fez > 0 {

@@ -16,8 +16,8 @@ const steelFamiliesAccepted = "a comma list of W, HP, HSS square, HSS rectangula
 func defaultSteelOptions() SteelOptions { return SteelOptions{} }
 
 func (o SteelOptions) validate() error {
-	if o.FyMPa != 0 && (!finite(o.FyMPa) || o.FyMPa < 200 || o.FyMPa > 700) {
-		return bad("steel Fy", o.FyMPa, "a yield stress from 200 to 700 MPa (29 to 100 ksi)")
+	if o.FyMPa != 0 && (!finite(o.FyMPa) || o.FyMPa < FyMinMPa || o.FyMPa > FyMaxMPa) {
+		return bad("steel Fy", o.FyMPa, FyAccepted)
 	}
 	for _, n := range o.Families {
 		known := false

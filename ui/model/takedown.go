@@ -122,7 +122,7 @@ func liveMultiplier(l Load, kll, atM2 float64) (float64, []Step) {
 	if l.Occupancy == OccAssembly && !heavy {
 		// ASCE 7-22 4.7.5: live loads of 100 psf or less in assembly uses are
 		// not reduced (above 100 psf, 4.7.3 below governs).
-		return 1, []Step{{"ASCE 7-22 4.7.5", "L/Lo", "assembly occupancy, 4.79 kPa (100 psf) or less: not reduced", 1, ""}}
+		return 1, []Step{{"ASCE 7-22 4.7.5 (limit from memory)", "L/Lo", "assembly occupancy, 4.79 kPa (100 psf) or less: not reduced", 1, ""}}
 	}
 	kllAT := kll * atM2
 	st = append(st, Step{"ASCE 7-22 4.7.2", "KLL·AT", "KLL × AT", kllAT, "m2"})
@@ -140,15 +140,15 @@ func liveMultiplier(l Load, kll, atM2 float64) (float64, []Step) {
 		}
 		if m < floor {
 			m = floor
-			st = append(st, Step{"ASCE 7-22 4.7.2", "L/Lo", fmt.Sprintf("not less than %.2f for %d floor(s) supported", floor, l.Floors), m, ""})
+			st = append(st, Step{"ASCE 7-22 4.7.2 (limit from memory)", "L/Lo", fmt.Sprintf("not less than %.2f for %d %s supported", floor, l.Floors, plural(l.Floors, "floor", "floors")), m, ""})
 		}
 	} else {
-		st = append(st, Step{"ASCE 7-22 4.7.2", "L/Lo", "KLL·AT below 37.16 m² (400 ft²): not reduced", 1, ""})
+		st = append(st, Step{"ASCE 7-22 4.7.2 (limit from memory)", "L/Lo", "KLL·AT below 37.16 m² (400 ft²): not reduced", 1, ""})
 	}
 	if heavy || l.Occupancy == OccGarage {
-		clause, why := "ASCE 7-22 4.7.3", "live load above 4.79 kPa (100 psf)"
+		clause, why := "ASCE 7-22 4.7.3 (limit from memory)", "live load above 4.79 kPa (100 psf)"
 		if !heavy {
-			clause, why = "ASCE 7-22 4.7.4", "passenger-vehicle garage"
+			clause, why = "ASCE 7-22 4.7.4 (limit from memory)", "passenger-vehicle garage"
 		}
 		if l.Floors >= 2 {
 			// Two or more floors: reduction permitted up to 20%.
@@ -179,21 +179,21 @@ type comboDef struct {
 // scope for a gravity column. The load factor on L in combination 3 is kept
 // at 1.0 (the 0.5 of exception 1 is not taken).
 var lrfdDefs = []comboDef{
-	{"LRFD 1: 1.4D", "ASCE 7-22 2.3.1 combination 1", 1.4, 0, 0, 0, 0.6},
-	{"LRFD 2: 1.2D + 1.6L + 0.5Lr", "ASCE 7-22 2.3.1 combination 2", 1.2, 1.6, 0.5, 0, 0.8},
-	{"LRFD 2: 1.2D + 1.6L + 0.5S", "ASCE 7-22 2.3.1 combination 2", 1.2, 1.6, 0, 0.5, 0.8},
-	{"LRFD 3: 1.2D + 1.6Lr + L", "ASCE 7-22 2.3.1 combination 3", 1.2, 1.0, 1.6, 0, 0.8},
-	{"LRFD 3: 1.2D + 1.6S + L", "ASCE 7-22 2.3.1 combination 3", 1.2, 1.0, 0, 1.6, 0.8},
+	{"LRFD 1: 1.4D", "ASCE 7-22 2.3.1 combination 1 (factors from memory)", 1.4, 0, 0, 0, 0.6},
+	{"LRFD 2: 1.2D + 1.6L + 0.5Lr", "ASCE 7-22 2.3.1 combination 2 (factors from memory)", 1.2, 1.6, 0.5, 0, 0.8},
+	{"LRFD 2: 1.2D + 1.6L + 0.5S", "ASCE 7-22 2.3.1 combination 2 (factors from memory)", 1.2, 1.6, 0, 0.5, 0.8},
+	{"LRFD 3: 1.2D + 1.6Lr + L", "ASCE 7-22 2.3.1 combination 3 (factors from memory)", 1.2, 1.0, 1.6, 0, 0.8},
+	{"LRFD 3: 1.2D + 1.6S + L", "ASCE 7-22 2.3.1 combination 3 (factors from memory)", 1.2, 1.0, 0, 1.6, 0.8},
 }
 
 // Gravity combinations of ASCE 7-22 2.4.1 (ASD); W and E out of scope.
 var asdDefs = []comboDef{
-	{"ASD 1: D", "ASCE 7-22 2.4.1 combination 1", 1, 0, 0, 0, 0},
-	{"ASD 2: D + L", "ASCE 7-22 2.4.1 combination 2", 1, 1, 0, 0, 0},
-	{"ASD 3: D + Lr", "ASCE 7-22 2.4.1 combination 3", 1, 0, 1, 0, 0},
-	{"ASD 3: D + S", "ASCE 7-22 2.4.1 combination 3", 1, 0, 0, 1, 0},
-	{"ASD 4: D + 0.75L + 0.75Lr", "ASCE 7-22 2.4.1 combination 4", 1, 0.75, 0.75, 0, 0},
-	{"ASD 4: D + 0.75L + 0.75S", "ASCE 7-22 2.4.1 combination 4", 1, 0.75, 0, 0.75, 0},
+	{"ASD 1: D", "ASCE 7-22 2.4.1 combination 1 (factors from memory)", 1, 0, 0, 0, 0},
+	{"ASD 2: D + L", "ASCE 7-22 2.4.1 combination 2 (factors from memory)", 1, 1, 0, 0, 0},
+	{"ASD 3: D + Lr", "ASCE 7-22 2.4.1 combination 3 (factors from memory)", 1, 0, 1, 0, 0},
+	{"ASD 3: D + S", "ASCE 7-22 2.4.1 combination 3 (factors from memory)", 1, 0, 0, 1, 0},
+	{"ASD 4: D + 0.75L + 0.75Lr", "ASCE 7-22 2.4.1 combination 4 (factors from memory)", 1, 0.75, 0.75, 0, 0},
+	{"ASD 4: D + 0.75L + 0.75S", "ASCE 7-22 2.4.1 combination 4 (factors from memory)", 1, 0.75, 0, 0.75, 0},
 }
 
 // lambdaOf returns the NDS 2018 Table N3 λ of an LRFD combination: 0.7
@@ -354,4 +354,12 @@ func combine(ls *LoadSummary, v loads, occ string, m Method, steps []Step) {
 	ls.GoverningName = comboLabel(&ls.Combos[ls.Governing], v)
 	ls.DirectDeadFactor = ls.Combos[ls.Governing].D
 	ls.Steps = steps
+}
+
+// plural picks the singular or plural noun for a count.
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
 }

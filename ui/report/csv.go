@@ -110,13 +110,7 @@ func WriteCSV(w io.Writer, m *model.Model, opt CSVOptions) error {
 			if !opt.All && !r.OK {
 				break // working rows come first
 			}
-			status := "ok"
-			switch {
-			case !r.Permitted:
-				status = "not permitted"
-			case !r.OK:
-				status = "fails"
-			}
+			status := r.Status()
 			capV, _ := units.ForceValue(r.CapacityN, sys)
 			demV, _ := units.ForceValue(r.DemandN, sys)
 			util := ""

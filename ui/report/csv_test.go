@@ -10,6 +10,7 @@ import (
 	"github.com/stretchr/testify/assert"
 	"github.com/stretchr/testify/require"
 
+	"upright/ui/model"
 	"upright/ui/units"
 )
 
@@ -60,7 +61,7 @@ func TestCSVTableMatchesTheModel(t *testing.T) {
 				col[h] = i
 			}
 			for _, rec := range recs[1:] {
-				assert.Equal(t, "ok", rec[col["status"]])
+				assert.Equal(t, model.StatusWorks, rec[col["status"]])
 				u, err := strconv.ParseFloat(rec[col["utilization"]], 64)
 				require.NoError(t, err)
 				assert.LessOrEqual(t, u, 1.0)

@@ -108,6 +108,7 @@ func gather(ctx context.Context, m *model.Model, opt Options) (*facts, error) {
 	}
 	var buf bytes.Buffer
 	size := plots.Size{Width: 720, Height: 430, DPI: opt.ChartDPI}
+	ch = chart.WithCaution(ch) // the figure keeps the caution if lifted out of the report
 	if err := plots.WriteChart(&buf, plots.PNG, &ch, size); err != nil {
 		return nil, fmt.Errorf("report: drawing the chart: %w", err)
 	}

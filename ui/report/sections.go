@@ -207,6 +207,9 @@ func summary(d *doc, f *facts) {
 		text += fmt.Sprintf(" Ranked by %s, the best working column overall is %s (%s): %s, %s plan, %s per column.",
 			metricWords(sc.Metric), best.Static.Designation, familyLabel(fam),
 			units.MassPerLength(best.Static.MassKgPerM, f.sys), units.PlanSize(best.Static.FootprintMM, f.sys), scoreText(f, best))
+		if nt := f.m.NearTieNote(f.res); nt != "" {
+			text += " Near-ties, " + nt + "."
+		}
 	} else {
 		text += " No candidate of any family carries this demand at this length."
 	}
@@ -282,7 +285,7 @@ func inputs(d *doc, f *facts) {
 	}
 	addQ("Unbraced length (strong axis)", units.Length, s.LengthMM)
 	addQ("Unbraced length (weak axis)", units.Length, s.WeakMM)
-	kText := "recommended design value of each material for the end condition"
+	kText := "recommended design value of each material for the end condition (each table recalled from memory)"
 	if s.K > 0 {
 		kText = fmt.Sprintf("K = %.2f, typed", s.K)
 	}
@@ -545,7 +548,11 @@ func describe(x model.Crossover) string {
 		if x.To == "" {
 			return "beyond this length no family works (last: " + x.From + ", " + x.FromDesignation + ")"
 		}
-		return "the best family changes from " + x.From + " (" + x.FromDesignation + ") to " + x.To + " (" + x.ToDesignation + ")"
+		s := "the best family changes from " + x.From + " (" + x.FromDesignation + ") to " + x.To + " (" + x.ToDesignation + ")"
+		if nt := x.NearTieText(); nt != "" {
+			s += "; " + nt
+		}
+		return s
 	}
 	return x.From + " → " + x.To
 }
@@ -839,11 +846,16 @@ func assumptions(d *doc, f *facts) {
 		if !ok {
 			v = model.DefaultCarbon()[k.Key]
 		}
-		cf = append(cf, fmt.Sprintf("%s %s %s", strings.ToLower(k.Name), trimFloat(v), k.FactorUnit))
+		src := "typed"
+		if v == model.DefaultCarbon()[k.Key] {
+			src = "from memory"
+		}
+		cf = append(cf, fmt.Sprintf("%s %s %s (%s)", strings.ToLower(k.Name), trimFloat(v), k.FactorUnit, src))
 	}
 	items = append(items, "Ranking: working sizes (strength at least the demand, self-weight included) are ranked by "+metricWords(sc.Metric)+". Embodied-carbon factors, cradle to gate (A1–A3): "+strings.Join(cf, "; ")+".")
-	items = append(items, fmt.Sprintf("Crossover lengths are searched from %s to %s and found to within ±%.0f mm.",
-		f.both(units.Length, f.opt.Range.FromMM), f.both(units.Length, f.opt.Range.ToMM), model.ToleranceMM))
+	items = append(items, fmt.Sprintf("Crossover lengths are searched from %s to %s and found to within ±%.0f mm; near-tie tolerance %s.",
+		f.both(units.Length, f.opt.Range.FromMM), f.both(units.Length, f.opt.Range.ToMM), model.ToleranceMM,
+		strings.TrimPrefix(model.TieText(sc.Tie), "within ")))
 	d.bullets(items, sizeBody-0.5)
 	assumptionsTable(d)
 }

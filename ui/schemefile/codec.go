@@ -9,6 +9,7 @@ import (
 	"strings"
 
 	"upright/ui/model"
+	"upright/ui/units"
 )
 
 // FormatName is the value of every scheme file's "format" field.
@@ -25,7 +26,7 @@ const MaxSize = 1 << 20
 
 // The file's objects and their fields, in the order Marshal writes them.
 var (
-	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "composite", "fire", "carbon"}
+	topKeys      = []string{"format", "version", "name", "units", "rank", "setting", "load", "self_weight", "materials", "steel", "concrete", "timber", "composite", "fire", "carbon", "tie"}
 	settingKeys  = []string{"length", "weak_axis_length", "ends", "k", "method", "twist_braced"}
 	loadKeys     = []string{"mode", "direct", "dead_share", "takedown"}
 	takedownKeys = []string{"tributary_area", "floors", "floor_dead", "floor_live", "roof_dead", "roof_live", "snow", "live_reduction", "kll", "occupancy"}
@@ -55,6 +56,7 @@ type wFile struct {
 	Fire       wFire     `json:"fire"`
 	Carbon     wCarbon   `json:"carbon"`
 	ReportMap  bool      `json:"report_map"`
+	Tie        float64   `json:"tie"`
 }
 
 type wFire struct {
@@ -184,6 +186,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 			},
 		},
 		SelfWeight: sc.SelfWeight,
+		Tie:        sc.Tie,
 		Materials:  append([]string{}, sc.Materials...),
 		Steel:      wSteel{Families: append([]string{}, sc.Steel.Families...)},
 		Concrete: wConcrete{
@@ -351,7 +354,8 @@ func (r *reader) str(n *node, path, key, give string) (string, error) {
 	return v.str, nil
 }
 
-// optStr reads a string where null means "" (the model's default).
+// optStr reads a string where null means "" (the model's default); an
+// empty string given is refused, since only null means the default.
 func (r *reader) optStr(n *node, path, key, give string) (string, error) {
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
@@ -361,6 +365,9 @@ func (r *reader) optStr(n *node, path, key, give string) (string, error) {
 	case kindNull:
 		return "", nil
 	case kindString:
+		if v.str == "" {
+			return "", r.errAt(v, fp, fmt.Sprintf(`"" is not accepted; give %s`, give))
+		}
 		return v.str, nil
 	}
 	return "", r.errAt(v, fp, fmt.Sprintf("expected a string or null; found %s; give %s", v.kind, give))
@@ -397,7 +404,9 @@ func (r *reader) num(n *node, path, key, give string) (float64, error) {
 	return r.numberOf(v, fp, give)
 }
 
-// optNum reads a number where null means 0 (the model's default).
+// optNum reads a number where null means 0 (the model's default); a number
+// given as 0 is refused, since only null (or, for new fields, absence) means
+// the default.
 func (r *reader) optNum(n *node, path, key, give string) (float64, error) {
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
@@ -409,7 +418,11 @@ func (r *reader) optNum(n *node, path, key, give string) (float64, error) {
 	if v.kind != kindNumber {
 		return 0, r.errAt(v, fp, fmt.Sprintf("expected a number or null; found %s; give %s", v.kind, give))
 	}
-	return r.numberOf(v, fp, give)
+	x, err := r.numberOf(v, fp, give)
+	if err == nil && x == 0 {
+		return 0, r.errAt(v, fp, fmt.Sprintf("%s is not accepted; give %s", v.num, give))
+	}
+	return x, err
 }
 
 // integer reads a whole number.
@@ -429,7 +442,7 @@ func (r *reader) integer(n *node, path, key, give string) (int, error) {
 }
 
 func (r *reader) quantity(n *node, path, key string, k kind) (float64, error) {
-	give := fmt.Sprintf("a %s with its unit, e.g. %s", k.name, k.example)
+	give := fmt.Sprintf("%s with its unit, e.g. %s", units.Article(k.name), k.example)
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
 		return 0, err
@@ -444,9 +457,10 @@ func (r *reader) quantity(n *node, path, key string, k kind) (float64, error) {
 	return x, nil
 }
 
-// optQuantity reads a quantity where null means 0 (the model's default).
+// optQuantity reads a quantity where null means 0 (the model's default); a
+// quantity given as zero is refused, since only null means the default.
 func (r *reader) optQuantity(n *node, path, key string, k kind, null string) (float64, error) {
-	give := fmt.Sprintf("a %s with its unit, e.g. %s, or null for %s", k.name, k.example, null)
+	give := fmt.Sprintf("%s with its unit, e.g. %s, or null for %s", units.Article(k.name), k.example, null)
 	v, fp, err := r.field(n, path, key, give)
 	if err != nil {
 		return 0, err
@@ -458,6 +472,9 @@ func (r *reader) optQuantity(n *node, path, key string, k kind, null string) (fl
 		x, err := k.read(v.str)
 		if err != nil {
 			return 0, r.errAt(v, fp, err.Error())
+		}
+		if x == 0 {
+			return 0, r.errAt(v, fp, fmt.Sprintf("%q is not accepted; give %s", v.str, give))
 		}
 		return x, nil
 	}
@@ -583,7 +600,19 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 	if e := r.reportMap(root, &sc); e != nil {
 		return sc, e
 	}
-	return sc, nil
+	return sc, r.tie(root, &sc)
+}
+
+// tie reads the near-tie tolerance, a fraction; a file without it (written
+// before the field existed) takes model.DefaultTie.
+func (r *reader) tie(root *node, sc *model.Scheme) error {
+	sc.Tie = model.DefaultTie
+	if root.get("tie") == nil {
+		return nil
+	}
+	v, err := r.num(root, "", "tie", "the near-tie tolerance as a fraction from 0 to 0.5, e.g. 0.05")
+	sc.Tie = v
+	return err
 }
 
 func (r *reader) setting(root *node, s *model.Setting) error {

@@ -19,6 +19,13 @@
 //
 // Dimensionless values (k, kll, rho_max, m1_m2, beta_dns) are JSON numbers;
 // counts (floors, bar_grade, fire_sides) are whole JSON numbers.
+// "tie" is the one field that may be absent: files written before it
+// existed read with the default, 0.05 (5%); Marshal always writes it. The
+// format version stays 1 for it.
+//
+// Where null means a default (k, kll, fy, fc, duration), only null means it:
+// a value given there is checked against its range like any other, so 0 or
+// "0 psi" is refused rather than read as the default.
 //
 //	{
 //	  "format": "upright-scheme",      always this string
@@ -109,9 +116,11 @@
 //	    "glulam": "137 kg CO2e/m³",
 //	    "gypsum-board": "0.25 kg CO2e/kg"  optional; absent: the default
 //	  },
-//	  "report_map": false              put the map of the winning family over
+//	  "report_map": false,             put the map of the winning family over
 //	                                   length and load in the client report;
 //	                                   optional: absent reads as false
+//	  "tie": 0.05                      near-tie tolerance, a fraction 0 to 0.5 of
+//	                                   the ranking metric; may be absent (0.05)
 //	}
 //
 // The "composite" object and each of its fields may be left out: a file

@@ -84,12 +84,12 @@ func (k kind) read(s string) (float64, error) {
 	v, err := k.parse(s)
 	if err != nil {
 		if pe, ok := err.(*units.ParseError); ok {
-			return 0, fmt.Errorf("cannot read %q as a %s; give %s", s, k.name, pe.Accepted)
+			return 0, fmt.Errorf("cannot read %q as %s; give %s", s, units.Article(k.name), pe.Accepted)
 		}
-		return 0, fmt.Errorf("cannot read %q as a %s: %v", s, k.name, err)
+		return 0, fmt.Errorf("cannot read %q as %s: %v", s, units.Article(k.name), err)
 	}
 	if math.IsNaN(v) || math.IsInf(v, 0) {
-		return 0, fmt.Errorf("%q is too large to be a %s", s, k.name)
+		return 0, fmt.Errorf("%q is too large to be %s", s, units.Article(k.name))
 	}
 	return v, nil
 }

@@ -109,6 +109,7 @@ func genScheme(t *rapid.T) model.Scheme {
 	sc.Composite.Families = subset(t, model.CompositeFamilies, "composite families")
 	sc.Composite.FillFcMPa = maybeZero(t, model.MinFillFcMPa, model.MaxFillFcMPa, "fill fc")
 
+	sc.Tie = rapid.Float64Range(0, model.MaxTie).Draw(t, "tie")
 	sc.Carbon = model.CarbonFactors{}
 	for _, k := range model.CarbonKinds {
 		sc.Carbon[k.Key] = rapid.Float64Range(0, 10000).Draw(t, "carbon "+k.Key)
@@ -158,7 +159,7 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 	}
 	walk("", reflect.TypeOf(model.Scheme{}))
 	want := []string{
-		"Name", "Units", "Metric", "SelfWeight", "Materials", "Carbon", "ReportMap",
+		"Name", "Units", "Metric", "SelfWeight", "Materials", "Carbon", "ReportMap", "Tie",
 		"Setting.LengthMM", "Setting.WeakMM", "Setting.Ends", "Setting.K", "Setting.Method", "Setting.TwistBraced",
 		"Load.Mode", "Load.DirectN", "Load.DeadShare", "Load.TributaryM2", "Load.Floors", "Load.FloorDeadKPa", "Load.FloorLiveKPa",
 		"Load.RoofDeadKPa", "Load.RoofLiveKPa", "Load.SnowKPa", "Load.LiveReduction", "Load.KLL", "Load.Occupancy",

@@ -38,7 +38,7 @@ type ParseError struct {
 }
 
 func (e *ParseError) Error() string {
-	return fmt.Sprintf("cannot read %q as a %s; accepted: %s", e.Value, e.Kind, e.Accepted)
+	return fmt.Sprintf("cannot read %q as %s; accepted: %s", e.Value, Article(e.Kind), e.Accepted)
 }
 
 // Accepted forms, shown in messages.

@@ -1,0 +1,36 @@
+package ui
+
+import (
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+)
+
+// The near-tie tolerance is a setting of the window: choosing it changes the
+// scheme, and the table's note lists the families within it of the best.
+func TestNearTieToleranceSetting(t *testing.T) {
+	h := newHarness(t, DemoScheme())
+	h.ui(func() {
+		assert.Equal(t, "5%", h.w.tieSelect.Selected, "the demo uses the default")
+		h.w.tieSelect.SetSelected("10%")
+	})
+	h.settle()
+	h.ui(func() {
+		assert.Equal(t, 0.10, h.w.st.Valid.Tie)
+		note := h.w.tableNote.Text
+		assert.True(t, strings.Contains(note, "within 10%: "), note)
+		h.w.tieSelect.SetSelected("none")
+	})
+	h.settle()
+	h.ui(func() {
+		assert.Equal(t, 0.0, h.w.st.Valid.Tie)
+		assert.NotContains(t, h.w.tableNote.Text, "within")
+	})
+	// A scheme with another tolerance shows it.
+	sc := DemoScheme()
+	sc.Tie = 0.07
+	h.ui(func() { h.w.LoadScheme(sc) })
+	h.settle()
+	h.ui(func() { assert.Equal(t, "7%", h.w.tieSelect.Selected) })
+}

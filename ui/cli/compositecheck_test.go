@@ -172,7 +172,7 @@ func TestDefaultCompareListsComposite(t *testing.T) {
 	for _, fam := range model.CompositeFamilies {
 		assert.Contains(t, out, fam)
 	}
-	assert.Contains(t, out, " filled, 5 ksi")
+	assert.Contains(t, out, " filled, 35 MPa", "SI, as --length was typed; the SI default f'c")
 	assert.Contains(t, out, model.Caution)
 }
 
@@ -203,7 +203,7 @@ func TestFillFcFlag(t *testing.T) {
 		require.NotEmpty(t, arr)
 		return arr[0].Calc["fc_MPa"].(float64)
 	}
-	assert.InDelta(t, 5*units.MPaPerKsi, fcOf(), 0.01, "default: the concrete default, 5,000 psi")
+	assert.InDelta(t, 35, fcOf(), 0.01, "default: the concrete default of the units typed (SI: 35 MPa)")
 	assert.InDelta(t, 6*units.MPaPerKsi, fcOf("--fc", "6ksi"), 0.01, "the fill follows --fc")
 	assert.InDelta(t, 3*units.MPaPerKsi, fcOf("--fc", "6ksi", "--fill-fc", "3000psi"), 0.01, "--fill-fc wins")
 	assert.InDelta(t, 40, fcOf("--fill-fc", "40MPa"), 0.01)

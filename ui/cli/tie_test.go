@@ -49,14 +49,14 @@ func TestTieFlagOnTheDemo(t *testing.T) {
 		assert.Contains(t, errOut, "0 to 50%", bad)
 	}
 	// compare names the best overall and the families within the tolerance.
-	code, out, errOut := run("compare", "--scheme", "../../testdata/schemes/demo.upright.json", "--tie", "10%")
+	code, out, errOut := run("compare", "--scheme", "../../testdata/schemes/demo.upright.json", "--tie", "20%")
 	require.Equal(t, 0, code, errOut)
-	assert.Contains(t, out, "near-tie tolerance 10%")
+	assert.Contains(t, out, "near-tie tolerance 20%")
 	line := ""
 	for _, l := range strings.Split(out, "\n") {
 		if strings.HasPrefix(l, "Best overall") {
 			line = l
 		}
 	}
-	assert.Contains(t, line, "within 10%: ")
+	assert.Contains(t, line, "within 20%: ") // glulam 29.7 lb/ft, HSS13.375X0.250 35.1 lb/ft at 18 ft
 }

@@ -49,6 +49,7 @@ func Run(args []string) int {
 	}
 	app.SetMetadata(meta)
 	prefs := a.Preferences()
+	area, areaScale, _ := workArea(a)
 	auto := autosavePath(a)
 	sc, path, clean, msg := startupScheme(prefs, auto)
 	w := NewWindow(a, sc)
@@ -62,7 +63,8 @@ func Run(args []string) int {
 	// Quit from the menu ends the app without the close intercept: the
 	// autosave still gets the last scheme.
 	a.Lifecycle().SetOnStopped(w.stopAutosave)
-	w.win.Resize(savedSize(prefs))
+	w.win.Resize(savedSize(prefs, area))
+	w.refitAfterShow(area, areaScale)
 	w.win.SetCloseIntercept(func() {
 		storeSize(prefs, w.win.Canvas().Size())
 		if w.st.HaveValid {

@@ -540,7 +540,7 @@ func TestSchemeAndSizeComeBackThroughPreferences(t *testing.T) {
 	assert.Equal(t, sc.Name, back.Name)
 	assert.InDelta(t, 7100, back.Setting.LengthMM, 1e-9)
 	assert.Equal(t, model.SI, back.Units)
-	assert.Equal(t, fyne.NewSize(1200, 800), savedSize(p))
+	assert.Equal(t, fyne.NewSize(1200, 800), savedSize(p, fyne.Size{}))
 	// A stored scheme that no longer validates falls back to the demo, saying why.
 	p.SetString(prefScheme, `{"Setting":{"LengthMM":-4}}`)
 	back, err = savedScheme(p)

@@ -59,4 +59,9 @@ type Chart struct {
 	XRange *Range
 	// YRange fixes the y axis; nil uses zero to a little above the data, capped by DemandCapFactor.
 	YRange *Range
+	// KeyNote, when set, says the series are also keyed outside the chart
+	// (beside the rows of a table, say): when the full legend would not fit,
+	// the legend then lists only the pinned series, the reference keys and
+	// this note, instead of hiding candidates.
+	KeyNote string
 }

@@ -107,6 +107,9 @@ type Window struct {
 	tableMethod model.Method // method of the headers shown
 	tableNote   *widget.Label
 	showAllChk  *widget.Check
+	allColsChk  *widget.Check
+	fit         tableFit               // the columns the table's width holds
+	keys        map[string]*image.RGBA // each drawn curve's key, by designation
 
 	// calculation view
 	calcTitle *widget.Label
@@ -367,6 +370,7 @@ func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
 			w.front = image.NewRGBA(b)
 		}
 		copy(w.front.Pix, img.Pix)
+		w.takeKeys(info.Keys)
 		w.frame = info
 		w.frames++
 		if w.frames == 1 {

@@ -347,7 +347,7 @@ func TestSortingByAColumn(t *testing.T) {
 		assert.True(t, strings.HasSuffix(h.w.headerText(col), "▼"))
 		// Clicking the header sorts too.
 		hdr := h.w.table.CreateHeader()
-		h.w.table.UpdateHeader(widget.TableCellID{Row: -1, Col: columnIndex("util")}, hdr)
+		h.w.table.UpdateHeader(widget.TableCellID{Row: -1, Col: h.w.tableColOf("util")}, hdr)
 		test.Tap(hdr.(*widget.Button))
 		assert.Equal(t, columnIndex("util"), h.w.sortCol)
 		for i := 1; i < len(h.w.rows); i++ {

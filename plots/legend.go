@@ -145,7 +145,9 @@ func (l *legend) build(ch *Chart, offScale []bool, maxWidth vg.Length, pinnedOnl
 		l.rows = append(l.rows, legendRow{kind: rowCrossover, text: "Crossover"})
 	}
 	for _, n := range notes {
-		l.rows = append(l.rows, legendRow{kind: rowNote, text: n})
+		for _, line := range wrapText(l.note, n, maxWidth) {
+			l.rows = append(l.rows, legendRow{kind: rowNote, text: line})
+		}
 	}
 }
 

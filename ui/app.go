@@ -67,6 +67,7 @@ func Run(args []string) int {
 	w.refitAfterShow(area, areaScale)
 	w.win.SetCloseIntercept(func() {
 		storeSize(prefs, w.win.Canvas().Size())
+		w.storeLayout(prefs)
 		if w.st.HaveValid {
 			storeScheme(prefs, w.st.Valid)
 		}

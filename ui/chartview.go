@@ -121,7 +121,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		func() fyne.CanvasObject {
 			top := widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
 			desc := widget.NewLabel("")
-			desc.Truncation = fyne.TextTruncateEllipsis
+			desc.Wrapping = fyne.TextWrapWord
 			desc.SizeName = theme.SizeNameCaptionText
 			return container.NewVBox(top, desc)
 		},
@@ -143,7 +143,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 	xsHead := container.NewVBox(
 		widget.NewLabelWithStyle("Crossovers", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
 		w.xsStatus, w.xsAllCheck)
-	xsPanel := container.NewBorder(xsHead, nil, nil, nil, w.xsList)
+	xsPanel := container.NewBorder(xsHead, nil, nil, nil, container.New(&widthWatch{onChange: func(float32) { w.fitCrossoverHeights() }}, w.xsList))
 	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, chartStack), xsPanel
 }
 
@@ -285,6 +285,7 @@ func (w *Window) filterCrossovers() {
 	default:
 		w.xsStatus.SetText(fmt.Sprintf("%d lengths where the answer changes (each the last length at which the first answer holds). Choose one to move there.", len(w.xs)))
 	}
+	w.fitCrossoverHeights()
 	w.xsList.Refresh()
 }
 

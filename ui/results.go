@@ -74,7 +74,7 @@ func (w *Window) buildResults() fyne.CanvasObject {
 	w.tableNote.Importance = widget.LowImportance
 	w.tableNote.Wrapping = fyne.TextWrapWord
 	title := widget.NewLabelWithStyle("Results", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-	head := container.NewBorder(nil, nil, title, container.NewHBox(w.showAllChk, w.allColsChk), w.tableNote)
+	head := container.NewVBox(container.NewBorder(nil, nil, title, container.NewHBox(w.showAllChk, w.allColsChk)), w.tableNote)
 	watch := container.New(&widthWatch{onChange: func(width float32) {
 		w.fit.width = width
 		if w.ctx.m != nil {
@@ -280,7 +280,7 @@ func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
 		func() (int, int) { return len(*rows), len(widths) },
 		func() fyne.CanvasObject {
 			l := widget.NewLabel("")
-			l.Truncation = fyne.TextTruncateEllipsis
+			l.Truncation = fyne.TextTruncateClip
 			return l
 		},
 		func(id widget.TableCellID, o fyne.CanvasObject) {
@@ -289,22 +289,11 @@ func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
 				l.SetText("")
 				return
 			}
-			s := (*rows)[id.Row]
-			v, u := units.Convert(s.Value, s.Unit, sys())
 			l.Alignment = fyne.TextAlignLeading
-			switch id.Col {
-			case 0:
-				l.SetText(s.Quantity)
-			case 1:
+			if id.Col == 1 {
 				l.Alignment = fyne.TextAlignTrailing
-				l.SetText(stepValue(v))
-			case 2:
-				l.SetText(u)
-			case 3:
-				l.SetText(s.Clause)
-			case 4:
-				l.SetText(s.Formula)
 			}
+			l.SetText(stepText((*rows)[id.Row], id.Col, sys()))
 		})
 	t.ShowHeaderRow = true
 	t.CreateHeader = func() fyne.CanvasObject {
@@ -318,6 +307,7 @@ func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
 	for i, wd := range widths {
 		t.SetColumnWidth(i, wd)
 	}
+	t.fit = func() { fitStepColumns(t, widths, titles, *rows, sys()) }
 	return t
 }
 

@@ -1,6 +1,7 @@
 package ui
 
 import (
+	"fmt"
 	"image"
 	"slices"
 
@@ -23,8 +24,7 @@ type tableFit struct {
 	width   float32   // the table's width last laid out
 	natural []float32 // each column's width for its widest text so far
 	shown   []int     // columns shown, by index into columns, in table order
-	key     string    // units and method the natural widths belong to
-	probe   *widget.Button
+	key     string    // units, method and sorted column the natural widths belong to
 	// refreshes counts full redraws of the table by fitColumns.
 	refreshes int
 }
@@ -101,14 +101,20 @@ func cellWidth(txt string) float32 {
 	return fyne.MeasureText(txt, theme.TextSize(), fyne.TextStyle{Bold: true}).Width + 2*theme.InnerPadding() + 2
 }
 
+// headerWidths caches the widths of header texts (headerWidth).
+var headerWidths = map[string]float32{}
+
 // headerWidth is the width a header button needs to show txt uncut.
-func (w *Window) headerWidth(txt string) float32 {
-	if w.fit.probe == nil {
-		w.fit.probe = widget.NewButton("", nil)
-		w.fit.probe.Importance = widget.LowImportance
+// UI goroutine.
+func headerWidth(txt string) float32 {
+	if wd, ok := headerWidths[txt]; ok {
+		return wd
 	}
-	w.fit.probe.Text = txt
-	return w.fit.probe.MinSize().Width + 2
+	b := widget.NewButton(txt, nil)
+	b.Importance = widget.LowImportance
+	wd := b.MinSize().Width + 2
+	headerWidths[txt] = wd
+	return wd
 }
 
 // fitColumns measures the columns' texts and chooses the columns the
@@ -116,7 +122,7 @@ func (w *Window) headerWidth(txt string) float32 {
 // changed; full redraws it anyway.
 func (w *Window) fitColumns(full bool) {
 	f := &w.fit
-	key := string(w.ctx.sys) + "|" + string(w.ctx.m.Scheme.Setting.Method)
+	key := fmt.Sprintf("%s|%s|%d", w.ctx.sys, w.ctx.m.Scheme.Setting.Method, w.sortCol)
 	if key != f.key || len(f.natural) != len(columns) {
 		f.key = key
 		f.natural = make([]float32, len(columns))
@@ -126,8 +132,7 @@ func (w *Window) fitColumns(full bool) {
 	for c := range columns {
 		nat := f.natural[c]
 		if nat == 0 {
-			// The header with room for a sort arrow.
-			nat = w.headerWidth(columns[c].title(w.ctx.sys, w.ctx.m.Scheme.Setting.Method) + " ▼")
+			nat = headerWidth(w.headerText(c)) // with its sort arrow
 		}
 		for r := range w.rows {
 			w.updateCell(widget.TableCellID{Row: r, Col: c}, l)

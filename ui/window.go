@@ -123,6 +123,8 @@ type Window struct {
 	loadRows  []model.Step
 
 	// frame
+	panes      panes // the draggable splits and the folded inputs
+	caution    *widget.Label
 	banner     *fyne.Container
 	bannerText *widget.Label
 	status     *widget.Label
@@ -196,27 +198,12 @@ func (w *Window) build() fyne.CanvasObject {
 	w.banner = container.NewStack(bg, w.bannerText)
 	w.banner.Hide()
 
-	// Centre: the chart over the results; right: the crossovers over the
-	// calculation of the row chosen.
-	centre := container.NewVSplit(chartArea, results)
-	centre.Offset = 0.56
-	right := container.NewVSplit(xsPanel, calc)
-	right.Offset = 0.36
-	mainSplit := container.NewHSplit(centre, right)
-	mainSplit.Offset = 0.66
-	main := container.NewBorder(w.banner, nil, nil, nil, mainSplit)
-
-	side := container.NewVScroll(inputs)
-	side.SetMinSize(fyne.NewSize(330, 200))
-	split := container.NewHSplit(side, main)
-	split.Offset = 0.235
+	split := w.buildPanes(inputs, chartArea, results, xsPanel, calc, w.banner)
 
 	w.status = widget.NewLabel("")
-	w.status.Truncation = fyne.TextTruncateClip
-	caution := widget.NewLabel("⚠ " + model.Caution + "  (Help ▸ Cautions)")
-	caution.Importance = widget.WarningImportance
-	caution.Truncation = fyne.TextTruncateEllipsis
-	statusBar := container.NewBorder(nil, nil, nil, fixedWidth(380, w.status), caution)
+	w.status.Wrapping = fyne.TextWrapWord
+	w.status.Alignment = fyne.TextAlignTrailing
+	statusBar := container.NewBorder(nil, nil, nil, fixedWidth(300, w.status), w.buildCaution())
 	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), statusBar), nil, nil, split)
 }
 

@@ -123,7 +123,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 			desc := widget.NewLabel("")
 			desc.Wrapping = fyne.TextWrapWord
 			desc.SizeName = theme.SizeNameCaptionText
-			return container.NewVBox(top, desc)
+			return container.NewBorder(top, nil, nil, nil, desc)
 		},
 		func(id widget.ListItemID, o fyne.CanvasObject) {
 			if id < 0 || id >= len(w.xs) {
@@ -131,8 +131,8 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 			}
 			x := w.xs[id]
 			box := o.(*fyne.Container)
-			box.Objects[0].(*widget.Label).SetText(units.Length(x.LengthMM, w.sys()) + "  ·  " + kindWords(x.Kind))
-			box.Objects[1].(*widget.Label).SetText(cli.DescribeCrossover(x))
+			box.Objects[1].(*widget.Label).SetText(units.Length(x.LengthMM, w.sys()) + "  ·  " + kindWords(x.Kind))
+			box.Objects[0].(*widget.Label).SetText(cli.DescribeCrossover(x))
 		})
 	w.xsList.OnSelected = func(id widget.ListItemID) {
 		if id >= 0 && id < len(w.xs) {

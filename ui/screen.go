@@ -11,9 +11,9 @@ import (
 // The last is laid out for a 1280×720 screen (a 1920×1080 laptop at 150%)
 // with a taskbar.
 var windowDefaults = []fyne.Size{
-	{Width: 1840, Height: 1010},
+	{Width: 1840, Height: 990},
 	{Width: 1480, Height: 920},
-	{Width: 1340, Height: 700},
+	{Width: 1340, Height: 680},
 	{Width: 1240, Height: 640},
 }
 
@@ -23,7 +23,7 @@ var windowFrame = fyne.NewSize(16, 40)
 
 // minWindowSize is the smallest window the layout is made for (and the
 // smallest size remembered).
-var minWindowSize = fyne.NewSize(960, 540)
+var minWindowSize = fyne.NewSize(1000, 560)
 
 // room is the content size the work area leaves once the window frame is
 // taken off; ok is false when the work area is unknown.

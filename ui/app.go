@@ -64,7 +64,9 @@ func Run(args []string) int {
 	// autosave still gets the last scheme.
 	a.Lifecycle().SetOnStopped(w.stopAutosave)
 	w.win.Resize(savedSize(prefs, area))
-	w.refitAfterShow(area, areaScale)
+	if shotsDir() == "" {
+		w.refitAfterShow(area, areaScale)
+	}
 	w.win.SetCloseIntercept(func() {
 		storeSize(prefs, w.win.Canvas().Size())
 		w.storeLayout(prefs)
@@ -78,6 +80,9 @@ func Run(args []string) int {
 	})
 	if msg != "" {
 		w.notify(msg)
+	}
+	if dir := shotsDir(); dir != "" {
+		go w.takeShots(dir, area)
 	}
 	w.win.ShowAndRun()
 	go w.eng.Close() // never block the exiting UI goroutine on a worker waiting for it

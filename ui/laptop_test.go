@@ -17,6 +17,10 @@ import (
 // laptop is the logical screen of a 1920×1080 laptop at 150% scaling.
 var laptop = fyne.NewSize(1280, 720)
 
+// screenSizes are the screens the layout is made for: 1280×720, a 1366×768
+// screen and a 1920×1080 screen (packaging/screenshots.sh takes the same).
+var screenSizes = []fyne.Size{laptop, {Width: 1366, Height: 768}, {Width: 1920, Height: 1080}}
+
 // visibleObjects calls f for every object on screen under o: hidden objects
 // and everything under them are skipped.
 func visibleObjects(o fyne.CanvasObject, f func(fyne.CanvasObject)) {
@@ -159,7 +163,7 @@ func contains(list []string, s string) bool {
 
 func TestWiderScreensShowMore(t *testing.T) {
 	var counts []int
-	for _, size := range shotSizes {
+	for _, size := range screenSizes {
 		h := newHarnessAt(t, DemoScheme(), size)
 		h.layOut()
 		h.ui(func() {

@@ -164,7 +164,7 @@ func (w *Window) refreshTable(full bool) {
 	if w.showAll {
 		note += fmt.Sprintf(" · %d working sizes", working)
 	}
-	w.tableNote.SetText(note)
+	setWrappedText(w.tableNote, note)
 	full = full || w.ctx.sys != w.tableSys || w.ctx.m.Scheme.Setting.Method != w.tableMethod
 	w.tableSys, w.tableMethod = w.ctx.sys, w.ctx.m.Scheme.Setting.Method
 	n := w.fit.refreshes

@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"image"
 	"slices"
+	"unicode/utf8"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
@@ -23,8 +24,11 @@ type tableFit struct {
 	all     bool      // every column, scrolling sideways when needed
 	width   float32   // the table's width last laid out
 	natural []float32 // each column's width for its widest text so far
-	shown   []int     // columns shown, by index into columns, in table order
-	key     string    // units, method and sorted column the natural widths belong to
+	runes   []int     // each column's longest text so far, in characters
+	// measured holds texts already measured at the longest length.
+	measured map[string]uint8
+	shown    []int  // columns shown, by index into columns, in table order
+	key      string // units, method and sorted column the natural widths belong to
 	// refreshes counts full redraws of the table by fitColumns.
 	refreshes int
 }
@@ -126,17 +130,29 @@ func (w *Window) fitColumns(full bool) {
 	if key != f.key || len(f.natural) != len(columns) {
 		f.key = key
 		f.natural = make([]float32, len(columns))
+		f.runes = make([]int, len(columns))
+		f.measured = map[string]uint8{}
 	}
 	changed := false
-	l := widget.NewLabel("") // scratch label for cell texts
 	for c := range columns {
 		nat := f.natural[c]
 		if nat == 0 {
 			nat = headerWidth(w.headerText(c)) // with its sort arrow
+			f.runes[c] = 0
 		}
+		// Only a text longer than any measured so far can need more room:
+		// measuring every cell on every slider step would cost milliseconds.
 		for r := range w.rows {
-			w.updateCell(widget.TableCellID{Row: r, Col: c}, l)
-			nat = max(nat, cellWidth(l.Text))
+			txt := columns[c].cell(&w.ctx, &w.rows[r])
+			if n := utf8.RuneCountInString(txt); n > f.runes[c] {
+				f.runes[c] = n
+				nat = max(nat, cellWidth(txt))
+			} else if n == f.runes[c] && f.measured[txt] == 0 {
+				nat = max(nat, cellWidth(txt))
+			}
+			if f.measured != nil && len(f.measured) < 4096 {
+				f.measured[txt] = 1
+			}
 		}
 		if nat != f.natural[c] {
 			f.natural[c], changed = nat, true

@@ -320,7 +320,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	if msg := w.Notice(); msg != "" {
 		w.status.SetText(msg)
 	} else {
-		w.status.SetText(fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
+		setWrappedText(w.status, fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
 	}
 	w.firstLog.Do(func() {
 		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was created (%d candidates)",

@@ -112,25 +112,6 @@ func newHarnessAt(t testing.TB, sc model.Scheme, size fyne.Size) *harness {
 	return h
 }
 
-// walkObjects calls f for o and every object under it: container children
-// and widget parts, hidden ones included.
-func walkObjects(o fyne.CanvasObject, f func(fyne.CanvasObject)) {
-	if o == nil {
-		return
-	}
-	f(o)
-	switch x := o.(type) {
-	case *fyne.Container:
-		for _, c := range x.Objects {
-			walkObjects(c, f)
-		}
-	case fyne.Widget:
-		for _, c := range test.WidgetRenderer(x).Objects() {
-			walkObjects(c, f)
-		}
-	}
-}
-
 // layOut paints the window once so every part takes its size (the chart
 // asks for an image of its size, wrapped labels find their height), waits
 // for the engine, and lays the window out again.

@@ -77,6 +77,7 @@ func (w *Window) buildResults() fyne.CanvasObject {
 	head := container.NewVBox(container.NewBorder(nil, nil, title, container.NewHBox(w.showAllChk, w.allColsChk)), w.tableNote)
 	watch := container.New(&widthWatch{onChange: func(width float32) {
 		w.fit.width = width
+		refitText(w.tableNote)
 		if w.ctx.m != nil {
 			w.fitColumns(false)
 		}

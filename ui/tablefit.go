@@ -147,10 +147,12 @@ func (w *Window) fitColumns(full bool) {
 			if n := utf8.RuneCountInString(txt); n > f.runes[c] {
 				f.runes[c] = n
 				nat = max(nat, cellWidth(txt))
-			} else if n == f.runes[c] && f.measured[txt] == 0 {
+			} else if n == f.runes[c] && !columns[c].right && f.measured[txt] == 0 {
+				// A name as long as the longest may still be wider; numbers
+				// (right-aligned) use figures of one width.
 				nat = max(nat, cellWidth(txt))
 			}
-			if f.measured != nil && len(f.measured) < 4096 {
+			if !columns[c].right && len(f.measured) < 4096 {
 				f.measured[txt] = 1
 			}
 		}

@@ -318,7 +318,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 		n += len(s.Result.Families[i].Rows)
 	}
 	if msg := w.Notice(); msg != "" {
-		w.status.SetText(msg)
+		setWrappedText(w.status, msg)
 	} else {
 		setWrappedText(w.status, fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
 	}

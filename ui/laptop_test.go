@@ -277,3 +277,37 @@ func TestTheWindowContentFitsTheSmallestWindow(t *testing.T) {
 		assert.LessOrEqual(t, m.Height, minWindowSize.Height, "content minimum %v", m)
 	})
 }
+
+func TestInputSectionsFoldAndComeBack(t *testing.T) {
+	h := newHarnessAt(t, DemoScheme(), laptop)
+	h.layOut()
+	h.ui(func() {
+		w := h.w
+		var titles []string
+		for _, s := range w.sections {
+			titles = append(titles, s.title)
+		}
+		assert.Equal(t, []string{"Column", "Load", "Design", "Materials"}, titles, "every inputs section folds")
+		directHidden := !w.directBox.Visible()
+		w.FoldSection("Load", true)
+		assert.True(t, w.SectionFolded("Load"))
+		assert.False(t, isShown(w.fields["tributary"].entry, w.sections[1].body), "the rows are hidden with their section")
+		w.FoldSection("Load", false)
+		assert.False(t, w.SectionFolded("Load"))
+		assert.Equal(t, directHidden, !w.directBox.Visible(), "opening a section leaves the rows its choices hide hidden")
+		w.FoldSection("Design", true)
+		assert.True(t, w.app.Preferences().Bool(prefSectionShut+"Design"), "remembered")
+	})
+	// A window opened on the same preferences comes back with Design folded.
+	h.ui(func() {
+		w2 := newWindow(h.w.app, DemoScheme(), func(f func()) { f() }, func(f func()) { f() })
+		defer func() { w2.closing.Store(true); w2.eng.Close() }()
+		assert.True(t, w2.SectionFolded("Design"))
+		assert.False(t, w2.SectionFolded("Load"))
+	})
+}
+
+// isShown reports whether o would be drawn: it and the body holding it are visible.
+func isShown(o fyne.CanvasObject, body fyne.CanvasObject) bool {
+	return o.Visible() && body.Visible()
+}

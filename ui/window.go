@@ -123,7 +123,8 @@ type Window struct {
 	loadRows  []model.Step
 
 	// frame
-	panes      panes // the draggable splits and the folded inputs
+	panes      panes           // the draggable splits and the folded inputs
+	sections   []*inputSection // the foldable sections of the inputs
 	caution    *widget.Label
 	banner     *fyne.Container
 	bannerText *widget.Label

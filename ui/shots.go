@@ -33,6 +33,10 @@ var shotViews = []shotView{
 	{"load-takedown", showTab("Load takedown")},
 	{"file-menu", showFileMenu},
 	{"inputs-folded", func(w *Window) func() { w.FoldInputs(true); return func() { w.FoldInputs(false) } }},
+	{"sections-folded", func(w *Window) func() {
+		w.FoldSection("Column", true)
+		return func() { w.FoldSection("Column", false) }
+	}},
 }
 
 // showTab returns a view that selects the tab of that title.

@@ -311,3 +311,23 @@ func TestInputSectionsFoldAndComeBack(t *testing.T) {
 func isShown(o fyne.CanvasObject, body fyne.CanvasObject) bool {
 	return o.Visible() && body.Visible()
 }
+
+func TestScreenshotViewsFindTheirTabs(t *testing.T) {
+	h := newHarnessAt(t, DemoScheme(), laptop)
+	h.ui(func() {
+		var titles []string
+		eachTabs(h.w.win.Content(), func(tb tabber) {
+			titles = append(titles, tb.Selected().Text)
+		})
+		require.Equal(t, []string{"Calculation"}, titles)
+		undo := showTab("Load takedown")(h.w)
+		eachTabs(h.w.win.Content(), func(tb tabber) { assert.Equal(t, "Load takedown", tb.Selected().Text) })
+		undo()
+		eachTabs(h.w.win.Content(), func(tb tabber) { assert.Equal(t, "Calculation", tb.Selected().Text) })
+		names := map[string]bool{}
+		for _, v := range shotViews {
+			assert.False(t, names[v.name], "view names are file names: %s twice", v.name)
+			names[v.name] = true
+		}
+	})
+}

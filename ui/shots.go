@@ -43,8 +43,8 @@ var shotViews = []shotView{
 func showTab(title string) func(w *Window) func() {
 	return func(w *Window) func() {
 		var undo []func()
-		eachTabs(w.win.Content(), func(tabs *container.AppTabs) {
-			for _, it := range tabs.Items {
+		eachTabs(w.win.Content(), func(tabs tabber) {
+			for _, it := range tabs.items() {
 				if it.Text == title {
 					was := tabs.Selected()
 					tabs.Select(it)
@@ -79,11 +79,31 @@ func showFileMenu(w *Window) func() {
 	return m.Hide
 }
 
+// tabber is a tab container: app tabs or document tabs.
+type tabber interface {
+	Selected() *container.TabItem
+	Select(*container.TabItem)
+	items() []*container.TabItem
+}
+
+type appTabs struct{ *container.AppTabs }
+
+func (t appTabs) items() []*container.TabItem { return t.Items }
+
+type docTabs struct{ *container.DocTabs }
+
+func (t docTabs) items() []*container.TabItem { return t.Items }
+
 // eachTabs calls f for every tab container in the window's layout.
-func eachTabs(o fyne.CanvasObject, f func(*container.AppTabs)) {
+func eachTabs(o fyne.CanvasObject, f func(tabber)) {
 	switch x := o.(type) {
 	case *container.AppTabs:
-		f(x)
+		f(appTabs{x})
+		for _, it := range x.Items {
+			eachTabs(it.Content, f)
+		}
+	case *container.DocTabs:
+		f(docTabs{x})
 		for _, it := range x.Items {
 			eachTabs(it.Content, f)
 		}

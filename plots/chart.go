@@ -62,4 +62,9 @@ type Chart struct {
 	// Footer is one line of text along the bottom edge (the caution on an
 	// exported image), shrunk to fit the width; empty draws none.
 	Footer string
+	// KeyNote, when set, says the series are also keyed outside the chart
+	// (beside the rows of a table, say): when the full legend would not fit,
+	// the legend then lists only the pinned series, the reference keys and
+	// this note, instead of hiding candidates.
+	KeyNote string
 }

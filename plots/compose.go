@@ -88,7 +88,12 @@ func (k *composer) draw(c draw.Canvas, ch *Chart, fill bool) {
 	if maxLegend < vg.Points(legendMinWidth) {
 		maxLegend = vg.Points(legendMinWidth)
 	}
-	k.legend.build(ch, k.scene.offScale, maxLegend, notes...)
+	k.legend.build(ch, k.scene.offScale, maxLegend, false, notes...)
+	if ch.KeyNote != "" && k.legend.height() > k.legendRoom(inner, ch) {
+		// The series are keyed elsewhere: list only the pinned ones rather
+		// than hide some candidates behind a count.
+		k.legend.build(ch, k.scene.offScale, maxLegend, true, append(append([]string(nil), notes...), ch.KeyNote)...)
+	}
 	lw := k.legend.width(ch)
 	if lw > maxLegend {
 		lw = maxLegend
@@ -109,6 +114,16 @@ func (k *composer) draw(c draw.Canvas, ch *Chart, fill bool) {
 	} else {
 		k.legendBox = vg.Rectangle{}
 	}
+}
+
+// legendRoom returns the height the legend column has: from the top of the
+// data area (below any title) to the bottom of the inner canvas.
+func (k *composer) legendRoom(inner draw.Canvas, ch *Chart) vg.Length {
+	h := inner.Max.Y - inner.Min.Y
+	if ch.Title != "" {
+		h -= k.plot.Title.TextStyle.Height(ch.Title) + vg.Points(titlePadding)
+	}
+	return h
 }
 
 // prepare loads the chart into the plot and scene: texts, axis ranges,

@@ -20,6 +20,7 @@ const (
 	rowMarker
 	rowCrossover
 	rowNote
+	rowMore // the rest of a series label, wrapped under it
 )
 
 // legendRow is one line of the legend.
@@ -75,16 +76,21 @@ func headingFor(group string) string {
 }
 
 // build fills the legend rows for the chart; labels wider than maxWidth are
-// shortened with an ellipsis, series flagged in offScale are marked as lying
-// above the chart, and notes are appended in italics at the end.
-func (l *legend) build(ch *Chart, offScale []bool, maxWidth vg.Length, notes ...string) {
+// wrapped onto further lines (a single word too wide for a line is shortened
+// with an ellipsis), series flagged in offScale are marked as lying above the
+// chart, and notes are appended in italics at the end. With pinnedOnly set
+// only the pinned series are listed (the others are keyed elsewhere).
+func (l *legend) build(ch *Chart, offScale []bool, maxWidth vg.Length, pinnedOnly bool, notes ...string) {
 	l.rows = l.rows[:0]
 	textRoom := maxWidth - vg.Points(legendThumb+legendGap)
 	for i := range ch.Series {
+		if pinnedOnly && !ch.Series[i].Pinned {
+			continue
+		}
 		key := groupKey(ch.Series[i].Group)
 		seen := false
 		for j := 0; j < i; j++ {
-			if groupKey(ch.Series[j].Group) == key {
+			if groupKey(ch.Series[j].Group) == key && (!pinnedOnly || ch.Series[j].Pinned) {
 				seen = true
 				break
 			}
@@ -94,7 +100,7 @@ func (l *legend) build(ch *Chart, offScale []bool, maxWidth vg.Length, notes ...
 		}
 		l.rows = append(l.rows, legendRow{kind: rowHeading, text: fit(l.heading, headingFor(ch.Series[i].Group), maxWidth)})
 		for j := i; j < len(ch.Series); j++ {
-			if groupKey(ch.Series[j].Group) != key {
+			if groupKey(ch.Series[j].Group) != key || (pinnedOnly && !ch.Series[j].Pinned) {
 				continue
 			}
 			sty, label := l.entry, ch.Series[j].Label
@@ -106,7 +112,13 @@ func (l *legend) build(ch *Chart, offScale []bool, maxWidth vg.Length, notes ...
 			case off:
 				label += " (above chart)"
 			}
-			l.rows = append(l.rows, legendRow{kind: rowSeries, text: fit(sty, label, textRoom), series: j})
+			for k, line := range wrapText(sty, label, textRoom) {
+				kind := rowSeries
+				if k > 0 {
+					kind = rowMore
+				}
+				l.rows = append(l.rows, legendRow{kind: kind, text: line, series: j})
+			}
 		}
 	}
 	refs := len(ch.Demand) > 0 || ch.Marker != nil || len(ch.Crossovers) > 0
@@ -118,7 +130,13 @@ func (l *legend) build(ch *Chart, offScale []bool, maxWidth vg.Length, notes ...
 		if name == "" {
 			name = "Demand"
 		}
-		l.rows = append(l.rows, legendRow{kind: rowDemand, text: fit(l.entry, name, textRoom)})
+		for k, line := range wrapText(l.entry, name, textRoom) {
+			kind := rowDemand
+			if k > 0 {
+				kind = rowMore
+			}
+			l.rows = append(l.rows, legendRow{kind: kind, text: line, series: -1})
+		}
 	}
 	if ch.Marker != nil {
 		l.rows = append(l.rows, legendRow{kind: rowMarker, text: "Current length"})
@@ -127,8 +145,38 @@ func (l *legend) build(ch *Chart, offScale []bool, maxWidth vg.Length, notes ...
 		l.rows = append(l.rows, legendRow{kind: rowCrossover, text: "Crossover"})
 	}
 	for _, n := range notes {
-		l.rows = append(l.rows, legendRow{kind: rowNote, text: n})
+		for _, line := range wrapText(l.note, n, maxWidth) {
+			l.rows = append(l.rows, legendRow{kind: rowNote, text: line})
+		}
 	}
+}
+
+// wrapText breaks s into lines at most width wide in sty, at spaces; a word
+// wider than a line on its own is shortened with an ellipsis.
+func wrapText(sty text.Style, s string, width vg.Length) []string {
+	if sty.Width(s) <= width {
+		return []string{s}
+	}
+	var lines []string
+	line := ""
+	for _, word := range strings.Fields(s) {
+		try := word
+		if line != "" {
+			try = line + " " + word
+		}
+		if sty.Width(try) <= width {
+			line = try
+			continue
+		}
+		if line != "" {
+			lines = append(lines, line)
+		}
+		line = fit(sty, word, width)
+	}
+	if line != "" {
+		lines = append(lines, line)
+	}
+	return lines
 }
 
 // fit returns s, or s shortened with an ellipsis so it is at most width wide in sty.
@@ -153,8 +201,8 @@ func (l *legend) styleOf(r legendRow, ch *Chart) text.Style {
 		return l.heading
 	case rowNote:
 		return l.note
-	case rowSeries:
-		if ch.Series[r.series].Pinned {
+	case rowSeries, rowMore:
+		if r.series >= 0 && r.series < len(ch.Series) && ch.Series[r.series].Pinned {
 			return l.pinned
 		}
 	}
@@ -194,6 +242,15 @@ func (l *legend) rowHeight(k rowKind, first bool) vg.Length {
 	return vg.Points(sizeLegend * 1.55)
 }
 
+// height returns the height all the rows need.
+func (l *legend) height() vg.Length {
+	var total vg.Length
+	for i, r := range l.rows {
+		total += l.rowHeight(r.kind, i == 0)
+	}
+	return total
+}
+
 // draw paints the legend in c, starting at its top edge. When the rows do not
 // fit, the last candidate rows give way to a "+N more candidates" line so the
 // reference keys and notes always stay visible.
@@ -207,7 +264,7 @@ func (l *legend) draw(c draw.Canvas, ch *Chart, styles []seriesStyle) {
 	cut, resume, hidden := len(l.rows), len(l.rows), 0
 	if total > room {
 		resume = 0
-		for resume < len(l.rows) && (l.rows[resume].kind == rowHeading || l.rows[resume].kind == rowSeries) {
+		for resume < len(l.rows) && (l.rows[resume].kind == rowHeading || l.rows[resume].kind == rowSeries || l.rows[resume].kind == rowMore) {
 			resume++
 		}
 		// The reference block starts with its own heading; keep it.
@@ -229,7 +286,7 @@ func (l *legend) draw(c draw.Canvas, ch *Chart, styles []seriesStyle) {
 			used += h
 			cut++
 		}
-		if cut > 0 && l.rows[cut-1].kind == rowHeading {
+		for cut > 0 && (l.rows[cut-1].kind == rowHeading || (cut < len(l.rows) && l.rows[cut].kind == rowMore)) {
 			cut--
 		}
 		for i := cut; i < resume; i++ {

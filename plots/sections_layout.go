@@ -234,8 +234,8 @@ func (p *planDrawer) place(r vg.Rectangle) (foot vg.Point, area vg.Rectangle) {
 	}
 	foot = area.Min
 	w := area.Max.X - area.Min.X
-	p.cautionLines = wrapText(p.sty.footBold, s.Caution, w, p.cautionLines[:0])
-	p.noteLines = wrapText(p.sty.foot, s.Note, w, p.noteLines[:0])
+	p.cautionLines = wrapPlanText(p.sty.footBold, s.Caution, w, p.cautionLines[:0])
+	p.noteLines = wrapPlanText(p.sty.foot, s.Note, w, p.noteLines[:0])
 	area.Min.Y += p.footerHeight() + vg.Points(6)
 	p.prepare()
 	p.scale = 0
@@ -308,8 +308,8 @@ func (p *planDrawer) footerHeight() vg.Length {
 	return h
 }
 
-// wrapText breaks text into lines no wider than width, at spaces, appending to out.
-func wrapText(sty text.Style, t string, width vg.Length, out []string) []string {
+// wrapPlanText breaks text into lines no wider than width, at spaces, appending to out.
+func wrapPlanText(sty text.Style, t string, width vg.Length, out []string) []string {
 	words := strings.Fields(t)
 	line := ""
 	for _, w := range words {

@@ -49,6 +49,7 @@ func Run(args []string) int {
 	}
 	app.SetMetadata(meta)
 	prefs := a.Preferences()
+	area, areaScale, _ := workArea(a)
 	auto := autosavePath(a)
 	sc, path, clean, msg := startupScheme(prefs, auto)
 	w := NewWindow(a, sc)
@@ -62,9 +63,13 @@ func Run(args []string) int {
 	// Quit from the menu ends the app without the close intercept: the
 	// autosave still gets the last scheme.
 	a.Lifecycle().SetOnStopped(w.stopAutosave)
-	w.win.Resize(savedSize(prefs))
+	w.win.Resize(savedSize(prefs, area))
+	if shotsDir() == "" {
+		w.refitAfterShow(area, areaScale)
+	}
 	w.win.SetCloseIntercept(func() {
 		storeSize(prefs, w.win.Canvas().Size())
+		w.storeLayout(prefs)
 		if w.st.HaveValid {
 			storeScheme(prefs, w.st.Valid)
 		}
@@ -75,6 +80,9 @@ func Run(args []string) int {
 	})
 	if msg != "" {
 		w.notify(msg)
+	}
+	if dir := shotsDir(); dir != "" {
+		go w.takeShots(dir, area)
 	}
 	w.win.ShowAndRun()
 	go w.eng.Close() // never block the exiting UI goroutine on a worker waiting for it

@@ -121,9 +121,9 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		func() fyne.CanvasObject {
 			top := widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
 			desc := widget.NewLabel("")
-			desc.Truncation = fyne.TextTruncateEllipsis
+			desc.Wrapping = fyne.TextWrapWord
 			desc.SizeName = theme.SizeNameCaptionText
-			return container.NewVBox(top, desc)
+			return container.NewBorder(top, nil, nil, nil, desc)
 		},
 		func(id widget.ListItemID, o fyne.CanvasObject) {
 			if id < 0 || id >= len(w.xs) {
@@ -131,8 +131,8 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 			}
 			x := w.xs[id]
 			box := o.(*fyne.Container)
-			box.Objects[0].(*widget.Label).SetText(units.Length(x.LengthMM, w.sys()) + "  ·  " + kindWords(x.Kind))
-			box.Objects[1].(*widget.Label).SetText(cli.DescribeCrossover(x))
+			box.Objects[1].(*widget.Label).SetText(units.Length(x.LengthMM, w.sys()) + "  ·  " + kindWords(x.Kind))
+			box.Objects[0].(*widget.Label).SetText(cli.DescribeCrossover(x))
 		})
 	w.xsList.OnSelected = func(id widget.ListItemID) {
 		if id >= 0 && id < len(w.xs) {
@@ -143,7 +143,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 	xsHead := container.NewVBox(
 		widget.NewLabelWithStyle("Crossovers", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
 		w.xsStatus, w.xsAllCheck)
-	xsPanel := container.NewBorder(xsHead, nil, nil, nil, w.xsList)
+	xsPanel := container.NewBorder(xsHead, nil, nil, nil, container.New(&widthWatch{onChange: func(float32) { w.fitCrossoverHeights() }}, w.xsList))
 	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, w.plotViews(chartStack)), xsPanel
 }
 
@@ -285,6 +285,7 @@ func (w *Window) filterCrossovers() {
 	default:
 		w.xsStatus.SetText(fmt.Sprintf("%d lengths where the answer changes (each the last length at which the first answer holds). Choose one to move there.", len(w.xs)))
 	}
+	w.fitCrossoverHeights()
 	w.xsList.Refresh()
 }
 

@@ -71,6 +71,8 @@ type Engine struct {
 	xsDone    uint64 // SchemeGen of the last crossover search finished
 	closed    bool
 
+	swatches swatchSet // the curve keys of the last chart (renderer goroutine only)
+
 	wake     chan struct{}
 	wakeDraw chan struct{}
 	xsCh     chan *Crossovers
@@ -107,6 +109,9 @@ type FrameInfo struct {
 	// MarkerDrawn reports that the image carries the marker itself (the data
 	// area could not be found), so the window must not draw one.
 	MarkerDrawn bool
+	// Keys are the swatches of the curves drawn, by designation (see keys.go);
+	// the images are the engine's own buffers, read before OnFrame returns.
+	Keys []Swatch
 }
 
 // Renders returns how many charts the engine has drawn.
@@ -408,6 +413,7 @@ func (e *Engine) renderJob(j *renderJob) {
 	}
 	_ = e.raster.SetDPI(dpi)
 	ch := j.builder.Chart(j.res, chart.Options{Pinned: pinned, Crossovers: familyChanges(j.xs), Range: r.Range})
+	ch.KeyNote = keyNote
 	info := FrameInfo{Gen: r.Gen, SchemeGen: r.SchemeGen, Units: m.Scheme.Units}
 	if ch.XRange != nil {
 		info.XMin, info.XMax = ch.XRange.Min, ch.XRange.Max
@@ -437,6 +443,7 @@ func (e *Engine) renderJob(j *renderJob) {
 		}
 	}
 	info.MarkerDrawn = e.markerInside
+	info.Keys = e.swatches.render(&ch, dpi)
 	e.renderErr = nil
 	e.lastKey = key
 	e.OnFrame(e.raster.Image(), info)

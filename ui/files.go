@@ -60,7 +60,7 @@ const noticeFor = 12 * time.Second
 // for noticeFor, over the evaluation summary.
 func (w *Window) notify(msg string) {
 	w.files.notice, w.files.noticeUntil = msg, time.Now().Add(noticeFor)
-	w.status.SetText(msg)
+	setWrappedText(w.status, msg)
 }
 
 // Notice returns the file action's message the status bar keeps, or "" when none.

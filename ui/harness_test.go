@@ -83,6 +83,12 @@ type harness struct {
 // newHarness opens a window on sc in a test app, with a chart size set so
 // charts are drawn, and waits until everything (chart and crossovers) is shown.
 func newHarness(t testing.TB, sc model.Scheme) *harness {
+	return newHarnessAt(t, sc, fyne.NewSize(1400, 900))
+}
+
+// newHarnessAt is newHarness with the window at a size; the chart is drawn
+// at the size the layout gives it.
+func newHarnessAt(t testing.TB, sc model.Scheme, size fyne.Size) *harness {
 	a := test.NewTempApp(t)
 	h := &harness{t: t}
 	do := func(f func()) {
@@ -92,8 +98,10 @@ func newHarness(t testing.TB, sc model.Scheme) *harness {
 	}
 	h.ui(func() {
 		h.w = newWindow(a, sc, do, do)
-		h.w.win.Resize(fyne.NewSize(1400, 900))
-		h.w.wantW, h.w.wantH = 900, 420
+		h.w.win.Resize(size)
+		if h.w.wantW == 0 {
+			h.w.wantW, h.w.wantH = 900, 420
+		}
 		h.w.submit()
 	})
 	t.Cleanup(func() {
@@ -102,6 +110,19 @@ func newHarness(t testing.TB, sc model.Scheme) *harness {
 	})
 	h.settle()
 	return h
+}
+
+// layOut paints the window once so every part takes its size (the chart
+// asks for an image of its size, wrapped labels find their height), waits
+// for the engine, and lays the window out again.
+func (h *harness) layOut() {
+	h.ui(func() { h.w.win.Canvas().Capture() })
+	h.settle()
+	h.ui(func() {
+		h.w.win.Content().Refresh()
+		h.w.win.Canvas().Capture()
+	})
+	h.settle()
 }
 
 // ui runs f as the UI goroutine would, holding the harness lock.

@@ -17,6 +17,10 @@ type liveTable struct {
 	bound map[fyne.CanvasObject]widget.TableCellID
 	rows  int
 	cols  int
+	// fit, when set, sets the column widths for the contents before a redraw.
+	fit func()
+	// widths are the column widths fit last set.
+	widths map[int]float32
 }
 
 // newLiveTable makes a table whose cells come from create and are filled by fill.
@@ -32,6 +36,9 @@ func newLiveTable(length func() (int, int), create func() fyne.CanvasObject, fil
 // update shows new contents: in place when the row and column counts are
 // unchanged and full is false, else through Table.Refresh.
 func (lt *liveTable) update(full bool) {
+	if lt.fit != nil {
+		lt.fit()
+	}
 	rows, cols := lt.Length()
 	if full || rows != lt.rows || cols != lt.cols {
 		lt.rows, lt.cols = rows, cols

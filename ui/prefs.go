@@ -17,12 +17,6 @@ const (
 	prefHeight = "window.height" // window height
 )
 
-// Default and smallest window sizes.
-var (
-	defaultWindowSize = fyne.NewSize(1480, 920)
-	minWindowSize     = fyne.NewSize(900, 600)
-)
-
 // encodeScheme and decodeScheme store a scheme in the preferences, in the
 // scheme file format.
 var (
@@ -58,14 +52,16 @@ func storeScheme(p fyne.Preferences, sc model.Scheme) {
 	p.SetInt(prefStoredAt, int(time.Now().UnixNano()))
 }
 
-// savedSize returns the stored window size, or the default.
-func savedSize(p fyne.Preferences) fyne.Size {
-	w := float32(p.FloatWithFallback(prefWidth, float64(defaultWindowSize.Width)))
-	h := float32(p.FloatWithFallback(prefHeight, float64(defaultWindowSize.Height)))
+// savedSize returns the stored window size clamped to the work area, or at
+// a first start (or when the stored size is unreadable) the largest default
+// that fits it (see firstSize); area is zero when unknown.
+func savedSize(p fyne.Preferences, area fyne.Size) fyne.Size {
+	w := float32(p.FloatWithFallback(prefWidth, 0))
+	h := float32(p.FloatWithFallback(prefHeight, 0))
 	if !(w >= minWindowSize.Width && w < 20000) || !(h >= minWindowSize.Height && h < 20000) {
-		return defaultWindowSize
+		return firstSize(area)
 	}
-	return fyne.NewSize(w, h)
+	return clampSize(fyne.NewSize(w, h), area)
 }
 
 // storeSize writes the window size to the preferences.

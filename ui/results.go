@@ -28,15 +28,10 @@ func fmtForce(n float64, sys units.System) string {
 // buildResults makes the results table with its switch and note.
 func (w *Window) buildResults() fyne.CanvasObject {
 	w.table = newLiveTable(
-		func() (int, int) { return len(w.rows), len(columns) },
-		func() fyne.CanvasObject {
-			l := widget.NewLabel("")
-			l.Truncation = fyne.TextTruncateClip
-			return l
-		},
-		w.updateCell)
+		func() (int, int) { return len(w.rows), 1 + len(w.fit.shown) },
+		newKeyCell,
+		w.fillTableCell)
 	w.table.ShowHeaderRow = true
-	w.table.StickyColumnCount = 3
 	w.table.CreateHeader = func() fyne.CanvasObject {
 		b := widget.NewButton("", nil)
 		b.Importance = widget.LowImportance
@@ -45,34 +40,49 @@ func (w *Window) buildResults() fyne.CanvasObject {
 	}
 	w.table.UpdateHeader = func(id widget.TableCellID, o fyne.CanvasObject) {
 		b := o.(*widget.Button)
-		if id.Col < 0 || id.Col >= len(columns) {
+		col := w.tableCol(id.Col)
+		switch {
+		case col < 0:
+			b.SetText("Key")
+			b.OnTapped = nil
+		case col >= len(columns):
 			b.SetText("")
 			b.OnTapped = nil
-			return
+		default:
+			b.SetText(w.headerText(col))
+			b.OnTapped = func() { w.SortBy(col) }
 		}
-		b.SetText(w.headerText(id.Col))
-		col := id.Col
-		b.OnTapped = func() { w.SortBy(col) }
 	}
-	for i, c := range columns {
-		w.table.SetColumnWidth(i, c.width)
-	}
+	w.fit.shown = w.fit.choose()
 	w.table.OnSelected = func(id widget.TableCellID) {
 		if id.Row >= 0 && id.Row < len(w.rows) {
 			w.Select(w.rows[id.Row].Static.Designation)
 		}
 		w.table.UnselectAll()
 	}
+	w.allColsChk = widget.NewCheck("All columns", func(on bool) {
+		w.fit.all = on
+		if w.ctx.m != nil {
+			w.fitColumns(true)
+		}
+	})
 	w.showAllChk = widget.NewCheck("Show every working size", func(on bool) {
 		w.showAll = on
 		w.refreshRows()
 	})
 	w.tableNote = widget.NewLabel("")
 	w.tableNote.Importance = widget.LowImportance
-	w.tableNote.Truncation = fyne.TextTruncateClip
+	w.tableNote.Wrapping = fyne.TextWrapWord
 	title := widget.NewLabelWithStyle("Results", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-	head := container.NewBorder(nil, nil, title, w.showAllChk, w.tableNote)
-	return container.NewBorder(head, nil, nil, nil, w.table)
+	head := container.NewVBox(container.NewBorder(nil, nil, title, container.NewHBox(w.showAllChk, w.allColsChk)), w.tableNote)
+	watch := container.New(&widthWatch{onChange: func(width float32) {
+		w.fit.width = width
+		refitText(w.tableNote)
+		if w.ctx.m != nil {
+			w.fitColumns(false)
+		}
+	}}, w.table)
+	return container.NewBorder(head, nil, nil, nil, watch)
 }
 
 // headerText is a column's title with the sort arrow.
@@ -159,9 +169,14 @@ func (w *Window) refreshTable(full bool) {
 		note += fmt.Sprintf(" · %d working sizes", working)
 	}
 	note += fireNote(m.Scheme)
-	w.tableNote.SetText(note)
-	w.table.update(full || w.ctx.sys != w.tableSys || w.ctx.m.Scheme.Setting.Method != w.tableMethod)
+	setWrappedText(w.tableNote, note)
+	full = full || w.ctx.sys != w.tableSys || w.ctx.m.Scheme.Setting.Method != w.tableMethod
 	w.tableSys, w.tableMethod = w.ctx.sys, w.ctx.m.Scheme.Setting.Method
+	n := w.fit.refreshes
+	w.fitColumns(full)
+	if w.fit.refreshes == n {
+		w.table.update(false)
+	}
 }
 
 // metricWords says how the table ranks.
@@ -270,7 +285,7 @@ func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
 		func() (int, int) { return len(*rows), len(widths) },
 		func() fyne.CanvasObject {
 			l := widget.NewLabel("")
-			l.Truncation = fyne.TextTruncateEllipsis
+			l.Truncation = fyne.TextTruncateClip
 			return l
 		},
 		func(id widget.TableCellID, o fyne.CanvasObject) {
@@ -279,22 +294,11 @@ func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
 				l.SetText("")
 				return
 			}
-			s := (*rows)[id.Row]
-			v, u := units.Convert(s.Value, s.Unit, sys())
 			l.Alignment = fyne.TextAlignLeading
-			switch id.Col {
-			case 0:
-				l.SetText(s.Quantity)
-			case 1:
+			if id.Col == 1 {
 				l.Alignment = fyne.TextAlignTrailing
-				l.SetText(stepValue(v))
-			case 2:
-				l.SetText(u)
-			case 3:
-				l.SetText(s.Clause)
-			case 4:
-				l.SetText(s.Formula)
 			}
+			l.SetText(stepText((*rows)[id.Row], id.Col, sys()))
 		})
 	t.ShowHeaderRow = true
 	t.CreateHeader = func() fyne.CanvasObject {
@@ -308,6 +312,7 @@ func stepTable(rows *[]model.Step, sys func() units.System) *liveTable {
 	for i, wd := range widths {
 		t.SetColumnWidth(i, wd)
 	}
+	t.fit = func() { fitStepColumns(t, widths, titles, *rows, sys()) }
 	return t
 }
 

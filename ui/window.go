@@ -68,7 +68,7 @@ type Window struct {
 	fields      map[string]*field
 	sketches    map[model.EndCondition]*widgets.EndSketch
 	weakCheck   *widget.Check
-	twistCheck  *widget.Check // the weak-axis braces also restrain twisting (steel Lcz)
+	twistCheck  *widget.Check  // the weak-axis braces also restrain twisting (steel Lcz)
 	nameEntry   *widget.Entry  // the scheme's name
 	tieSelect   *widget.Select // the near-tie tolerance
 	loadMode    *widget.RadioGroup
@@ -114,6 +114,9 @@ type Window struct {
 	tableMethod model.Method // method of the headers shown
 	tableNote   *widget.Label
 	showAllChk  *widget.Check
+	allColsChk  *widget.Check
+	fit         tableFit               // the columns the table's width holds
+	keys        map[string]*image.RGBA // each drawn curve's key, by designation
 
 	// calculation view
 	calcTitle *widget.Label
@@ -127,6 +130,9 @@ type Window struct {
 	loadRows  []model.Step
 
 	// frame
+	panes      panes           // the draggable splits and the folded inputs
+	inSections []*inputSection // the foldable sections of the inputs
+	caution    *widget.Label
 	banner     *fyne.Container
 	bannerText *widget.Label
 	status     *widget.Label
@@ -205,27 +211,12 @@ func (w *Window) build() fyne.CanvasObject {
 	w.banner = container.NewStack(bg, w.bannerText)
 	w.banner.Hide()
 
-	// Centre: the chart over the results; right: the crossovers over the
-	// calculation of the row chosen.
-	centre := container.NewVSplit(chartArea, results)
-	centre.Offset = 0.56
-	right := container.NewVSplit(xsPanel, calc)
-	right.Offset = 0.36
-	mainSplit := container.NewHSplit(centre, right)
-	mainSplit.Offset = 0.66
-	main := container.NewBorder(w.banner, nil, nil, nil, mainSplit)
-
-	side := container.NewVScroll(inputs)
-	side.SetMinSize(fyne.NewSize(330, 200))
-	split := container.NewHSplit(side, main)
-	split.Offset = 0.235
+	split := w.buildPanes(inputs, chartArea, results, xsPanel, calc, w.banner)
 
 	w.status = widget.NewLabel("")
-	w.status.Truncation = fyne.TextTruncateClip
-	caution := widget.NewLabel("⚠ " + model.Caution + "  (Help ▸ Cautions)")
-	caution.Importance = widget.WarningImportance
-	caution.Truncation = fyne.TextTruncateEllipsis
-	statusBar := container.NewBorder(nil, nil, nil, fixedWidth(380, w.status), caution)
+	w.status.Wrapping = fyne.TextWrapWord
+	w.status.Alignment = fyne.TextAlignTrailing
+	statusBar := container.NewBorder(nil, nil, nil, fixedWidth(300, w.status), w.buildCaution())
 	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), statusBar), nil, nil, split)
 }
 
@@ -342,9 +333,9 @@ func (w *Window) applySnapshot(s *Snapshot) {
 		n += len(s.Result.Families[i].Rows)
 	}
 	if msg := w.Notice(); msg != "" {
-		w.status.SetText(msg)
+		setWrappedText(w.status, msg)
 	} else {
-		w.status.SetText(fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
+		setWrappedText(w.status, fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
 	}
 	w.firstLog.Do(func() {
 		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was created (%d candidates)",
@@ -381,6 +372,7 @@ func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
 			w.front = image.NewRGBA(b)
 		}
 		copy(w.front.Pix, img.Pix)
+		w.takeKeys(info.Keys)
 		w.frame = info
 		w.frames++
 		if w.frames == 1 {

@@ -347,7 +347,7 @@ func TestSortingByAColumn(t *testing.T) {
 		assert.True(t, strings.HasSuffix(h.w.headerText(col), "▼"))
 		// Clicking the header sorts too.
 		hdr := h.w.table.CreateHeader()
-		h.w.table.UpdateHeader(widget.TableCellID{Row: -1, Col: columnIndex("util")}, hdr)
+		h.w.table.UpdateHeader(widget.TableCellID{Row: -1, Col: h.w.tableColOf("util")}, hdr)
 		test.Tap(hdr.(*widget.Button))
 		assert.Equal(t, columnIndex("util"), h.w.sortCol)
 		for i := 1; i < len(h.w.rows); i++ {
@@ -540,7 +540,7 @@ func TestSchemeAndSizeComeBackThroughPreferences(t *testing.T) {
 	assert.Equal(t, sc.Name, back.Name)
 	assert.InDelta(t, 7100, back.Setting.LengthMM, 1e-9)
 	assert.Equal(t, model.SI, back.Units)
-	assert.Equal(t, fyne.NewSize(1200, 800), savedSize(p))
+	assert.Equal(t, fyne.NewSize(1200, 800), savedSize(p, fyne.Size{}))
 	// A stored scheme that no longer validates falls back to the demo, saying why.
 	p.SetString(prefScheme, `{"Setting":{"LengthMM":-4}}`)
 	back, err = savedScheme(p)

@@ -45,7 +45,7 @@ type schemeFlags struct {
 
 	fillFc, compositeFamilies string
 	aggregate                 string // concrete aggregate for the fire rating
-	tie string
+	tie                       string
 }
 
 func newSchemeFlags(name string, out io.Writer) *schemeFlags {
@@ -584,6 +584,7 @@ func parseShare(s string) (float64, error) {
 	}
 	return v, nil
 }
+
 // typedUnits is the unit system the user typed in: that of --length, else
 // (with no --scheme, whose own units stand) that of --load or --tributary.
 func (f *schemeFlags) typedUnits() (model.Units, bool) {

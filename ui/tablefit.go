@@ -1,0 +1,251 @@
+package ui
+
+import (
+	"fmt"
+	"image"
+	"slices"
+	"unicode/utf8"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/canvas"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/widget"
+)
+
+// columnPriority orders the results table's columns by how much an
+// architect needs them: the table shows as many as its width holds, in this
+// order, each as wide as its widest text, so nothing is cut; the rest are
+// behind the "All columns" switch (and in the calculation view).
+var columnPriority = []string{"size", "weight", "plan", "util", "capacity", "status", "family", "governs", "column-weight", "demand", "area", "carbon", "slenderness"}
+
+// tableFit is the results table's choice of columns.
+type tableFit struct {
+	all     bool      // every column, scrolling sideways when needed
+	width   float32   // the table's width last laid out
+	natural []float32 // each column's width for its widest text so far
+	runes   []int     // each column's longest text so far, in characters
+	// measured holds texts already measured at the longest length.
+	measured map[string]uint8
+	shown    []int  // columns shown, by index into columns, in table order
+	key      string // units, method and sorted column the natural widths belong to
+	// refreshes counts full redraws of the table by fitColumns.
+	refreshes int
+}
+
+// keyColumnWidth is the width of the key column (the curve swatch).
+const keyColumnWidth = keyWidth + 8
+
+// tableCol maps a table column to the index of the results column it shows,
+// or -1 for the key column.
+func (w *Window) tableCol(c int) int {
+	if c == 0 {
+		return -1
+	}
+	if c-1 < len(w.fit.shown) {
+		return w.fit.shown[c-1]
+	}
+	return len(columns) // past the end: an empty cell
+}
+
+// ShownColumns returns the ids of the result columns the table shows, in order.
+func (w *Window) ShownColumns() []string {
+	out := make([]string, 0, len(w.fit.shown))
+	for _, c := range w.fit.shown {
+		out = append(out, columns[c].id)
+	}
+	return out
+}
+
+// newKeyCell makes a table cell: a key swatch under a text label; only the
+// key column shows the swatch.
+func newKeyCell() fyne.CanvasObject {
+	img := canvas.NewImageFromImage(nil)
+	img.FillMode = canvas.ImageFillContain
+	img.ScaleMode = canvas.ImageScaleFastest
+	img.Hide()
+	l := widget.NewLabel("")
+	l.Truncation = fyne.TextTruncateClip
+	return container.NewStack(container.NewPadded(img), l)
+}
+
+// fillTableCell fills a cell of the results table.
+func (w *Window) fillTableCell(id widget.TableCellID, o fyne.CanvasObject) {
+	box := o.(*fyne.Container)
+	img := box.Objects[0].(*fyne.Container).Objects[0].(*canvas.Image)
+	l := box.Objects[1].(*widget.Label)
+	col := w.tableCol(id.Col)
+	if col >= 0 {
+		if img.Visible() {
+			img.Hide()
+		}
+		w.updateCell(widget.TableCellID{Row: id.Row, Col: col}, l)
+		return
+	}
+	if l.Text != "" {
+		l.SetText("")
+	}
+	var key *image.RGBA
+	if id.Row >= 0 && id.Row < len(w.rows) {
+		key = w.keys[w.rows[id.Row].Static.Designation]
+	}
+	if key == nil {
+		img.Hide()
+		return
+	}
+	if img.Image != key {
+		img.Image = key
+		img.Refresh()
+	}
+	img.Show()
+}
+
+// cellWidth is the width a label needs to show txt uncut.
+func cellWidth(txt string) float32 {
+	return fyne.MeasureText(txt, theme.TextSize(), fyne.TextStyle{Bold: true}).Width + 2*theme.InnerPadding() + 2
+}
+
+// headerWidths caches the widths of header texts (headerWidth).
+var headerWidths = map[string]float32{}
+
+// headerWidth is the width a header button needs to show txt uncut.
+// UI goroutine.
+func headerWidth(txt string) float32 {
+	if wd, ok := headerWidths[txt]; ok {
+		return wd
+	}
+	b := widget.NewButton(txt, nil)
+	b.Importance = widget.LowImportance
+	wd := b.MinSize().Width + 2
+	headerWidths[txt] = wd
+	return wd
+}
+
+// fitColumns measures the columns' texts and chooses the columns the
+// table's width holds, redrawing the table when the choice or a width
+// changed; full redraws it anyway.
+func (w *Window) fitColumns(full bool) {
+	f := &w.fit
+	key := fmt.Sprintf("%s|%s|%d", w.ctx.sys, w.ctx.m.Scheme.Setting.Method, w.sortCol)
+	if key != f.key || len(f.natural) != len(columns) {
+		f.key = key
+		f.natural = make([]float32, len(columns))
+		f.runes = make([]int, len(columns))
+		f.measured = map[string]uint8{}
+	}
+	changed := false
+	for c := range columns {
+		nat := f.natural[c]
+		if nat == 0 {
+			nat = headerWidth(w.headerText(c)) // with its sort arrow
+			f.runes[c] = 0
+		}
+		// Only a text longer than any measured so far can need more room:
+		// measuring every cell on every slider step would cost milliseconds.
+		for r := range w.rows {
+			txt := columns[c].cell(&w.ctx, &w.rows[r])
+			if n := utf8.RuneCountInString(txt); n > f.runes[c] {
+				f.runes[c] = n
+				nat = max(nat, cellWidth(txt))
+			} else if n == f.runes[c] && !columns[c].right && f.measured[txt] == 0 {
+				// A name as long as the longest may still be wider; numbers
+				// (right-aligned) use figures of one width.
+				nat = max(nat, cellWidth(txt))
+			}
+			if !columns[c].right && len(f.measured) < 4096 {
+				f.measured[txt] = 1
+			}
+		}
+		if nat != f.natural[c] {
+			f.natural[c], changed = nat, true
+		}
+	}
+	shown := f.choose()
+	if !slices.Equal(shown, f.shown) {
+		f.shown, changed = shown, true
+	}
+	if !changed && !full {
+		return
+	}
+	w.table.SetColumnWidth(0, keyColumnWidth)
+	for i, c := range f.shown {
+		w.table.SetColumnWidth(i+1, f.natural[c])
+	}
+	sticky := 1
+	for _, c := range f.shown {
+		if id := columns[c].id; id != "status" && id != "family" && id != "size" {
+			break
+		}
+		sticky++
+	}
+	w.table.StickyColumnCount = sticky
+	f.refreshes++
+	w.table.update(true)
+}
+
+// choose returns the columns that fit the width, in priority order until
+// one does not fit, then in the table's order; every column with all set.
+func (f *tableFit) choose() []int {
+	var out []int
+	if f.all || f.width <= 0 {
+		for c := range columns {
+			out = append(out, c)
+		}
+		return out
+	}
+	pad := theme.Padding()
+	room := f.width - keyColumnWidth - pad - 4
+	for _, id := range columnPriority {
+		c := columnIndex(id)
+		if c < 0 {
+			continue
+		}
+		need := f.natural[c] + pad
+		if need > room && len(out) > 0 {
+			continue // a narrower column further down may still fit
+		}
+		room -= need
+		out = append(out, c)
+	}
+	slices.Sort(out)
+	return out
+}
+
+// widthWatch lays out one object over its whole area and reports width changes.
+type widthWatch struct {
+	last     float32
+	onChange func(width float32)
+}
+
+// Layout fills the area with each object and reports a new width.
+func (l *widthWatch) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	for _, o := range objs {
+		o.Move(fyne.NewPos(0, 0))
+		o.Resize(size)
+	}
+	if size.Width != l.last {
+		l.last = size.Width
+		if l.onChange != nil {
+			l.onChange(size.Width)
+		}
+	}
+}
+
+// MinSize is the largest minimum size of the objects.
+func (l *widthWatch) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	var s fyne.Size
+	for _, o := range objs {
+		s = s.Max(o.MinSize())
+	}
+	return s
+}
+
+// tableColOf returns the table column showing a results column (by id), or -1.
+func (w *Window) tableColOf(id string) int {
+	for i, c := range w.fit.shown {
+		if columns[c].id == id {
+			return i + 1
+		}
+	}
+	return -1
+}

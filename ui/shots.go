@@ -31,6 +31,8 @@ var shotViews = []shotView{
 	{"window", nil},
 	{"calculation", showRow(1)},
 	{"load-takedown", showTab("Load takedown")},
+	{"plan-sections", showTab("Sections")},
+	{"map", showTab("Map")},
 	{"file-menu", showFileMenu},
 	{"inputs-folded", func(w *Window) func() { w.FoldInputs(true); return func() { w.FoldInputs(false) } }},
 	{"sections-folded", func(w *Window) func() {

@@ -81,7 +81,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		}
 		return w.front
 	})
-	w.chartRaster.SetMinSize(fyne.NewSize(420, 260))
+	w.chartRaster.SetMinSize(fyne.NewSize(420, 240))
 	w.markerLine = canvas.NewLine(markerInk)
 	w.markerLine.StrokeWidth = 1.6
 	w.markerBox = canvas.NewRectangle(color.NRGBA{R: 255, G: 255, B: 255, A: 0xE6})

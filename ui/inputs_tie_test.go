@@ -13,13 +13,13 @@ func TestNearTieToleranceSetting(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	h.ui(func() {
 		assert.Equal(t, "5%", h.w.tieSelect.Selected, "the demo uses the default")
-		h.w.tieSelect.SetSelected("10%")
+		h.w.tieSelect.SetSelected("20%") // glulam 29.7 lb/ft, round tube 35.1 lb/ft at 18 ft: within 20%
 	})
 	h.settle()
 	h.ui(func() {
-		assert.Equal(t, 0.10, h.w.st.Valid.Tie)
+		assert.Equal(t, 0.20, h.w.st.Valid.Tie)
 		note := h.w.tableNote.Text
-		assert.True(t, strings.Contains(note, "within 10%: "), note)
+		assert.True(t, strings.Contains(note, "within 20%: "), note)
 		h.w.tieSelect.SetSelected("none")
 	})
 	h.settle()

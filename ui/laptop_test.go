@@ -287,7 +287,7 @@ func TestInputSectionsFoldAndComeBack(t *testing.T) {
 		for _, s := range w.inSections {
 			titles = append(titles, s.title)
 		}
-		assert.Equal(t, []string{"Column", "Load", "Design", "Materials"}, titles, "every inputs section folds")
+		assert.Equal(t, []string{"Column", "Load", "Design", "Fire resistance", "Materials"}, titles, "every inputs section folds")
 		directHidden := !w.directBox.Visible()
 		w.FoldSection("Load", true)
 		assert.True(t, w.SectionFolded("Load"))
@@ -319,11 +319,20 @@ func TestScreenshotViewsFindTheirTabs(t *testing.T) {
 		eachTabs(h.w.win.Content(), func(tb tabber) {
 			titles = append(titles, tb.Selected().Text)
 		})
-		require.Equal(t, []string{"Calculation"}, titles)
+		require.Equal(t, []string{"Chart", "Calculation"}, titles)
+		selected := func() []string {
+			var out []string
+			eachTabs(h.w.win.Content(), func(tb tabber) { out = append(out, tb.Selected().Text) })
+			return out
+		}
 		undo := showTab("Load takedown")(h.w)
-		eachTabs(h.w.win.Content(), func(tb tabber) { assert.Equal(t, "Load takedown", tb.Selected().Text) })
+		assert.Equal(t, []string{"Chart", "Load takedown"}, selected())
 		undo()
-		eachTabs(h.w.win.Content(), func(tb tabber) { assert.Equal(t, "Calculation", tb.Selected().Text) })
+		assert.Equal(t, []string{"Chart", "Calculation"}, selected())
+		undo = showTab("Map")(h.w)
+		assert.Equal(t, []string{"Map", "Calculation"}, selected())
+		undo()
+		assert.Equal(t, []string{"Chart", "Calculation"}, selected())
 		names := map[string]bool{}
 		for _, v := range shotViews {
 			assert.False(t, names[v.name], "view names are file names: %s twice", v.name)

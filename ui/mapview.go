@@ -124,7 +124,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 		}
 		return mv.front
 	})
-	mv.raster.SetMinSize(fyne.NewSize(420, 260))
+	mv.raster.SetMinSize(fyne.NewSize(420, 240))
 	mv.surface = newMapSurface(mv.raster, mv.tapped)
 	mv.status = widget.NewLabel("")
 	mv.status.Truncation = fyne.TextTruncateEllipsis

@@ -70,7 +70,7 @@ func newSectionsView(w *Window) *sectionsView {
 		}
 		return v.front
 	})
-	v.raster.SetMinSize(fyne.NewSize(420, 260))
+	v.raster.SetMinSize(fyne.NewSize(420, 240))
 	v.area = newSectionsArea(v)
 	go v.loop()
 	return v

@@ -235,7 +235,7 @@ func (w *Window) configureSlider() {
 	sys := w.sys()
 	r := w.st.Range
 	if r.ToMM <= r.FromMM {
-		r = viewRange(w.st.Draft.Setting.LengthMM, sys)
+		r = model.DefaultRange(w.st.Draft.Setting.LengthMM, model.Units(sys))
 	}
 	w.quiet++
 	w.slider.Min, w.slider.Max = toDisplay(r.FromMM, sys), toDisplay(r.ToMM, sys)

@@ -196,7 +196,7 @@ func (mv *mapView) close() {
 // afresh only when the point leaves it or the axis changes.
 func (mv *mapView) mapSpecFor(sc *model.Scheme, r model.Range) model.MapSpec {
 	if r.ToMM <= r.FromMM {
-		r = model.DefaultRange(sc.Setting.LengthMM)
+		r = model.DefaultRange(sc.Setting.LengthMM, sc.Units)
 	}
 	v := sc.Load.DirectN
 	if model.MapAxisOf(sc) == model.MapTributary {

@@ -39,7 +39,7 @@ func TestProbeFindsWherePlotsDrawsTheMarker(t *testing.T) {
 	sc := DemoScheme()
 	m, err := model.New(sc)
 	require.NoError(t, err)
-	rng := viewRange(sc.Setting.LengthMM, units.System(sc.Units))
+	rng := model.DefaultRange(sc.Setting.LengthMM, sc.Units)
 	b := chart.NewBuilder(m)
 	for _, size := range [][2]int{{1000, 450}, {700, 380}, {1400, 600}} {
 		for _, ft := range []float64{6, 18, 31} {

@@ -289,7 +289,7 @@ func (s *State) rebuilt() {
 	s.SchemeGen++
 	s.built = s.Valid
 	if !s.inRange(s.Valid.Setting.LengthMM) || (!s.userRange && s.rangeSys != s.Sys()) {
-		s.Range, s.rangeSys, s.userRange = viewRange(s.Valid.Setting.LengthMM, s.Sys()), s.Sys(), false
+		s.Range, s.rangeSys, s.userRange = model.DefaultRange(s.Valid.Setting.LengthMM, model.Units(s.Sys())), s.Sys(), false
 	}
 }
 

@@ -9,41 +9,6 @@ import (
 	"upright/ui/units"
 )
 
-// rangeSteps are the round slider and chart ranges of each unit system, in
-// the shown unit: the first end, the far ends tried in turn, the smallest
-// length a range may start at, and the unit's size in mm.
-type rangeSteps struct {
-	from, low, unitMM float64
-	to                []float64
-}
-
-var viewSteps = map[units.System]rangeSteps{
-	units.SI: {from: 0.5, low: 0.3, unitMM: 1000, to: []float64{12, 18, 24, 30}},
-	units.US: {from: 2, low: 1, unitMM: units.MMPerFoot, to: []float64{40, 60, 80, 98}},
-}
-
-// viewRange is the slider and chart range for a length, in round numbers of
-// the shown unit: 0.5 m to 12 m (or 2 ft to 40 ft), the far end moved out a
-// step at a time while the length sits in the top quarter, up to
-// model.MaxLengthMM. Steps keep the range still while the length moves.
-func viewRange(mm float64, sys units.System) model.Range {
-	st, ok := viewSteps[sys]
-	if !ok {
-		st = viewSteps[units.SI]
-	}
-	r := model.Range{FromMM: st.from * st.unitMM}
-	for _, to := range st.to {
-		r.ToMM = math.Min(to*st.unitMM, model.MaxLengthMM)
-		if mm <= 0.75*r.ToMM {
-			break
-		}
-	}
-	if mm < r.FromMM {
-		r.FromMM = math.Max(st.low*st.unitMM, model.MinLengthMM)
-	}
-	return r
-}
-
 // SetRange sets the slider and chart range chosen by the user. It refuses,
 // naming what is accepted, a range outside 0.3 m to 30 m (1 ft to 98 ft),
 // shorter than 0.3 m, or not holding the column's length.

@@ -9,28 +9,6 @@ import (
 	"upright/ui/units"
 )
 
-// The slider's ends are round numbers in the unit shown.
-func TestViewRangeIsRoundInTheShownUnit(t *testing.T) {
-	cases := []struct {
-		mm       float64
-		sys      units.System
-		from, to string
-	}{
-		{18 * units.MMPerFoot, units.US, `2'-0.0"`, `40'-0.0"`},
-		{35 * units.MMPerFoot, units.US, `2'-0.0"`, `60'-0.0"`},
-		{70 * units.MMPerFoot, units.US, `2'-0.0"`, `98'-0.0"`},
-		{1.5 * units.MMPerFoot, units.US, `1'-0.0"`, `40'-0.0"`},
-		{4000, units.SI, "0.50 m", "12.00 m"},
-		{400, units.SI, "0.30 m", "12.00 m"},
-		{20000, units.SI, "0.50 m", "30.00 m"},
-	}
-	for _, c := range cases {
-		r := viewRange(c.mm, c.sys)
-		assert.Equal(t, c.from, units.Length(r.FromMM, c.sys), "%g mm %s", c.mm, c.sys)
-		assert.Equal(t, c.to, units.Length(r.ToMM, c.sys), "%g mm %s", c.mm, c.sys)
-	}
-}
-
 // The user changes the range; the slider and its label follow, in the unit
 // shown, and a range that would lose the column's length is refused.
 func TestTheUserSetsTheSliderRange(t *testing.T) {

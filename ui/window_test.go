@@ -630,16 +630,6 @@ func TestFieldParsing(t *testing.T) {
 	}
 }
 
-func TestViewRangeSteps(t *testing.T) {
-	for _, c := range []struct{ mm, to float64 }{
-		{4000, 12000}, {9000, 12000}, {9100, 18000}, {13600, 24000}, {25000, 30000}, {30000, 30000},
-	} {
-		r := viewRange(c.mm, units.SI)
-		assert.Equal(t, c.to, r.ToMM, "%g mm", c.mm)
-		assert.LessOrEqual(t, r.FromMM, c.mm)
-	}
-}
-
 func TestOpenHookLoadsTheScheme(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	other := DemoScheme()

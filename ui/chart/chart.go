@@ -109,7 +109,7 @@ func (b *Builder) Chart(res *model.Result, opt Options) plots.Chart {
 	sys := b.sys()
 	r := opt.Range
 	if r.ToMM <= r.FromMM {
-		r = model.DefaultRange(m.Scheme.Setting.LengthMM)
+		r = model.DefaultRange(m.Scheme.Setting.LengthMM, m.Scheme.Units)
 	}
 	xl, yl := Labels(m)
 	ch := plots.Chart{Title: opt.Title, XLabel: xl, YLabel: yl}

@@ -59,7 +59,7 @@ func TestChartShowsBestOfEachFamilyAndPinned(t *testing.T) {
 
 func TestChartSIAndCrossoverMarks(t *testing.T) {
 	m, res := demoModel(t, model.SI)
-	xs, err := m.Crossovers(context.Background(), res.Setting, model.DefaultRange(4500), nil)
+	xs, err := m.Crossovers(context.Background(), res.Setting, model.DefaultRange(4500, model.SI), nil)
 	require.NoError(t, err)
 	ch := NewBuilder(m).Chart(res, Options{Crossovers: xs})
 	assert.Contains(t, ch.XLabel, "(m)")

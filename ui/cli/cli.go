@@ -316,7 +316,7 @@ func writeChart(m *model.Model, res *model.Result, path string) error {
 	if _, err := plots.FormatOf(path); err != nil {
 		return usagef("--chart %q: %v", path, err)
 	}
-	xs, err := m.Crossovers(context.Background(), res.Setting, model.DefaultRange(res.Setting.LengthMM), nil)
+	xs, err := m.Crossovers(context.Background(), res.Setting, model.DefaultRange(res.Setting.LengthMM, m.Scheme.Units), nil)
 	if err != nil {
 		return err
 	}
@@ -405,13 +405,13 @@ func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System
 func runCrossovers(args []string, stdout, stderr io.Writer) error {
 	f := newSchemeFlags("crossovers", stderr)
 	asJSON := f.fs.Bool("json", false, "write JSON: an array of crossover objects")
-	from := f.fs.String("from", "", "start of the length range (default 0.5 m)")
-	to := f.fs.String("to", "", "end of the length range (default the larger of 12 m and twice --length)")
+	from := f.fs.String("from", "", "start of the length range (default "+model.DefaultRangeHelp+")")
+	to := f.fs.String("to", "", "end of the length range (default "+model.DefaultRangeHelp+")")
 	sc, err := schemeFrom(f, args)
 	if err != nil {
 		return err
 	}
-	r, err := rangeFlags(*from, *to, sc.Setting.LengthMM)
+	r, err := rangeFlags(*from, *to, sc.Setting.LengthMM, sc.Units)
 	if err != nil {
 		return err
 	}
@@ -468,8 +468,8 @@ func DescribeCrossover(x model.Crossover) string {
 	return x.From + " → " + x.To
 }
 
-func rangeFlags(from, to string, lengthMM float64) (model.Range, error) {
-	r := model.DefaultRange(lengthMM)
+func rangeFlags(from, to string, lengthMM float64, u model.Units) (model.Range, error) {
+	r := model.DefaultRange(lengthMM, u)
 	if from != "" {
 		v, err := units.ParseLength(from)
 		if err != nil {
@@ -512,8 +512,8 @@ func runCurve(args []string, stdout, stderr io.Writer) error {
 	f := newSchemeFlags("curve", stderr)
 	asJSON := f.fs.Bool("json", false, "write JSON")
 	des := f.fs.String("designation", "", "candidate to trace, e.g. W12X65")
-	from := f.fs.String("from", "1m", "start length")
-	to := f.fs.String("to", "10m", "end length")
+	from := f.fs.String("from", "", "start length (default "+model.DefaultRangeHelp+")")
+	to := f.fs.String("to", "", "end length (default "+model.DefaultRangeHelp+")")
 	sc, err := schemeFrom(f, args)
 	if err != nil {
 		return err
@@ -521,7 +521,7 @@ func runCurve(args []string, stdout, stderr io.Writer) error {
 	if *des == "" {
 		return usagef("--designation: required; give a candidate's designation as compare --all lists it, e.g. W12X65")
 	}
-	r, err := rangeFlags(*from, *to, sc.Setting.LengthMM)
+	r, err := rangeFlags(*from, *to, sc.Setting.LengthMM, sc.Units)
 	if err != nil {
 		return err
 	}

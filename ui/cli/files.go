@@ -25,8 +25,8 @@ func runReport(args []string, stdout, stderr io.Writer) error {
 	f := newSchemeFlags("report", stderr)
 	out := f.fs.String("out", "", "PDF file to write (required), e.g. report.pdf")
 	top := f.fs.Int("top", report.DefaultTopN, "working sizes listed per family, 1 to 50")
-	from := f.fs.String("from", "", "start of the chart and crossover range (default 0.5 m)")
-	to := f.fs.String("to", "", "end of the chart and crossover range (default the larger of 12 m and twice --length)")
+	from := f.fs.String("from", "", "start of the chart and crossover range (default "+model.DefaultRangeHelp+")")
+	to := f.fs.String("to", "", "end of the chart and crossover range (default "+model.DefaultRangeHelp+")")
 	withMap := f.fs.Bool("map", false, "add the map of the winning family over length and load (always added when the scheme's report_map is true)")
 	m, err := buildModel(f, args)
 	if err != nil {
@@ -38,7 +38,7 @@ func runReport(args []string, stdout, stderr io.Writer) error {
 	if *top < 1 || *top > 50 {
 		return usagef("--top %d: not accepted; give 1 to 50 sizes per family", *top)
 	}
-	r, err := rangeFlags(*from, *to, m.Scheme.Setting.LengthMM)
+	r, err := rangeFlags(*from, *to, m.Scheme.Setting.LengthMM, m.Scheme.Units)
 	if err != nil {
 		return err
 	}

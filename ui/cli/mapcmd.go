@@ -98,7 +98,7 @@ func parseSteps(s string) (int, int, error) {
 // [--steps NxM] [scheme flags] --out FILE or --json.
 func runMap(args []string, stdout, stderr io.Writer) error {
 	f := newSchemeFlags("map", stderr)
-	lengthRange := f.fs.String("length-range", "", "unbraced lengths across the map, e.g. 1m..12m or 4ft..40ft (default 0.5 m to the larger of 12 m and twice --length)")
+	lengthRange := f.fs.String("length-range", "", "unbraced lengths across the map, e.g. 1m..12m or 4ft..40ft (default "+model.DefaultRangeHelp+")")
 	loadRange := f.fs.String("load-range", "", "typed axial loads up the map, e.g. 500kN..5000kN or 100kip..1200kip (default a quarter to twice --load)")
 	tribRange := f.fs.String("tributary-range", "", "with a takedown, tributary areas per floor up the map, e.g. 20m2..120m2 (default a quarter to twice --tributary)")
 	steps := f.fs.String("steps", "", "length steps x load steps, e.g. 100x60 (the default)")
@@ -117,7 +117,7 @@ func runMap(args []string, stdout, stderr io.Writer) error {
 		}
 	}
 	axis := model.MapAxisOf(&sc)
-	sp := model.DefaultMapSpec(&sc, model.DefaultRange(sc.Setting.LengthMM))
+	sp := model.DefaultMapSpec(&sc, model.DefaultRange(sc.Setting.LengthMM, sc.Units))
 	if *lengthRange != "" {
 		lo, hi, err := parseRange("length-range", *lengthRange, "1m..12m", units.ParseLength)
 		if err != nil {

@@ -12,12 +12,6 @@ const ToleranceMM = 5.0
 // Range is a span of unbraced lengths, mm.
 type Range struct{ FromMM, ToMM float64 }
 
-// DefaultRange is 0.5 m to the larger of 12 m and twice the current length,
-// capped at MaxLengthMM.
-func DefaultRange(lengthMM float64) Range {
-	return Range{500, math.Min(MaxLengthMM, math.Max(12000, 2*lengthMM))}
-}
-
 // CurvePoint is one sample of a capacity curve.
 type CurvePoint struct {
 	LengthMM  float64

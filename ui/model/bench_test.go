@@ -47,7 +47,7 @@ func BenchmarkScheme(b *testing.B) {
 func BenchmarkCrossovers(b *testing.B) {
 	m := benchModel(b)
 	ctx := context.Background()
-	r := DefaultRange(m.Scheme.Setting.LengthMM)
+	r := DefaultRange(m.Scheme.Setting.LengthMM, m.Scheme.Units)
 	b.ResetTimer()
 	for i := 0; i < b.N; i++ {
 		if _, err := m.Crossovers(ctx, m.Scheme.Setting, r, nil); err != nil {

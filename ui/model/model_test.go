@@ -97,7 +97,7 @@ func TestEvaluateRanksWorkingFirst(t *testing.T) {
 func TestCrossoversConfirmedEitherSide(t *testing.T) {
 	m := fakeModel(t, twoFakes()...)
 	base := m.Scheme.Setting.AtLength(3000)
-	r := DefaultRange(base.LengthMM)
+	r := DefaultRange(base.LengthMM, SI)
 	xs, err := m.Crossovers(context.Background(), base, r, nil)
 	require.NoError(t, err)
 	require.NotEmpty(t, xs)
@@ -176,7 +176,7 @@ func TestCancelledEvaluationLeaksNothing(t *testing.T) {
 	cancel()
 	_, err := m.Evaluate(ctx, m.Scheme.Setting)
 	assert.ErrorIs(t, err, context.Canceled)
-	_, err = m.Crossovers(ctx, m.Scheme.Setting, DefaultRange(4000), nil)
+	_, err = m.Crossovers(ctx, m.Scheme.Setting, DefaultRange(4000, SI), nil)
 	assert.ErrorIs(t, err, context.Canceled)
 }
 

@@ -59,7 +59,7 @@ func (o Options) normalised(m *model.Model) (Options, error) {
 	}
 	r := o.Range
 	if r == (model.Range{}) {
-		o.Range = model.DefaultRange(m.Scheme.Setting.LengthMM)
+		o.Range = model.DefaultRange(m.Scheme.Setting.LengthMM, m.Scheme.Units)
 	} else if math.IsNaN(r.FromMM) || math.IsNaN(r.ToMM) || r.FromMM < model.MinLengthMM || r.ToMM > model.MaxLengthMM || r.ToMM <= r.FromMM {
 		return o, fmt.Errorf("report range: %v mm to %v mm is not accepted; give a range within 300 mm to 30,000 mm, from below to", r.FromMM, r.ToMM)
 	}

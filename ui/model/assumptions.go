@@ -2,7 +2,11 @@ package model
 
 import (
 	"fmt"
+	"math"
+	"strconv"
 	"strings"
+
+	"upright/steel/composite"
 )
 
 // AssumptionTopics are the columns of the per-material assumptions table.
@@ -58,7 +62,25 @@ func Assumptions() []Assumption {
 			"the weak-axis brace sets le about the weak axis (width b); no torsional mode",
 			"le/d above 50 is not permitted (NDS 2018 3.7.1.4) and marked, for the charred section too",
 		}},
+		{"composite", []string{
+			steelK + " (AISC 360-22 Commentary Table C-A-7.1 recommended design values, as steel; Lc = KL, I2.1b), unless K is typed",
+			"strength does not depend on the combination, as for steel: every gravity combination of ASCE 7-22 2.3.1 (LRFD) or 2.4.1 (ASD) is checked against the one strength (AISC 360-22 I2.2); the largest governs",
+			fmt.Sprintf("the tube's nominal weight plus the plain fill at %g lb/ft³ (%s kg/m³, common practice, from memory) × height, added as dead load with each combination's dead factor",
+				composite.DefaultWc, thousands(composite.DefaultWc*compositeKgm3PerPcf)),
+			"the weak-axis brace sets Lcy, as for steel; a closed filled tube has no torsional mode (I2.2 gives flexural buckling only; a closed section is so stiff in torsion that flexural buckling governs, as for HSS under E4), so twist-braced changes nothing",
+			"Lc/r of the steel tube above 200 is marked, the AISC 360-22 E2 (User Note) recommendation applied as for steel (Chapter I states no limit of its own, from memory); strength is still given",
+		}},
 	}
+}
+
+// thousands writes a positive number rounded to a whole, with a comma
+// between thousands, e.g. "2,323".
+func thousands(v float64) string {
+	n := int(math.Round(v))
+	if n < 1000 {
+		return strconv.Itoa(n)
+	}
+	return fmt.Sprintf("%s,%03d", thousands(float64(n/1000)), n%1000)
 }
 
 // TypedLoadAssumption says how a typed load is split, for the assumptions

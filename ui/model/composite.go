@@ -168,13 +168,25 @@ func (f *compositeFamily) Quick(i int, s Setting) Quick {
 	if st.Mode == 0 {
 		return Quick{Governing: compositeNotPerm, Reason: steelBadSetting}
 	}
-	return Quick{
+	q := Quick{
 		CapacityN:   st.Available * steelNPerKip,
 		Governing:   st.Mode.Words(c.Symmetric()),
 		Mode:        int(st.Mode),
 		Slenderness: st.Slenderness,
 		Permitted:   true,
 	}
+	if compositePastLimit(&c.Sec, k*lx, k*ly) {
+		q.Limit = LimitComposite
+	}
+	return q
+}
+
+// compositePastLimit reports whether Lc/r about either axis passes 200, r
+// being the steel tube's own radius of gyration, √(Is/As), as for a bare
+// tube (AISC 360-22 E2 User Note, applied to the filled tube; see
+// LimitComposite). It does not allocate.
+func compositePastLimit(sec *composite.Section, lcx, lcy float64) bool {
+	return lcx > 200*math.Sqrt(sec.Isx/sec.As) || lcy > 200*math.Sqrt(sec.Isy/sec.As)
 }
 
 // Detail evaluates candidate i at the setting with the full SI trace.
@@ -208,6 +220,9 @@ func (f *compositeFamily) Detail(i int, s Setting) Detail {
 		},
 		Warnings: r.Warnings,
 		Plain:    r.Plain,
+	}
+	if compositePastLimit(&c.Sec, r.Lcx, r.Lcy) {
+		d.Limit = LimitComposite
 	}
 	d.Steps = make([]Step, 0, len(r.Steps))
 	for _, x := range r.Steps {

@@ -9,13 +9,18 @@ const (
 	LimitConcrete = "k·lu/r above 100: not permitted (ACI 318-19 6.2.6; the moment magnifier method does not apply)"
 )
 
+// LimitComposite is the filled tube's mark: the steel recommendation
+// applied with r of the steel tube alone, since AISC 360-22 Chapter I states
+// no slenderness limit of its own for filled members (from memory).
+const LimitComposite = "Lc/r of the tube above 200: AISC 360-22 E2 (User Note) recommends not to exceed it, applied as for steel (Chapter I states no limit of its own, from memory); strength still given"
+
 // LimitMarkText is the visible mark put beside a slenderness that passes its limit.
 const LimitMarkText = "!"
 
 // SlendernessLimit is one material's slenderness limit, for the
 // assumptions table.
 type SlendernessLimit struct {
-	Material string  // "steel", "concrete" or "timber"
+	Material string  // "steel", "concrete", "timber" or "composite"
 	Ratio    string  // the ratio limited, e.g. "Lc/r"
 	Max      float64 // the limit
 	Effect   string  // what passing it means
@@ -26,6 +31,7 @@ var SlendernessLimits = []SlendernessLimit{
 	{"steel", "Lc/r", 200, LimitSteel},
 	{"concrete", "k·lu/r", 100, LimitConcrete},
 	{"timber", "le/d", 50, LimitTimber},
+	{"composite", "Lc/r", 200, LimitComposite},
 }
 
 // LimitMark returns the mark and its reason for a row whose slenderness

@@ -252,6 +252,15 @@ func (k *mapComposer) legendWidth(m *Map, max vg.Length) vg.Length {
 func (k *mapComposer) drawLegend(col draw.Canvas, m *Map) {
 	y := col.Max.Y
 	row := vg.Points(mapSwatchH + mapRowGap)
+	swH := vg.Points(mapSwatchH)
+	// Rows close up when the legend would run past the bottom of its
+	// column (a short map in a small window): swatches shrink to match.
+	rows := 0
+	legendTexts(m, func(string, bool) { rows++ })
+	if avail := col.Max.Y - col.Min.Y; rows > 0 && vg.Length(rows)*row > avail {
+		row = avail / vg.Length(rows)
+		swH = max(min(swH, row-vg.Points(2)), vg.Points(4))
+	}
 	thumb := vg.Points(mapSwatchW + legendGap)
 	textW := col.Max.X - col.Min.X - thumb
 	s := k.scene
@@ -262,7 +271,7 @@ func (k *mapComposer) drawLegend(col draw.Canvas, m *Map) {
 	}
 	swatch := func(st regionStyle, label string) {
 		y -= row / 2
-		r := vg.Rectangle{Min: vg.Point{X: col.Min.X, Y: y - vg.Points(mapSwatchH)/2}, Max: vg.Point{X: col.Min.X + vg.Points(mapSwatchW), Y: y + vg.Points(mapSwatchH)/2}}
+		r := vg.Rectangle{Min: vg.Point{X: col.Min.X, Y: y - swH/2}, Max: vg.Point{X: col.Min.X + vg.Points(mapSwatchW), Y: y + swH/2}}
 		s.path = s.path[:0]
 		s.rect(r)
 		col.SetColor(st.fill)
@@ -286,7 +295,7 @@ func (k *mapComposer) drawLegend(col draw.Canvas, m *Map) {
 		r := vg.Points(mapTieRadius)
 		for d := 0; d < 4; d++ {
 			x := col.Min.X + vg.Points(mapSwatchW)*(vg.Length(d)+0.5)/4
-			for _, dy := range [2]vg.Length{-vg.Points(mapSwatchH) / 4, vg.Points(mapSwatchH) / 4} {
+			for _, dy := range [2]vg.Length{-swH / 4, swH / 4} {
 				s.path = appendDot(s.path, vg.Point{X: x, Y: y + dy}, r)
 			}
 		}

@@ -385,7 +385,7 @@ func (mv *mapView) loop() {
 
 // mapStatus says what the map shows and how to use it.
 func mapStatus(g *model.WinMap) string {
-	won := 0 // families shown in at least one of the map's cells
+	won := 0 // families shown in at least one of the map's cells (the legend explains near-ties)
 	for fi := range g.Families {
 		for k := range g.Cells {
 			if g.Cells[k].Shown == fi {
@@ -393,16 +393,6 @@ func mapStatus(g *model.WinMap) string {
 				break
 			}
 		}
-	}
-	tied := false
-	for k := range g.Cells {
-		if g.Tied(&g.Cells[k]) {
-			tied = true
-			break
-		}
-	}
-	if tied {
-		return fmt.Sprintf("%d families win; dots mark near-ties (%s). Click a cell to move there.", won, model.TieText(g.Tie))
 	}
 	return fmt.Sprintf("%d families win. Click a cell to move there.", won)
 }

@@ -19,6 +19,7 @@ const (
 	mapWallWidth   = 1.5
 	mapHatchWidth  = 0.55
 	mapPointRadius = 6
+	mapTieRadius   = 1.1  // largest near-tie dot; smaller in small cells
 	mapTintShare   = 0.42 // share of the family colour in a region's fill; the rest is white
 )
 
@@ -196,6 +197,13 @@ func noneLabel(m *Map) string {
 	return "Nothing works"
 }
 
+func tieLabel(m *Map) string {
+	if m.TieLabel != "" {
+		return m.TieLabel
+	}
+	return "Near-tie"
+}
+
 func pointLabel(m *Map) string {
 	if m.PointLabel != "" {
 		return m.PointLabel
@@ -212,6 +220,9 @@ func legendTexts(m *Map, f func(s string, heading bool)) {
 		f(key.Label, false)
 	}
 	f(noneLabel(m), false)
+	if m.hasTies() {
+		f(tieLabel(m), false)
+	}
 	if m.Point != nil {
 		f(pointLabel(m), false)
 	}
@@ -241,6 +252,15 @@ func (k *mapComposer) legendWidth(m *Map, max vg.Length) vg.Length {
 func (k *mapComposer) drawLegend(col draw.Canvas, m *Map) {
 	y := col.Max.Y
 	row := vg.Points(mapSwatchH + mapRowGap)
+	swH := vg.Points(mapSwatchH)
+	// Rows close up when the legend would run past the bottom of its
+	// column (a short map in a small window): swatches shrink to match.
+	rows := 0
+	legendTexts(m, func(string, bool) { rows++ })
+	if avail := col.Max.Y - col.Min.Y; rows > 0 && vg.Length(rows)*row > avail {
+		row = avail / vg.Length(rows)
+		swH = max(min(swH, row-vg.Points(2)), vg.Points(4))
+	}
 	thumb := vg.Points(mapSwatchW + legendGap)
 	textW := col.Max.X - col.Min.X - thumb
 	s := k.scene
@@ -251,7 +271,7 @@ func (k *mapComposer) drawLegend(col draw.Canvas, m *Map) {
 	}
 	swatch := func(st regionStyle, label string) {
 		y -= row / 2
-		r := vg.Rectangle{Min: vg.Point{X: col.Min.X, Y: y - vg.Points(mapSwatchH)/2}, Max: vg.Point{X: col.Min.X + vg.Points(mapSwatchW), Y: y + vg.Points(mapSwatchH)/2}}
+		r := vg.Rectangle{Min: vg.Point{X: col.Min.X, Y: y - swH/2}, Max: vg.Point{X: col.Min.X + vg.Points(mapSwatchW), Y: y + swH/2}}
 		s.path = s.path[:0]
 		s.rect(r)
 		col.SetColor(st.fill)
@@ -268,6 +288,22 @@ func (k *mapComposer) drawLegend(col draw.Canvas, m *Map) {
 		swatch(s.styles[i], key.Label)
 	}
 	swatch(regionStyle{fill: noneFill, ink: noneHatch, hatch: noneHatchPattern}, noneLabel(m))
+	if m.hasTies() {
+		// A few dots on white, spaced as in a run of near-tie cells.
+		y -= row / 2
+		s.path = s.path[:0]
+		r := vg.Points(mapTieRadius)
+		for d := 0; d < 4; d++ {
+			x := col.Min.X + vg.Points(mapSwatchW)*(vg.Length(d)+0.5)/4
+			for _, dy := range [2]vg.Length{-swH / 4, swH / 4} {
+				s.path = appendDot(s.path, vg.Point{X: x, Y: y + dy}, r)
+			}
+		}
+		col.SetColor(okabeBlack)
+		col.Fill(s.path)
+		col.FillText(k.entry, vg.Point{X: col.Min.X + thumb, Y: y}, fit(k.entry, tieLabel(m), textW))
+		y -= row / 2
+	}
 	if m.Point != nil {
 		y -= row / 2
 		pointMark(&col, vg.Point{X: col.Min.X + vg.Points(mapSwatchW)/2, Y: y})
@@ -442,6 +478,23 @@ func (s *mapScene) Plot(c draw.Canvas, plt *plot.Plot) {
 		c.SetLineStyle(draw.LineStyle{Color: ink, Width: vg.Points(mapHatchWidth)})
 		c.Stroke(s.hatches[k])
 	}
+	// Near-tie dots, one at the centre of each marked cell.
+	if m.Ties != nil {
+		cw := (s.cx[nx] - s.cx[0]) / vg.Length(nx)
+		ch := (s.cy[ny] - s.cy[0]) / vg.Length(ny)
+		r := min(vg.Points(mapTieRadius), 0.2*min(cw, ch))
+		s.path = s.path[:0]
+		for k, tied := range m.Ties {
+			if tied {
+				i, j := k/nx, k%nx
+				s.path = appendDot(s.path, vg.Point{X: (s.cx[j] + s.cx[j+1]) / 2, Y: (s.cy[i] + s.cy[i+1]) / 2}, r)
+			}
+		}
+		if len(s.path) > 0 {
+			c.SetColor(okabeBlack)
+			c.Fill(s.path)
+		}
+	}
 	// Boundaries where the winner changes.
 	s.path = s.path[:0]
 	for i := 0; i < ny; i++ {
@@ -563,6 +616,14 @@ func (s *mapScene) overlaps(box vg.Rectangle) bool {
 		}
 	}
 	return false
+}
+
+// appendDot appends a closed disc of radius r at pt to p.
+func appendDot(p vg.Path, pt vg.Point, r vg.Length) vg.Path {
+	p.Move(vg.Point{X: pt.X + r, Y: pt.Y})
+	p.Arc(pt, r, 0, 2*math.Pi)
+	p.Close()
+	return p
 }
 
 // growInt32 returns s resized to n, reusing its storage when large enough.

@@ -40,6 +40,12 @@ type Map struct {
 	// Walls, when not nil, holds per cell the WallRight and WallUp bits of the
 	// boundaries to draw; nil draws one wherever neighbouring cells differ.
 	Walls []uint8
+	// Ties, when not nil, marks per cell a near-tie: the cell keeps a family
+	// that another one beats by no more than the tie tolerance. Each marked
+	// cell gets a small dot.
+	Ties []bool
+	// TieLabel names the dots in the legend; empty means "Near-tie".
+	TieLabel string
 	// Keys are the families the cells refer to, in legend order.
 	Keys []MapKey
 	// Heading is the legend heading, e.g. "Lightest family"; empty for none.
@@ -81,6 +87,9 @@ func (m *Map) Validate() error {
 	if m.Walls != nil && len(m.Walls) != n {
 		return fmt.Errorf("map has %d walls for %d cells: %w", len(m.Walls), n, ErrBadMap)
 	}
+	if m.Ties != nil && len(m.Ties) != n {
+		return fmt.Errorf("map has %d near-tie marks for %d cells: %w", len(m.Ties), n, ErrBadMap)
+	}
 	for k, c := range m.Cells {
 		if c < -1 || c >= len(m.Keys) {
 			return fmt.Errorf("map cell %d refers to key %d of %d: %w", k, c, len(m.Keys), ErrBadMap)
@@ -104,4 +113,14 @@ func (m *Map) wall(k, k2 int, bit uint8) bool {
 		return m.Walls[k]&bit != 0
 	}
 	return m.Cells[k] != m.Cells[k2]
+}
+
+// hasTies reports whether any cell is marked as a near-tie.
+func (m *Map) hasTies() bool {
+	for _, t := range m.Ties {
+		if t {
+			return true
+		}
+	}
+	return false
 }

@@ -88,6 +88,7 @@ func TestMapValidate(t *testing.T) {
 		{"cells short", func(m *Map) { m.Cells = m.Cells[1:] }, ErrBadMap},
 		{"key out of range", func(m *Map) { m.Cells[5] = 9 }, ErrBadMap},
 		{"walls short", func(m *Map) { m.Walls = []uint8{1} }, ErrBadMap},
+		{"near-tie marks short", func(m *Map) { m.Ties = []bool{true} }, ErrBadMap},
 		{"Inf point", func(m *Map) { m.Point.Y = math.Inf(1) }, ErrNotFinite},
 	}
 	for _, c := range cases {
@@ -132,6 +133,32 @@ func TestMapWallsOverride(t *testing.T) {
 	m.Walls = make([]uint8, len(m.Cells))
 	require.NoError(t, r.RenderMap(m))
 	assert.Less(t, dark(r.Image().Pix), withWalls)
+}
+
+// TestMapTieDots: near-tie marks add dark dots to the map and an entry to
+// the legend; marks that are all false draw nothing.
+func TestMapTieDots(t *testing.T) {
+	m := sampleMap(40, 24)
+	r, err := NewMapRaster(480, 300)
+	require.NoError(t, err)
+	require.NoError(t, r.RenderMap(m))
+	plain := dark(r.Image().Pix)
+	m.Ties = make([]bool, len(m.Cells))
+	require.NoError(t, r.RenderMap(m))
+	assert.Equal(t, plain, dark(r.Image().Pix), "no marked cell, no dot")
+	assert.False(t, m.hasTies())
+	for k := 0; k < len(m.Ties); k += 3 {
+		m.Ties[k] = true
+	}
+	require.NoError(t, r.RenderMap(m))
+	assert.Greater(t, dark(r.Image().Pix), plain)
+	var texts []string
+	legendTexts(m, func(s string, heading bool) { texts = append(texts, s) })
+	assert.Contains(t, texts, "Near-tie")
+	m.TieLabel = "Near-tie kept (within 5%)"
+	texts = texts[:0]
+	legendTexts(m, func(s string, heading bool) { texts = append(texts, s) })
+	assert.Contains(t, texts, "Near-tie kept (within 5%)")
 }
 
 // dark counts near-black pixels.

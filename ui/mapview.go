@@ -210,6 +210,7 @@ func (mv *mapView) mapSpecFor(sc *model.Scheme, r model.Range) model.MapSpec {
 	if !mv.haveSpec || mv.specAxis != model.MapAxisOf(sc) || v < lo || v > hi || sp.Validate(sc) != nil {
 		sp = model.DefaultMapSpec(sc, r)
 	}
+	sp.Tie = sc.Tie // near-ties follow the scheme's tolerance, as the crossover list does
 	return sp
 }
 
@@ -384,10 +385,10 @@ func (mv *mapView) loop() {
 
 // mapStatus says what the map shows and how to use it.
 func mapStatus(g *model.WinMap) string {
-	won := 0 // families that win at least one of the map's cells
+	won := 0 // families shown in at least one of the map's cells (the legend explains near-ties)
 	for fi := range g.Families {
 		for k := range g.Cells {
-			if g.Cells[k].Family == fi {
+			if g.Cells[k].Shown == fi {
 				won++
 				break
 			}

@@ -152,3 +152,19 @@ func TestExportMapFile(t *testing.T) {
 	})
 	assert.ErrorIs(t, err, plots.ErrUnknownFormat)
 }
+
+// TestMapSpecFollowsTheTieTolerance: the map's near-tie fraction is the
+// scheme's, also when the load range on screen is kept.
+func TestMapSpecFollowsTheTieTolerance(t *testing.T) {
+	sc := DemoScheme()
+	mv := &mapView{}
+	r := model.Range{FromMM: 500, ToMM: 12000}
+	sp := mv.mapSpecFor(&sc, r)
+	assert.Equal(t, sc.Tie, sp.Tie)
+	mv.spec, mv.haveSpec, mv.specAxis = sp, true, model.MapAxisOf(&sc)
+	sc.Tie = 0.1
+	kept := mv.mapSpecFor(&sc, r)
+	assert.Equal(t, 0.1, kept.Tie)
+	assert.Equal(t, sp.LoadFrom, kept.LoadFrom, "the load range is kept")
+	assert.NotEqual(t, keyOf(sc, sp), keyOf(sc, kept), "a new tolerance is a new map")
+}

@@ -60,9 +60,11 @@ func MapKeyLabel(f model.MapFamily) string {
 }
 
 // Map turns a winner map into the plots package's map in display units:
-// one key per family that wins somewhere (in the model's family order),
-// boundaries where the model says the winner changes (near ties follow
-// its tie fraction), the scheme's own point and the caution.
+// each cell coloured by its shown family (the one the crossover list names
+// there, near-ties kept as the list keeps them), one key per family shown
+// somewhere (in the model's family order), boundaries where the shown
+// family changes, a dot where the strict best is another family within the
+// tie tolerance, the scheme's own point and the caution.
 func Map(g *model.WinMap, sc *model.Scheme, title string) plots.Map {
 	sys := units.System(sc.Units)
 	xl, yl := MapLabels(sc, g.Axis)
@@ -79,7 +81,7 @@ func Map(g *model.WinMap, sc *model.Scheme, title string) plots.Map {
 		key[i] = -1
 	}
 	for k := range g.Cells {
-		if f := g.Cells[k].Family; f >= 0 {
+		if f := g.Cells[k].Shown; f >= 0 {
 			key[f] = 0
 		}
 	}
@@ -92,14 +94,17 @@ func Map(g *model.WinMap, sc *model.Scheme, title string) plots.Map {
 	nx, ny := len(g.LengthsMM), len(g.Loads)
 	pm.Cells = make([]int, len(g.Cells))
 	pm.Walls = make([]uint8, len(g.Cells))
+	pm.Ties = make([]bool, len(g.Cells))
+	pm.TieLabel = MapTieLabel(g.Tie)
 	for i := 0; i < ny; i++ {
 		for j := 0; j < nx; j++ {
 			k := i*nx + j
 			c := &g.Cells[k]
 			pm.Cells[k] = -1
-			if c.Family >= 0 {
-				pm.Cells[k] = key[c.Family]
+			if c.Shown >= 0 {
+				pm.Cells[k] = key[c.Shown]
 			}
+			pm.Ties[k] = g.Tied(c)
 			if j+1 < nx && g.Boundary(c, &g.Cells[k+1]) {
 				pm.Walls[k] |= plots.WallRight
 			}
@@ -111,6 +116,12 @@ func Map(g *model.WinMap, sc *model.Scheme, title string) plots.Map {
 	px, _ := units.LengthValue(g.PointLengthMM, sys)
 	pm.Point = &plots.Point{X: px, Y: MapValue(g.PointLoad, g.Axis, sys)}
 	return pm
+}
+
+// MapTieLabel names the near-tie dots in the map's legend, e.g. "Near-tie
+// kept (within 5%)".
+func MapTieLabel(tie float64) string {
+	return fmt.Sprintf("Near-tie kept (%s)", model.TieText(tie))
 }
 
 // MapCellAt returns the load row and length column of the cell nearest a

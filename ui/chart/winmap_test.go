@@ -94,32 +94,39 @@ func TestMapPicture(t *testing.T) {
 	assert.InDelta(t, 840, pm.Point.Y, 1e-6)
 	assert.InDelta(t, 18, pm.Point.X, 1e-6)
 	assert.InDelta(t, 210, pm.Y[0], 1e-6) // a quarter of 840 ft²
-	walls := 0
+	require.Greater(t, g.Tie, 0.0, "the demo map uses the scheme's near-tie tolerance")
+	assert.Equal(t, "Near-tie kept (within 5%)", pm.TieLabel)
+	nx := len(g.LengthsMM)
+	walls, ties, timberSteel := 0, 0, 0
 	for k, c := range g.Cells {
-		if c.Family < 0 {
-			assert.Equal(t, -1, pm.Cells[k])
-			continue
+		assert.Equal(t, c.Shown != c.Family, pm.Ties[k], "cell %d: dot where the strict best is not shown", k)
+		if pm.Ties[k] {
+			ties++
 		}
-		assert.Equal(t, MapKeyLabel(g.Families[c.Family]), pm.Keys[pm.Cells[k]].Label)
+		if right := k + 1; k%nx+1 < nx {
+			assert.Equal(t, c.Shown != g.Cells[right].Shown, pm.Walls[k]&plots.WallRight != 0, "cell %d: wall right", k)
+			if a, b := c.Shown, g.Cells[right].Shown; a >= 0 && b >= 0 && pm.Walls[k]&plots.WallRight != 0 {
+				if ma, mb := g.Families[a].Material, g.Families[b].Material; (ma == "timber" && mb == "steel") || (ma == "steel" && mb == "timber") {
+					timberSteel++
+				}
+			}
+		}
 		if pm.Walls[k] != 0 {
 			walls++
 		}
+		if c.Shown < 0 {
+			assert.Equal(t, -1, pm.Cells[k])
+			continue
+		}
+		assert.Equal(t, MapKeyLabel(g.Families[c.Shown]), pm.Keys[pm.Cells[k]].Label)
 	}
 	assert.Positive(t, walls, "the demo map changes family somewhere")
+	assert.Positive(t, ties, "the demo map has near-ties at 5%")
+	assert.Positive(t, timberSteel, "boundaries between glulam and steel still show")
+	t.Logf("%d walled cells (%d between timber and steel), %d near-tie cells of %d", walls, timberSteel, ties, len(g.Cells))
 	// Every cell maps back to itself.
 	for _, ij := range [][2]int{{0, 0}, {17, 42}, {len(g.Loads) - 1, len(g.LengthsMM) - 1}} {
 		i, j := MapCellAt(g, units.US, pm.X[ij[1]], pm.Y[ij[0]])
 		assert.Equal(t, ij, [2]int{i, j})
 	}
-	// A tie fraction can only remove walls.
-	g.Tie = 0.05
-	tied := Map(g, &sc, "")
-	fewer := 0
-	for k := range tied.Walls {
-		assert.Zero(t, tied.Walls[k]&^pm.Walls[k])
-		if tied.Walls[k] != pm.Walls[k] {
-			fewer++
-		}
-	}
-	t.Logf("a 5%% tie fraction hides %d of %d walled cells", fewer, walls)
 }

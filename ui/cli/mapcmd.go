@@ -19,7 +19,8 @@ import (
 // init registers the map command.
 
 // MapJSON is the JSON output of the map command. Cells[i][j] is load (or
-// tributary area) i and length j; null where nothing works.
+// tributary area) i and length j; null where nothing works. Tie is the
+// near-tie fraction the cells' shown families follow.
 type MapJSON struct {
 	Scheme      string           `json:"scheme"`
 	Axis        string           `json:"axis"`
@@ -28,17 +29,20 @@ type MapJSON struct {
 	LoadsKN     []float64        `json:"loads_kN,omitempty"`
 	TributaryM2 []float64        `json:"tributary_m2,omitempty"`
 	Metric      string           `json:"metric"`
+	Tie         float64          `json:"tie"`
 	Families    []MapFamilyJSON  `json:"families"`
 	Cells       [][]*MapCellJSON `json:"cells"`
 	Point       MapPointJSON     `json:"point"`
 	Caution     string           `json:"caution"`
 }
 
-// MapFamilyJSON is one family the map ranks, with the number of cells it wins.
+// MapFamilyJSON is one family the map ranks, with the number of cells it
+// wins strictly and the number the map shows it in.
 type MapFamilyJSON struct {
 	Family   string `json:"family"`
 	Material string `json:"material"`
 	Cells    int    `json:"cells"`
+	Shown    int    `json:"shown_cells"`
 }
 
 // MapCellJSON is the winner of one cell; metric is in the unit MapJSON.Metric names.
@@ -47,6 +51,17 @@ type MapCellJSON struct {
 	Material    string  `json:"material"`
 	Designation string  `json:"designation"`
 	Metric      float64 `json:"metric"`
+	// Shown is the family the map shows (and the crossover list names) at
+	// the cell: the strict best's family, except at a near-tie, where an
+	// earlier family within the tie fraction keeps its place.
+	Shown *MapShownJSON `json:"shown"`
+}
+
+// MapShownJSON is the family a map cell shows, with its best working size there.
+type MapShownJSON struct {
+	Family      string `json:"family"`
+	Designation string `json:"designation"`
+	NearTie     bool   `json:"near_tie"`
 }
 
 // MapPointJSON is the scheme's own length and load (or area).
@@ -192,7 +207,7 @@ func mapFlagError(err error, lengthRange, loadRange, tribRange, steps string) er
 
 // NewMapJSON builds the JSON object of a map.
 func NewMapJSON(g *model.WinMap, sc *model.Scheme) MapJSON {
-	out := MapJSON{Scheme: sc.Name, Axis: string(g.Axis), Rank: string(g.Metric), Metric: g.MetricUnit(), Caution: model.Caution}
+	out := MapJSON{Scheme: sc.Name, Axis: string(g.Axis), Rank: string(g.Metric), Metric: g.MetricUnit(), Tie: g.Tie, Caution: model.Caution}
 	for _, L := range g.LengthsMM {
 		out.LengthsMM = append(out.LengthsMM, round(L, 1))
 	}
@@ -200,7 +215,7 @@ func NewMapJSON(g *model.WinMap, sc *model.Scheme) MapJSON {
 	if g.Metric == model.ByFootprint {
 		digits = 0
 	}
-	won := make([]int, len(g.Families))
+	won, shown := make([]int, len(g.Families)), make([]int, len(g.Families))
 	for i := range g.Loads {
 		row := make([]*MapCellJSON, len(g.LengthsMM))
 		for j := range g.LengthsMM {
@@ -211,11 +226,15 @@ func NewMapJSON(g *model.WinMap, sc *model.Scheme) MapJSON {
 			won[c.Family]++
 			f := g.Families[c.Family]
 			row[j] = &MapCellJSON{Family: f.Name, Material: f.Material, Designation: g.Designation(c), Metric: round(c.Metric, digits)}
+			if c.Shown >= 0 {
+				shown[c.Shown]++
+				row[j].Shown = &MapShownJSON{Family: g.Families[c.Shown].Name, Designation: g.ShownDesignation(c), NearTie: g.Tied(c)}
+			}
 		}
 		out.Cells = append(out.Cells, row)
 	}
 	for fi, f := range g.Families {
-		out.Families = append(out.Families, MapFamilyJSON{Family: f.Name, Material: f.Material, Cells: won[fi]})
+		out.Families = append(out.Families, MapFamilyJSON{Family: f.Name, Material: f.Material, Cells: won[fi], Shown: shown[fi]})
 	}
 	out.Point.LengthMM = round(g.PointLengthMM, 1)
 	if g.Axis == model.MapTributary {
@@ -242,13 +261,16 @@ func printMapSummary(w io.Writer, g *model.WinMap, sc *model.Scheme, path string
 	fmt.Fprintf(w, "Map of the best family by %s: unbraced length %s to %s (%d steps), %s %.4g to %.4g (%d steps)\n\n",
 		sc.Metric, units.Length(g.LengthsMM[0], sys), units.Length(g.LengthsMM[len(g.LengthsMM)-1], sys), len(g.LengthsMM),
 		strings.ToLower(yl[:1])+yl[1:], chart.MapValue(g.Loads[0], g.Axis, sys), chart.MapValue(g.Loads[len(g.Loads)-1], g.Axis, sys), len(g.Loads))
-	won := make([]int, len(g.Families))
-	none := 0
+	won := make([]int, len(g.Families)) // cells shown, as the picture colours them
+	none, tied := 0, 0
 	for k := range g.Cells {
-		if f := g.Cells[k].Family; f >= 0 {
+		if f := g.Cells[k].Shown; f >= 0 {
 			won[f]++
 		} else {
 			none++
+		}
+		if g.Tied(&g.Cells[k]) {
+			tied++
 		}
 	}
 	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
@@ -263,6 +285,10 @@ func printMapSummary(w io.Writer, g *model.WinMap, sc *model.Scheme, path string
 		fmt.Fprintf(tw, "nothing works\t\t%.1f%%\n", 100*float64(none)/total)
 	}
 	tw.Flush()
+	if tied > 0 {
+		fmt.Fprintf(w, "\nNear-ties: %.1f%% of the map keeps a family that another beats by no more than %s, as the crossover list does.\n",
+			100*float64(tied)/float64(len(g.Cells)), strings.TrimPrefix(model.TieText(g.Tie), "within "))
+	}
 	if path != "" {
 		fmt.Fprintf(w, "\nwrote %s\n", path)
 	}

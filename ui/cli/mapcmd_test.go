@@ -83,6 +83,48 @@ func TestMapTakedownAxisAndFiles(t *testing.T) {
 	}
 }
 
+// TestMapJSONShownFamily: each cell carries the family the map shows; it
+// differs from the strict best only at a near-tie, there are near-ties at the
+// scheme's 5% (the demo scheme's tolerance), and none with --tie 0.
+func TestMapJSONShownFamily(t *testing.T) {
+	demo := filepath.Join("..", "..", "testdata", "schemes", "demo.upright.json")
+	for _, c := range []struct {
+		tie  []string
+		want float64
+	}{{nil, 0.05}, {[]string{"--tie", "0"}, 0}} {
+		args := append([]string{"map", "--scheme", demo, "--steps", "100x8", "--json"}, c.tie...)
+		code, out, errOut := run(args...)
+		require.Equal(t, 0, code, errOut)
+		var m MapJSON
+		require.NoError(t, json.Unmarshal([]byte(out), &m))
+		assert.Equal(t, c.want, m.Tie)
+		ties, shownTotal, wonTotal := 0, 0, 0
+		for _, row := range m.Cells {
+			for _, cell := range row {
+				if cell == nil {
+					continue
+				}
+				require.NotNil(t, cell.Shown)
+				assert.Equal(t, cell.Shown.Family != cell.Family, cell.Shown.NearTie)
+				assert.NotEmpty(t, cell.Shown.Designation)
+				if cell.Shown.NearTie {
+					ties++
+				}
+			}
+		}
+		for _, f := range m.Families {
+			shownTotal += f.Shown
+			wonTotal += f.Cells
+		}
+		assert.Equal(t, wonTotal, shownTotal, "every working cell shows one family")
+		if c.want > 0 {
+			assert.Positive(t, ties, "near-ties at %g", c.want)
+		} else {
+			assert.Zero(t, ties, "no near-ties without a tolerance")
+		}
+	}
+}
+
 // TestMapBadInput: every bad map flag is refused with exit status 2 and a
 // message naming the flag.
 func TestMapBadInput(t *testing.T) {

@@ -34,9 +34,10 @@ type MapSpec struct {
 	LoadTo   float64 // last load (N) or tributary area per floor (m²)
 	Columns  int     // length steps; 0 means MapDefaultColumns
 	Rows     int     // load steps; 0 means MapDefaultRows
-	// Tie is the near-tie fraction: where the runner-up family's metric is
-	// within Tie of the winner's, no boundary is drawn between them. 0 (the
-	// default) draws a boundary wherever the winning family changes.
+	// Tie is the near-tie fraction of the crossover list: along each load
+	// row, walking up in length, the shown family changes only when another
+	// family is better by more than Tie or the shown family stops working.
+	// 0 shows the strict best everywhere.
 	Tie float64
 }
 
@@ -52,14 +53,15 @@ func MapAxisOf(sc *Scheme) MapAxis {
 // DefaultMapSpec is the map around a scheme: the given length range (the
 // chart's) and loads from a quarter to twice the scheme's own load (or
 // area), at the default steps; up to the scheme's own load when twice it
-// is more than the load (or the takedown) accepts.
+// is more than the load (or the takedown) accepts. Near-ties follow the
+// scheme's tolerance, as in the crossover list.
 func DefaultMapSpec(sc *Scheme, r Range) MapSpec {
 	axis := MapAxisOf(sc)
 	v := sc.Load.DirectN
 	if axis == MapTributary {
 		v = sc.Load.TributaryM2
 	}
-	sp := MapSpec{Lengths: r, LoadFrom: v / 4, LoadTo: 2 * v}
+	sp := MapSpec{Lengths: r, LoadFrom: v / 4, LoadTo: 2 * v, Tie: sc.Tie}
 	if atLoad(sc.Load, axis, sp.LoadTo).Validate() != nil {
 		sp.LoadTo = v
 	}
@@ -124,14 +126,16 @@ type MapFamily struct {
 	Material string
 }
 
-// MapCell is the winner at one length and load of a map.
+// MapCell is the winner at one length and load of a map: the strict best,
+// and the family the crossover list names there (the shown family), which
+// differs from the strict best only at a near-tie.
 type MapCell struct {
-	Family int     // index into WinMap.Families; -1 when nothing works
-	Index  int     // candidate index within the family
-	Metric float64 // the ranking value, in the unit of WinMap.MetricUnit
-	Runner int     // the best other family; -1 when no other family works
-	// RunnerMetric is the runner-up family's ranking value, same unit.
-	RunnerMetric float64
+	Family int     // the strict best: index into WinMap.Families; -1 when nothing works
+	Index  int     // the strict best's candidate index within its family
+	Metric float64 // the strict best's ranking value, in the unit of WinMap.MetricUnit
+	Shown  int     // the shown family: index into WinMap.Families; -1 when nothing works
+	// ShownIndex is the shown family's best working candidate at the cell.
+	ShownIndex int
 }
 
 // WinMap is the winning family over a grid of unbraced length × load (or
@@ -143,7 +147,7 @@ type WinMap struct {
 	Metric    Metric
 	Families  []MapFamily
 	Cells     []MapCell
-	Tie       float64 // the near-tie fraction the boundaries use
+	Tie       float64 // the near-tie fraction the shown families follow
 	// The scheme's own point: its length, mm, and load (N) or area (m²).
 	PointLengthMM, PointLoad float64
 
@@ -173,29 +177,25 @@ func (g *WinMap) Designation(c *MapCell) string {
 	return g.model.Families[c.Family].Static(c.Index).Designation
 }
 
-// Tied reports whether the cell's runner-up family is within the near-tie
-// fraction of its winner (never when Tie is 0).
-func (g *WinMap) Tied(c *MapCell) bool {
-	return g.Tie > 0 && c.Family >= 0 && c.Runner >= 0 && c.RunnerMetric <= c.Metric*(1+g.Tie)
+// ShownDesignation returns the shown family's best working designation at
+// the cell, "" when none works.
+func (g *WinMap) ShownDesignation(c *MapCell) string {
+	if c.Shown < 0 || g.model == nil {
+		return ""
+	}
+	return g.model.Families[c.Shown].Static(c.ShownIndex).Designation
 }
 
-// Boundary reports whether a boundary separates two neighbouring cells: their
-// winning families differ (or one has no winner), unless either cell has the
-// other's family as a runner-up within the near-tie fraction.
+// Tied reports whether the cell is a near-tie: its shown family is not the
+// strict best, which beats it by no more than the tie fraction.
+func (g *WinMap) Tied(c *MapCell) bool {
+	return c.Shown != c.Family
+}
+
+// Boundary reports whether a boundary separates two neighbouring cells:
+// their shown families differ (or only one has a family that works).
 func (g *WinMap) Boundary(a, b *MapCell) bool {
-	if a.Family == b.Family {
-		return false
-	}
-	if a.Family < 0 || b.Family < 0 {
-		return true
-	}
-	if g.Tied(a) && a.Runner == b.Family {
-		return false
-	}
-	if g.Tied(b) && b.Runner == a.Family {
-		return false
-	}
-	return true
+	return a.Shown != b.Shown
 }
 
 // Mapper computes winner maps, reusing its buffers from one map to the next
@@ -210,7 +210,11 @@ type Mapper struct {
 type mapWorker struct {
 	reach []int   // per candidate (all families, flattened): last working column, -1 for none
 	best  [][]int // per family, per column: best working candidate, -1 for none
-	hint  []int   // per candidate: its reach in the worker's previous row (0 before the first)
+	// strict and shown are per column: the strict best family and the one
+	// the crossover list names, -1 for none.
+	strict, shown []int
+	hold          holdRow // the near-tie rule, with its buffers
+	hint          []int   // per candidate: its reach in the worker's previous row (0 before the first)
 }
 
 // ComputeMap computes a winner map with a fresh Mapper.
@@ -351,6 +355,14 @@ func growCells(s []MapCell, n int) []MapCell {
 	return s[:n]
 }
 
+// growInts returns s resized to n, reusing its storage when large enough.
+func growInts(s []int, n int) []int {
+	if cap(s) < n {
+		return make([]int, n)
+	}
+	return s[:n]
+}
+
 // size readies the worker's buffers for a model and column count.
 func (wk *mapWorker) size(m *Model, nc, total int) {
 	if cap(wk.reach) < total {
@@ -364,6 +376,7 @@ func (wk *mapWorker) size(m *Model, nc, total int) {
 	for k := range wk.hint {
 		wk.hint[k] = 0
 	}
+	wk.strict, wk.shown = growInts(wk.strict, nc), growInts(wk.shown, nc)
 	for len(wk.best) < len(m.Families) {
 		wk.best = append(wk.best, nil)
 	}
@@ -416,11 +429,11 @@ func (wk *mapWorker) row(ctx context.Context, base *Model, sc Scheme, axis MapAx
 		}
 		at += f.Len()
 	}
-	// The winner at each column is the best family by the metric, with the
-	// runner-up (the best other family) kept for near ties.
+	// The strict winner at each column is the best family by the metric
+	// (ties broken by designation, as the crossover list does).
 	for j := 0; j < nc; j++ {
-		c := MapCell{Family: -1, Runner: -1}
-		var cs, rs float64
+		wk.strict[j] = -1
+		var cs float64
 		var cd string
 		for fi := range m.Families {
 			k := wk.best[fi][j]
@@ -429,22 +442,134 @@ func (wk *mapWorker) row(ctx context.Context, base *Model, sc Scheme, axis MapAx
 			}
 			s := m.scores[fi][k]
 			d := m.Families[fi].Static(k).Designation
-			if c.Family < 0 || s < cs || (s == cs && d < cd) {
-				c.Runner, rs = c.Family, cs
-				c.Family, c.Index, cs, cd = fi, k, s, d
-			} else if c.Runner < 0 || s < rs {
-				c.Runner, rs = fi, s
+			if wk.strict[j] < 0 || s < cs || (s == cs && d < cd) {
+				wk.strict[j], cs, cd = fi, s, d
 			}
 		}
+	}
+	wk.hold.best, wk.hold.scores, wk.hold.tie = wk.best[:len(m.Families)], m.scores, g.Tie
+	wk.hold.reachIn = func(fi, k, j int) float64 {
+		return m.Reach(fi, k, sc.Setting, Range{FromMM: g.LengthsMM[j-1], ToMM: g.LengthsMM[j]}).LengthMM
+	}
+	wk.hold.name = func(fi, k int) string { return m.Families[fi].Static(k).Designation }
+	wk.hold.run(wk.strict, wk.shown)
+	for j := 0; j < nc; j++ {
+		c := MapCell{Family: wk.strict[j], Index: -1, Shown: wk.shown[j], ShownIndex: -1}
 		if c.Family >= 0 {
+			c.Index = wk.best[c.Family][j]
 			c.Metric = m.mapMetric(c.Family, c.Index, g.LengthsMM[j])
 		}
-		if c.Runner >= 0 {
-			c.RunnerMetric = m.mapMetric(c.Runner, wk.best[c.Runner][j], g.LengthsMM[j])
+		if c.Shown >= 0 {
+			c.ShownIndex = wk.best[c.Shown][j]
 		}
 		*g.At(i, j) = c
 	}
 	return nil
+}
+
+// holdRow applies the crossover list's near-tie rule (familyChanges) along
+// one load row, lengths ascending: the family in front keeps its place until
+// it stops working or the best other family beats its best working size by
+// more than tie (Better). As in the list, the comparison is made only where
+// the family in front changes size: every other family's best score only
+// worsens with length (fewer sizes work further up), so nothing can overtake
+// a family that keeps its size. Where several families change size between
+// two columns, their changes are taken in length order, as the list takes
+// them, so that the family named at each column is the list's.
+type holdRow struct {
+	best   [][]int     // per family, per column: best working candidate, -1 for none
+	scores [][]float64 // per family, per candidate: ranking score, lower is better
+	tie    float64     // the near-tie fraction
+	// reachIn returns the last length at which candidate k of family fi
+	// works between column j-1 (where it works) and column j (where it fails).
+	reachIn func(fi, k, j int) float64
+	// name returns a candidate's designation, which breaks equal scores.
+	name func(fi, k int) string
+	cur  []int       // per family: its size at the change being taken
+	ev   []holdEvent // the changes of size between two columns
+}
+
+// holdEvent is one family's change of size between two columns: from its
+// length at on, candidate k (-1 for none) is its best.
+type holdEvent struct {
+	at    float64
+	fi, k int
+}
+
+// run fills shown with the family in front at each column (-1 where nothing
+// works), given the strict best family at each column.
+func (h *holdRow) run(strict, shown []int) {
+	for len(h.cur) < len(h.best) {
+		h.cur = append(h.cur, -1)
+	}
+	front := -1
+	for j := range strict {
+		switch {
+		case j == 0 || front < 0:
+			front = strict[j]
+		case h.best[front][j] != h.best[front][j-1]:
+			front = h.step(front, j)
+		}
+		shown[j] = front
+	}
+}
+
+// step returns the family in front at column j, given the one at column
+// j-1, whose size changes between the two.
+func (h *holdRow) step(front, j int) int {
+	h.ev = h.ev[:0]
+	for fi := range h.best {
+		h.cur[fi] = h.best[fi][j-1]
+		if h.best[fi][j] != h.cur[fi] {
+			h.ev = append(h.ev, holdEvent{fi: fi, k: h.best[fi][j]})
+		}
+	}
+	if len(h.ev) > 1 {
+		for e := range h.ev {
+			h.ev[e].at = h.reachIn(h.ev[e].fi, h.cur[h.ev[e].fi], j)
+		}
+		// Insertion sort by length: a handful of families at most.
+		for a := 1; a < len(h.ev); a++ {
+			for b := a; b > 0 && h.ev[b].at < h.ev[b-1].at; b-- {
+				h.ev[b], h.ev[b-1] = h.ev[b-1], h.ev[b]
+			}
+		}
+	}
+	for e := 0; e < len(h.ev); {
+		was := h.cur[front]
+		for t := h.ev[e].at; e < len(h.ev) && h.ev[e].at == t; e++ {
+			h.cur[h.ev[e].fi] = h.ev[e].k
+		}
+		if h.cur[front] == was {
+			continue // the family in front keeps its size: nothing overtakes it here
+		}
+		g := h.leader()
+		if g < 0 {
+			return -1 // nothing works from here on
+		}
+		if h.cur[front] < 0 || (g != front && Better(h.scores[g][h.cur[g]], h.scores[front][h.cur[front]], h.tie)) {
+			front = g
+		}
+	}
+	return front
+}
+
+// leader returns the family whose current size scores best (equal scores
+// go to the first designation), -1 when no family works.
+func (h *holdRow) leader() int {
+	b := -1
+	var bs float64
+	var bn string
+	for fi, k := range h.cur[:len(h.best)] {
+		if k < 0 {
+			continue
+		}
+		s := h.scores[fi][k]
+		if b < 0 || s < bs || (s == bs && h.name(fi, k) < bn) {
+			b, bs, bn = fi, s, h.name(fi, k)
+		}
+	}
+	return b
 }
 
 // WithLoad returns the model at another load, built afresh: every load

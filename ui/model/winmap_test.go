@@ -226,21 +226,99 @@ func TestMapperReusesBuffers(t *testing.T) {
 	assert.InDelta(t, 6000e3, g2.Loads[len(g2.Loads)-1], 1e-6)
 }
 
-// TestMapBoundaryTie: with no tie fraction any change of family is a
-// boundary; with one, a runner-up within it hides the boundary.
-func TestMapBoundaryTie(t *testing.T) {
-	g := &model.WinMap{}
-	a := &model.MapCell{Family: 0, Metric: 100, Runner: 1, RunnerMetric: 101}
-	b := &model.MapCell{Family: 1, Metric: 99, Runner: 0, RunnerMetric: 104}
-	none := &model.MapCell{Family: -1, Runner: -1}
-	assert.True(t, g.Boundary(a, b))
-	assert.True(t, g.Boundary(a, none))
-	assert.False(t, g.Boundary(a, a))
-	g.Tie = 0.02
-	assert.False(t, g.Boundary(a, b), "a's runner-up (b's family) is within 2%%")
-	assert.True(t, g.Boundary(a, none))
-	g.Tie = 0.005
-	assert.True(t, g.Boundary(a, b))
+// TestMapBoundaryFollowsShown: boundaries and near-tie marks come from the
+// shown family, whatever the strict best.
+func TestMapBoundaryFollowsShown(t *testing.T) {
+	g := &model.WinMap{Tie: 0.05}
+	a := &model.MapCell{Family: 1, Shown: 0} // near-tie: family 1 is lighter, family 0 is kept
+	b := &model.MapCell{Family: 0, Shown: 0} // family 0 is strictly best
+	c := &model.MapCell{Family: 1, Shown: 1} // family 1 took over
+	none := &model.MapCell{Family: -1, Shown: -1}
+	assert.False(t, g.Boundary(a, b), "same shown family, different strict best")
+	assert.True(t, g.Boundary(b, c))
+	assert.True(t, g.Boundary(a, c), "same strict best, different shown family")
+	assert.True(t, g.Boundary(c, none))
+	assert.False(t, g.Boundary(none, none))
+	assert.True(t, g.Tied(a))
+	assert.False(t, g.Tied(b))
+	assert.False(t, g.Tied(none))
+}
+
+// TestMapShownMatchesCrossovers: along load rows of the demo scheme's map,
+// the family shown at each length is the one the crossover list
+// (Crossovers, family changes) at that load names there, or, next to a
+// change in the list, one it names within one length step. Both sides are
+// the program's own: this checks that the map and the list apply one
+// near-tie rule (the list places its changes by bisection to ToleranceMM,
+// the map samples the grid, hence the step of slack).
+func TestMapShownMatchesCrossovers(t *testing.T) {
+	sc := demoScheme(t)
+	require.Greater(t, sc.Tie, 0.0)
+	r := model.Range{FromMM: 500, ToMM: 12000}
+	sp := model.DefaultMapSpec(&sc, r)
+	sp.Rows = 9
+	g, err := model.ComputeMap(context.Background(), sc, sp, nil)
+	require.NoError(t, err)
+	assert.Equal(t, sc.Tie, g.Tie)
+	nc := len(g.LengthsMM)
+	step := g.LengthsMM[1] - g.LengthsMM[0]
+	name := func(fi int) string {
+		if fi < 0 {
+			return ""
+		}
+		return g.Families[fi].Name
+	}
+	exact, near, changes, tied := 0, 0, 0, 0
+	for i, load := range g.Loads {
+		at := sc
+		at.Load.TributaryM2 = load
+		m, err := model.New(at)
+		require.NoError(t, err)
+		xs, err := m.Crossovers(context.Background(), at.Setting, r, nil)
+		require.NoError(t, err)
+		var list []model.Crossover
+		for _, x := range xs {
+			if x.Kind == model.KindFamily {
+				list = append(list, x)
+			}
+		}
+		require.NotEmpty(t, list, "row %d", i)
+		// named returns the families the list names over [lo, hi]: the one
+		// in front at lo (each change's length is the last at which its
+		// From still holds) and every one a change brings in up to hi.
+		named := func(lo, hi float64) []string {
+			out := []string{list[0].From}
+			for _, x := range list {
+				if x.LengthMM < lo {
+					out[0] = x.To
+				} else if x.LengthMM < hi {
+					out = append(out, x.To)
+				}
+			}
+			return out
+		}
+		for j := 0; j < nc; j++ {
+			c := g.At(i, j)
+			if g.Tied(c) {
+				tied++
+			}
+			if j > 0 && c.Shown != g.At(i, j-1).Shown {
+				changes++
+			}
+			L := g.LengthsMM[j]
+			got := name(c.Shown)
+			if got == named(L, L)[0] {
+				exact++
+				continue
+			}
+			assert.Contains(t, named(L-step, L+step), got, "row %d (%g m²) at %g mm: list %+v", i, load, L, list)
+			near++
+		}
+	}
+	t.Logf("%d cells as the list names them, %d within one step of a change; %d changes, %d near-tie cells", exact, near, changes, tied)
+	assert.Greater(t, exact, 20*near, "the map and the list agree away from changes")
+	assert.Greater(t, changes, len(g.Loads), "the demo scheme's rows change family")
+	assert.Positive(t, tied, "the demo scheme's map has near-tie cells at 5%%")
 }
 
 // BenchmarkMap100x60 computes the demo scheme's 100×60 map (target: at most

@@ -4,6 +4,7 @@ import (
 	"bytes"
 	"context"
 	"fmt"
+	"strings"
 
 	"github.com/go-pdf/fpdf"
 
@@ -48,9 +49,22 @@ func mapCaption(f *facts, g *model.WinMap) string {
 	sys := f.sys
 	_, yl := chart.MapLabels(&f.m.Scheme, g.Axis)
 	lo, hi := chart.MapValue(g.Loads[0], g.Axis, sys), chart.MapValue(g.Loads[len(g.Loads)-1], g.Axis, sys)
-	return fmt.Sprintf("The best family by %s at each of %d unbraced lengths from %s to %s and %d values of %s from %.4g to %.4g, each the lightest working size of its family checked as in the table. Hatched regions are the families, bold lines mark where the best family changes, grey cross-hatching marks where nothing works, and the ringed cross marks this scheme.",
+	text := fmt.Sprintf("The best family by %s at each of %d unbraced lengths from %s to %s and %d values of %s from %.4g to %.4g, each the lightest working size of its family checked as in the table. Hatched regions are the families, bold lines mark where the best family changes, grey cross-hatching marks where nothing works, and the ringed cross marks this scheme.",
 		metricWords(g.Metric), len(g.LengthsMM), units.Length(g.LengthsMM[0], sys), units.Length(g.LengthsMM[len(g.LengthsMM)-1], sys),
 		len(g.Loads), lowerFirst(yl), lo, hi)
+	if g.Tie > 0 {
+		text += fmt.Sprintf(" Near-ties are treated as in the crossover list: going up in length at each %s, the family in front keeps its place until another is better by more than %s or it stops working; dots mark the cells where it is kept although another family is slightly better.",
+			mapRowWord(g.Axis), strings.TrimPrefix(model.TieText(g.Tie), "within "))
+	}
+	return text
+}
+
+// mapRowWord names what a row of the map holds fixed.
+func mapRowWord(axis model.MapAxis) string {
+	if axis == model.MapTributary {
+		return "tributary area"
+	}
+	return "load"
 }
 
 // lowerFirst lowers the first letter of an ASCII label.

@@ -15,6 +15,7 @@ func TestMapFigureFollowsTheScheme(t *testing.T) {
 	text := pdfText(t, writePDF(t, demo, Options{}))
 	assert.Contains(t, text, "Where each family wins")
 	assert.Contains(t, text, "tributary area per floor (ft²) from 210 to 1680")
+	assert.Contains(t, text, "Near-ties are treated as in the crossover list", "the demo scheme's 5% tolerance")
 
 	transfer := newModel(t, "transfer")
 	assert.False(t, transfer.Scheme.ReportMap)

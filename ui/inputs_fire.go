@@ -50,10 +50,10 @@ func (w *Window) syncFire() {
 	w.fire.aggregate.SetSelected(labelOf(aggregateChoices, d.Fire.Aggregate))
 }
 
-// fireNote is the table note's words on the fire rating: empty without one.
+// fireNote is the line under the table note on the fire rating: empty without one.
 func fireNote(sc model.Scheme) string {
 	if !sc.Fire.On() {
 		return ""
 	}
-	return " · " + strconv.FormatFloat(sc.Fire.Hours(), 'f', -1, 64) + " h fire rating: plan, weight and carbon include the protection"
+	return strconv.FormatFloat(sc.Fire.Hours(), 'f', -1, 64) + " h fire rating: plan, weight and carbon include the protection"
 }

@@ -38,7 +38,7 @@ func TestFireSelectorProtectsThePlan(t *testing.T) {
 		st = h.w.rows[0].Static
 	})
 	require.NotNil(t, st.Fire)
-	h.ui(func() { assert.Contains(t, h.w.tableNote.Text, "2 h fire rating") })
+	h.ui(func() { assert.Contains(t, h.w.tableFireNote.Text, "2 h fire rating") })
 	assert.Equal(t, plan(st.Fire.FootprintMM), h.cell(0, "plan"))
 	assert.Greater(t, st.Fire.FootprintMM[0], st.Fire.BareFootprintMM[0]+2*15.875-1e-6, "at least one 5/8 in layer each side")
 

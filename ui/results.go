@@ -73,11 +73,18 @@ func (w *Window) buildResults() fyne.CanvasObject {
 	w.tableNote = widget.NewLabel("")
 	w.tableNote.Importance = widget.LowImportance
 	w.tableNote.Wrapping = fyne.TextWrapWord
+	// The fire rating's note has a label of its own: it changes only with
+	// the rating, so a slider step does not wrap its text again.
+	w.tableFireNote = widget.NewLabel("")
+	w.tableFireNote.Importance = widget.LowImportance
+	w.tableFireNote.Wrapping = fyne.TextWrapWord
+	w.tableFireNote.Hide()
 	title := widget.NewLabelWithStyle("Results", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-	head := container.NewVBox(container.NewBorder(nil, nil, title, container.NewHBox(w.showAllChk, w.allColsChk)), w.tableNote)
+	head := container.NewVBox(container.NewBorder(nil, nil, title, container.NewHBox(w.showAllChk, w.allColsChk)), w.tableNote, w.tableFireNote)
 	watch := container.New(&widthWatch{onChange: func(width float32) {
 		w.fit.width = width
 		refitText(w.tableNote)
+		refitText(w.tableFireNote)
 		if w.ctx.m != nil {
 			w.fitColumns(false)
 		}
@@ -168,8 +175,13 @@ func (w *Window) refreshTable(full bool) {
 	if w.showAll {
 		note += fmt.Sprintf(" · %d working sizes", working)
 	}
-	note += fireNote(m.Scheme)
 	setWrappedText(w.tableNote, note)
+	if fn := fireNote(m.Scheme); fn == "" {
+		w.tableFireNote.Hide()
+	} else {
+		setWrappedText(w.tableFireNote, fn)
+		w.tableFireNote.Show()
+	}
 	full = full || w.ctx.sys != w.tableSys || w.ctx.m.Scheme.Setting.Method != w.tableMethod
 	w.tableSys, w.tableMethod = w.ctx.sys, w.ctx.m.Scheme.Setting.Method
 	n := w.fit.refreshes

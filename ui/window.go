@@ -109,14 +109,15 @@ type Window struct {
 	sectionsTabs *container.AppTabs // the chart and Sections tabs
 
 	// results
-	table       *liveTable
-	tableSys    units.System // units of the headers shown
-	tableMethod model.Method // method of the headers shown
-	tableNote   *widget.Label
-	showAllChk  *widget.Check
-	allColsChk  *widget.Check
-	fit         tableFit               // the columns the table's width holds
-	keys        map[string]*image.RGBA // each drawn curve's key, by designation
+	table         *liveTable
+	tableSys      units.System // units of the headers shown
+	tableMethod   model.Method // method of the headers shown
+	tableNote     *widget.Label
+	tableFireNote *widget.Label // the fire rating's line under the table note
+	showAllChk    *widget.Check
+	allColsChk    *widget.Check
+	fit           tableFit               // the columns the table's width holds
+	keys          map[string]*image.RGBA // each drawn curve's key, by designation
 
 	// calculation view
 	calcTitle *widget.Label

@@ -157,7 +157,12 @@ func wrapText(sty text.Style, s string, width vg.Length) []string {
 	if sty.Width(s) <= width {
 		return []string{s}
 	}
-	var lines []string
+	return appendWrapped(nil, sty, s, width)
+}
+
+// appendWrapped appends to out the lines of s broken as wrapText breaks
+// them, so that a caller can reuse out's storage from one drawing to the next.
+func appendWrapped(out []string, sty text.Style, s string, width vg.Length) []string {
 	line := ""
 	for _, word := range strings.Fields(s) {
 		try := word
@@ -169,14 +174,14 @@ func wrapText(sty text.Style, s string, width vg.Length) []string {
 			continue
 		}
 		if line != "" {
-			lines = append(lines, line)
+			out = append(out, line)
 		}
 		line = fit(sty, word, width)
 	}
 	if line != "" {
-		lines = append(lines, line)
+		out = append(out, line)
 	}
-	return lines
+	return out
 }
 
 // fit returns s, or s shortened with an ellipsis so it is at most width wide in sty.

@@ -3,7 +3,6 @@ package plots
 import (
 	"image/color"
 	"math"
-	"strings"
 
 	"gonum.org/v1/plot"
 	"gonum.org/v1/plot/text"
@@ -134,7 +133,7 @@ func (k *mapComposer) draw(c draw.Canvas, m *Map, fill bool) {
 	width := inner.Max.X - inner.Min.X
 
 	// Caution along the bottom, wrapped to the width.
-	k.lines = wrapMapText(k.lines[:0], k.caution, m.Caution, width)
+	k.lines = appendWrapped(k.lines[:0], k.caution, m.Caution, width)
 	lh := k.caution.Height("Ag") * 1.15
 	if len(k.lines) > 0 {
 		y := inner.Min.Y + lh*vg.Length(len(k.lines))
@@ -165,28 +164,6 @@ func (k *mapComposer) draw(c draw.Canvas, m *Map, fill bool) {
 	col.Min.X = inner.Max.X - lw
 	col.Max.Y = s.data.Max.Y
 	k.drawLegend(col, m)
-}
-
-// wrapMapText splits s into lines no wider than width in sty, appending to out.
-func wrapMapText(out []string, sty text.Style, s string, width vg.Length) []string {
-	words := strings.Fields(s)
-	line := ""
-	for _, w := range words {
-		try := w
-		if line != "" {
-			try = line + " " + w
-		}
-		if line != "" && sty.Width(try) > width {
-			out = append(out, line)
-			line = w
-			continue
-		}
-		line = try
-	}
-	if line != "" {
-		out = append(out, line)
-	}
-	return out
 }
 
 // noneLabel and pointLabel return the legend texts with their defaults.

@@ -2,9 +2,7 @@ package plots
 
 import (
 	"math"
-	"strings"
 
-	"gonum.org/v1/plot/text"
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 )
@@ -234,8 +232,8 @@ func (p *planDrawer) place(r vg.Rectangle) (foot vg.Point, area vg.Rectangle) {
 	}
 	foot = area.Min
 	w := area.Max.X - area.Min.X
-	p.cautionLines = wrapPlanText(p.sty.footBold, s.Caution, w, p.cautionLines[:0])
-	p.noteLines = wrapPlanText(p.sty.foot, s.Note, w, p.noteLines[:0])
+	p.cautionLines = appendWrapped(p.cautionLines[:0], p.sty.footBold, s.Caution, w)
+	p.noteLines = appendWrapped(p.noteLines[:0], p.sty.foot, s.Note, w)
 	area.Min.Y += p.footerHeight() + vg.Points(6)
 	p.prepare()
 	p.scale = 0
@@ -306,26 +304,4 @@ func (p *planDrawer) footerHeight() vg.Length {
 		h += vg.Points(3)
 	}
 	return h
-}
-
-// wrapPlanText breaks text into lines no wider than width, at spaces, appending to out.
-func wrapPlanText(sty text.Style, t string, width vg.Length, out []string) []string {
-	words := strings.Fields(t)
-	line := ""
-	for _, w := range words {
-		try := w
-		if line != "" {
-			try = line + " " + w
-		}
-		if line != "" && sty.Width(try) > width {
-			out = append(out, line)
-			line = w
-			continue
-		}
-		line = try
-	}
-	if line != "" {
-		out = append(out, line)
-	}
-	return out
 }

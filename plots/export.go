@@ -103,22 +103,7 @@ func WriteChart(w io.Writer, f Format, c *Chart, size Size) error {
 	if err := c.Validate(); err != nil {
 		return err
 	}
-	wd, ht := vg.Points(size.Width), vg.Points(size.Height)
-	var cv vg.CanvasWriterTo
-	switch f {
-	case PNG:
-		pw, ph := size.pixels()
-		// Derive the length from the pixel count so vgimg allocates exactly pw × ph.
-		d := vg.Length(size.dpi())
-		cv = vgimg.PngCanvas{Canvas: vgimg.NewWith(
-			vgimg.UseWH(vg.Length(pw)/d*vg.Inch, vg.Length(ph)/d*vg.Inch),
-			vgimg.UseDPI(size.dpi()),
-		)}
-	case SVG:
-		cv = &outlinedText{CanvasWriterTo: vgsvg.New(wd, ht)}
-	case PDF:
-		cv = &outlinedText{CanvasWriterTo: vgpdf.New(wd, ht)}
-	}
+	cv := newCanvas(f, size)
 	newComposer().draw(draw.New(cv), c, f != PNG)
 	if _, err := cv.WriteTo(w); err != nil {
 		return fmt.Errorf("plots: writing %s: %w", f, err)
@@ -141,6 +126,35 @@ func SaveChart(path string, c *Chart, size Size) (err error) {
 	if err := c.Validate(); err != nil {
 		return err
 	}
+	return saveFile(path, func(w io.Writer) error { return WriteChart(w, f, c, size) })
+}
+
+// newCanvas returns the canvas of format f at the given size: a PNG raster
+// whose pixel count is exactly the size's, or SVG or PDF with text drawn as
+// outlines. f must be PNG, SVG or PDF.
+func newCanvas(f Format, size Size) vg.CanvasWriterTo {
+	wd, ht := vg.Points(size.Width), vg.Points(size.Height)
+	var cv vg.CanvasWriterTo
+	switch f {
+	case PNG:
+		pw, ph := size.pixels()
+		// Derive the length from the pixel count so vgimg allocates exactly pw × ph.
+		d := vg.Length(size.dpi())
+		cv = vgimg.PngCanvas{Canvas: vgimg.NewWith(
+			vgimg.UseWH(vg.Length(pw)/d*vg.Inch, vg.Length(ph)/d*vg.Inch),
+			vgimg.UseDPI(size.dpi()),
+		)}
+	case SVG:
+		cv = &outlinedText{CanvasWriterTo: vgsvg.New(wd, ht)}
+	case PDF:
+		cv = &outlinedText{CanvasWriterTo: vgpdf.New(wd, ht)}
+	}
+	return cv
+}
+
+// saveFile creates the file at path and writes it through a buffer with
+// write, reporting the first error of writing, flushing or closing.
+func saveFile(path string, write func(w io.Writer) error) (err error) {
 	file, err := os.Create(path)
 	if err != nil {
 		return fmt.Errorf("plots: %w", err)
@@ -151,7 +165,7 @@ func SaveChart(path string, c *Chart, size Size) (err error) {
 		}
 	}()
 	bw := bufio.NewWriter(file)
-	if err := WriteChart(bw, f, c, size); err != nil {
+	if err := write(bw); err != nil {
 		return err
 	}
 	if err := bw.Flush(); err != nil {

@@ -1,18 +1,13 @@
 package plots
 
 import (
-	"bufio"
 	"fmt"
 	"image"
 	"io"
 	"math"
-	"os"
 
-	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 	"gonum.org/v1/plot/vg/vgimg"
-	"gonum.org/v1/plot/vg/vgpdf"
-	"gonum.org/v1/plot/vg/vgsvg"
 )
 
 // MapRaster draws maps into one reusable RGBA image, reusing its pixels,
@@ -78,21 +73,7 @@ func WriteMap(w io.Writer, f Format, m *Map, size Size) error {
 	if err := m.Validate(); err != nil {
 		return err
 	}
-	wd, ht := vg.Points(size.Width), vg.Points(size.Height)
-	var cv vg.CanvasWriterTo
-	switch f {
-	case PNG:
-		pw, ph := size.pixels()
-		d := vg.Length(size.dpi())
-		cv = vgimg.PngCanvas{Canvas: vgimg.NewWith(
-			vgimg.UseWH(vg.Length(pw)/d*vg.Inch, vg.Length(ph)/d*vg.Inch),
-			vgimg.UseDPI(size.dpi()),
-		)}
-	case SVG:
-		cv = &outlinedText{CanvasWriterTo: vgsvg.New(wd, ht)}
-	case PDF:
-		cv = &outlinedText{CanvasWriterTo: vgpdf.New(wd, ht)}
-	}
+	cv := newCanvas(f, size)
 	newMapComposer().draw(draw.New(cv), m, true)
 	if _, err := cv.WriteTo(w); err != nil {
 		return fmt.Errorf("plots: writing %s: %w", f, err)
@@ -115,21 +96,5 @@ func SaveMap(path string, m *Map, size Size) (err error) {
 	if err := m.Validate(); err != nil {
 		return err
 	}
-	file, err := os.Create(path)
-	if err != nil {
-		return fmt.Errorf("plots: %w", err)
-	}
-	defer func() {
-		if cerr := file.Close(); cerr != nil && err == nil {
-			err = fmt.Errorf("plots: %w", cerr)
-		}
-	}()
-	bw := bufio.NewWriter(file)
-	if err := WriteMap(bw, f, m, size); err != nil {
-		return err
-	}
-	if err := bw.Flush(); err != nil {
-		return fmt.Errorf("plots: writing %q: %w", path, err)
-	}
-	return nil
+	return saveFile(path, func(w io.Writer) error { return WriteMap(w, f, m, size) })
 }

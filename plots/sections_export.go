@@ -1,20 +1,16 @@
 package plots
 
 import (
-	"bufio"
 	"bytes"
 	"encoding/xml"
 	"fmt"
 	"image/color"
 	"io"
-	"os"
 	"strings"
 
 	"gonum.org/v1/plot/vg"
 	"gonum.org/v1/plot/vg/draw"
 	"gonum.org/v1/plot/vg/vgimg"
-	"gonum.org/v1/plot/vg/vgpdf"
-	"gonum.org/v1/plot/vg/vgsvg"
 )
 
 // DefaultPlanSize is the exported plan-sections figure: 12.5 × 5.2 inches at
@@ -86,21 +82,7 @@ func WritePlan(w io.Writer, f Format, s *PlanSheet, size Size) (PlanLayout, erro
 	if err := s.Validate(); err != nil {
 		return PlanLayout{}, err
 	}
-	wd, ht := vg.Points(size.Width), vg.Points(size.Height)
-	var cv vg.CanvasWriterTo
-	switch f {
-	case PNG:
-		pw, ph := size.pixels()
-		d := vg.Length(size.dpi())
-		cv = vgimg.PngCanvas{Canvas: vgimg.NewWith(
-			vgimg.UseWH(vg.Length(pw)/d*vg.Inch, vg.Length(ph)/d*vg.Inch),
-			vgimg.UseDPI(size.dpi()),
-		)}
-	case SVG:
-		cv = &outlinedText{CanvasWriterTo: vgsvg.New(wd, ht)}
-	case PDF:
-		cv = &outlinedText{CanvasWriterTo: vgpdf.New(wd, ht)}
-	}
+	cv := newCanvas(f, size)
 	p := newPlanDrawer(s)
 	p.labels = make([][]string, len(s.Sections))
 	c := draw.New(cv)
@@ -180,22 +162,14 @@ func SavePlan(path string, s *PlanSheet, size Size) (_ PlanLayout, err error) {
 	if err := s.Validate(); err != nil {
 		return PlanLayout{}, err
 	}
-	file, err := os.Create(path)
-	if err != nil {
-		return PlanLayout{}, fmt.Errorf("plots: %w", err)
-	}
-	defer func() {
-		if cerr := file.Close(); cerr != nil && err == nil {
-			err = fmt.Errorf("plots: %w", cerr)
-		}
-	}()
-	bw := bufio.NewWriter(file)
-	l, err := WritePlan(bw, f, s, size)
+	var l PlanLayout
+	err = saveFile(path, func(w io.Writer) error {
+		var werr error
+		l, werr = WritePlan(w, f, s, size)
+		return werr
+	})
 	if err != nil {
 		return PlanLayout{}, err
-	}
-	if err := bw.Flush(); err != nil {
-		return PlanLayout{}, fmt.Errorf("plots: writing %q: %w", path, err)
 	}
 	return l, nil
 }

@@ -211,6 +211,27 @@ func (t transition) toName() string {
 // first one whose reach covers it, so the best changes exactly at the reach
 // of the current best, to the next candidate that reaches further.
 func records(es []reachEntry, r Range) []transition {
+	bests := successiveBests(es)
+	var out []transition
+	for k := range bests {
+		e := &bests[k]
+		switch {
+		case k+1 < len(bests):
+			out = append(out, transition{at: e.reach.LengthMM, from: *e, to: &bests[k+1]})
+		case !e.reach.Beyond:
+			out = append(out, transition{at: e.reach.LengthMM, from: *e})
+		}
+	}
+	return out
+}
+
+// successiveBests returns the working candidates that are in turn the best
+// as the length grows: in metric order, each next one is the first that
+// reaches further than the current best, and the walk stops at a best that
+// works beyond the range. A candidate that outlasts the current best by
+// less than two tolerances is skipped: within the search accuracy it never
+// holds.
+func successiveBests(es []reachEntry) []reachEntry {
 	sorted := make([]reachEntry, 0, len(es))
 	for _, e := range es {
 		if e.reach.Works {
@@ -223,26 +244,20 @@ func records(es []reachEntry, r Range) []transition {
 		}
 		return sorted[a].name < sorted[b].name
 	})
-	var out []transition
-	var cur *reachEntry
+	var bests []reachEntry
 	for k := range sorted {
 		e := &sorted[k]
-		if cur == nil {
-			cur = e
+		if len(bests) == 0 {
+			bests = append(bests, *e)
 			continue
 		}
+		cur := &bests[len(bests)-1]
 		if cur.reach.Beyond {
 			break
 		}
-		// A candidate that outlasts the current best by less than two
-		// tolerances is skipped: within the search accuracy it never holds.
 		if e.reach.LengthMM > cur.reach.LengthMM+2*ToleranceMM {
-			out = append(out, transition{at: cur.reach.LengthMM, from: *cur, to: e})
-			cur = e
+			bests = append(bests, *e)
 		}
 	}
-	if cur != nil && !cur.reach.Beyond {
-		out = append(out, transition{at: cur.reach.LengthMM, from: *cur})
-	}
-	return out
+	return bests
 }

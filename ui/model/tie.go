@@ -77,43 +77,16 @@ type famStep struct {
 }
 
 // familySteps turns a family's reaches into its best size against length,
-// with the rule of records: a candidate that outlasts the current best by
-// less than two tolerances is skipped.
+// with the rule of records (successiveBests).
 func familySteps(es []reachEntry) []famStep {
-	sorted := make([]reachEntry, 0, len(es))
-	for _, e := range es {
-		if e.reach.Works {
-			sorted = append(sorted, e)
-		}
-	}
-	sort.SliceStable(sorted, func(a, b int) bool {
-		if sorted[a].score != sorted[b].score {
-			return sorted[a].score < sorted[b].score
-		}
-		return sorted[a].name < sorted[b].name
-	})
-	var steps []famStep
-	var cur *reachEntry
-	for k := range sorted {
-		e := &sorted[k]
-		if cur == nil {
-			cur = e
-			continue
-		}
-		if cur.reach.Beyond {
-			break
-		}
-		if e.reach.LengthMM > cur.reach.LengthMM+2*ToleranceMM {
-			steps = append(steps, famStep{upTo: cur.reach.LengthMM, e: *cur})
-			cur = e
-		}
-	}
-	if cur != nil {
-		up := cur.reach.LengthMM
-		if cur.reach.Beyond {
+	bests := successiveBests(es)
+	steps := make([]famStep, 0, len(bests))
+	for _, e := range bests {
+		up := e.reach.LengthMM
+		if e.reach.Beyond {
 			up = math.Inf(1)
 		}
-		steps = append(steps, famStep{upTo: up, e: *cur})
+		steps = append(steps, famStep{upTo: up, e: e})
 	}
 	return steps
 }

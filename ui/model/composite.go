@@ -193,17 +193,7 @@ func compositePastLimit(sec *composite.Section, lcx, lcy float64) bool {
 func (f *compositeFamily) Detail(i int, s Setting) Detail {
 	c := &f.cols[i]
 	st := &f.static[i]
-	weak := s.WeakMM
-	if weak == 0 {
-		weak = s.LengthMM
-	}
-	in := steel.Input{Lx: s.LengthMM / steelMMPerIn, Ly: weak / steelMMPerIn, K: s.K, Method: steelMethod(s.Method)}
-	ends, valid := steelEnds(s.Ends)
-	if !valid {
-		ends = steel.EndCondition(-1) // rejected by Check unless K is typed
-	}
-	in.Ends = ends
-	r, err := c.Check(in)
+	r, err := c.Check(steelInput(s)) // Lz is not used: a filled tube does not twist
 	if err != nil {
 		msg := err.Error()
 		return Detail{

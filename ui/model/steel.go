@@ -202,22 +202,30 @@ func (f *steelFamily) Quick(i int, s Setting) Quick {
 // candidate (a round section too thin for AISC 360-22 E7.2).
 const steelOutside = "outside AISC 360-22 Chapter E (D/t at or above 0.45E/Fy)"
 
-// Detail evaluates candidate i at the setting with the full SI trace.
-func (f *steelFamily) Detail(i int, s Setting) Detail {
-	c := &f.cols[i]
-	st := &f.static[i]
+// steelInput is the steel package's input for a setting: lengths in
+// inches, the twisting length the full length unless the braces restrain
+// twist, the typed K, the method and the end condition (one the steel
+// package does not know is rejected by Check unless K is typed).
+func steelInput(s Setting) steel.Input {
 	weak := s.WeakMM
 	if weak == 0 {
 		weak = s.LengthMM
 	}
 	in := steel.Input{Lx: s.LengthMM / steelMMPerIn, Ly: weak / steelMMPerIn, K: s.K, Method: steelMethod(s.Method)}
-	in.Lz = s.TwistMM() / steelMMPerIn // full length unless the braces restrain twist
+	in.Lz = s.TwistMM() / steelMMPerIn
 	ends, valid := steelEnds(s.Ends)
 	if !valid {
-		ends = steel.EndCondition(-1) // rejected by Check unless K is typed
+		ends = steel.EndCondition(-1)
 	}
 	in.Ends = ends
-	r, err := c.Check(in)
+	return in
+}
+
+// Detail evaluates candidate i at the setting with the full SI trace.
+func (f *steelFamily) Detail(i int, s Setting) Detail {
+	c := &f.cols[i]
+	st := &f.static[i]
+	r, err := c.Check(steelInput(s))
 	if err != nil {
 		msg := err.Error()
 		return Detail{

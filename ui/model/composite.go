@@ -195,13 +195,7 @@ func (f *compositeFamily) Detail(i int, s Setting) Detail {
 	st := &f.static[i]
 	r, err := c.Check(steelInput(s)) // Lz is not used: a filled tube does not twist
 	if err != nil {
-		msg := err.Error()
-		return Detail{
-			Quick:    Quick{Governing: compositeNotPerm, Reason: msg},
-			Warnings: []string{msg},
-			Calc:     map[string]any{"error": msg},
-			Plain:    "This column could not be checked: " + msg,
-		}
+		return uncheckedDetail(compositeNotPerm, err.Error())
 	}
 	d := Detail{
 		Quick: Quick{

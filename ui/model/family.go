@@ -199,3 +199,14 @@ func builderFor(material string) Builder {
 	}
 	return nil
 }
+
+// uncheckedDetail is the Detail of a candidate its method could not check:
+// not permitted, with the method's message as reason, warning and trace.
+func uncheckedDetail(governing, msg string) Detail {
+	return Detail{
+		Quick:    Quick{Governing: governing, Reason: msg},
+		Warnings: []string{msg},
+		Calc:     map[string]any{"error": msg},
+		Plain:    "This column could not be checked: " + msg,
+	}
+}

@@ -227,13 +227,7 @@ func (f *steelFamily) Detail(i int, s Setting) Detail {
 	st := &f.static[i]
 	r, err := c.Check(steelInput(s))
 	if err != nil {
-		msg := err.Error()
-		return Detail{
-			Quick:    Quick{Governing: steelNotPerm, Reason: msg},
-			Warnings: []string{msg},
-			Calc:     map[string]any{"error": msg},
-			Plain:    "This column could not be checked: " + msg,
-		}
+		return uncheckedDetail(steelNotPerm, err.Error())
 	}
 	d := Detail{
 		Quick: Quick{

@@ -288,12 +288,7 @@ func (f *timberFamily) Detail(i int, s Setting) Detail {
 	fireN := f.ls.FireCase.DemandN(selfN)
 	r, err := k.Full(timberGeometry(s), timber.Demand{Design: caseN / timberNPerLb, Fire: fireN / timberNPerLb})
 	if err != nil {
-		return Detail{
-			Quick:    Quick{Governing: timberNotPerm, Reason: err.Error()},
-			Warnings: []string{err.Error()},
-			Calc:     map[string]any{"error": err.Error()},
-			Plain:    "This column could not be checked: " + err.Error(),
-		}
+		return uncheckedDetail(timberNotPerm, err.Error())
 	}
 	d := Detail{Quick: f.Quick(i, s), Warnings: r.Warnings, Plain: r.Plain}
 

@@ -36,23 +36,7 @@ type composer struct {
 
 // newComposer returns a composer with the chart's fonts and axis styles set.
 func newComposer() *composer {
-	p := plot.New()
-	p.BackgroundColor = nil
-	p.Title.TextStyle = aligned(textStyle(faceBold, vg.Points(sizeTitle), inkText), draw.XCenter, draw.YTop)
-	p.Title.Padding = vg.Points(titlePadding)
-	for _, a := range []*plot.Axis{&p.X, &p.Y} {
-		a.Label.TextStyle.Font = textStyle(faceRegular, vg.Points(sizeAxis), inkText).Font
-		a.Label.TextStyle.Color = inkText
-		a.Label.Padding = vg.Points(axisLabelMargin)
-		a.Tick.Label.Font = textStyle(faceRegular, vg.Points(sizeTick), inkText).Font
-		a.Tick.Label.Color = inkText
-		a.Tick.Length = vg.Points(5)
-		a.Tick.LineStyle = draw.LineStyle{Color: inkText, Width: vg.Points(0.8)}
-		a.LineStyle = draw.LineStyle{Color: inkText, Width: vg.Points(0.8)}
-		a.Padding = 0
-	}
-	p.X.Tick.Marker = &ticker{target: xTickTarget}
-	p.Y.Tick.Marker = &ticker{target: yTickTarget}
+	p := styledPlot()
 	k := &composer{plot: p, scene: newScene(), legend: newLegend()}
 	p.Add(k.scene)
 	return k
@@ -157,4 +141,27 @@ func (k *composer) prepare(ch *Chart) extent {
 		}
 	}
 	return ext
+}
+
+// styledPlot returns an empty plot with the chart's fonts, title and axis
+// styles, shared by the strength chart and the winner map.
+func styledPlot() *plot.Plot {
+	p := plot.New()
+	p.BackgroundColor = nil
+	p.Title.TextStyle = aligned(textStyle(faceBold, vg.Points(sizeTitle), inkText), draw.XCenter, draw.YTop)
+	p.Title.Padding = vg.Points(titlePadding)
+	for _, a := range []*plot.Axis{&p.X, &p.Y} {
+		a.Label.TextStyle.Font = textStyle(faceRegular, vg.Points(sizeAxis), inkText).Font
+		a.Label.TextStyle.Color = inkText
+		a.Label.Padding = vg.Points(axisLabelMargin)
+		a.Tick.Label.Font = textStyle(faceRegular, vg.Points(sizeTick), inkText).Font
+		a.Tick.Label.Color = inkText
+		a.Tick.Length = vg.Points(5)
+		a.Tick.LineStyle = draw.LineStyle{Color: inkText, Width: vg.Points(0.8)}
+		a.LineStyle = draw.LineStyle{Color: inkText, Width: vg.Points(0.8)}
+		a.Padding = 0
+	}
+	p.X.Tick.Marker = &ticker{target: xTickTarget}
+	p.Y.Tick.Marker = &ticker{target: yTickTarget}
+	return p
 }

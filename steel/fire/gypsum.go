@@ -19,6 +19,10 @@ const (
 	BoardDensityPcf = 50.0  // board density the IBC 2021 722.5.1.2 equation assumes, lb/ft³ (the 50 in W′, from memory)
 	MaxLayers       = 4     // most layers this program offers (2 1/2 in): a practical limit of board enclosures, not a code limit
 	MaxHours        = 4.0   // ratings above this are outside the calculated methods of IBC 2021 722
+	// MaxWD is the largest W/D, lb/ft/in, the board equation applies to;
+	// a heavier column takes the board of a W14X233, whose W/D is about
+	// this (IBC 2021 722.5.1.2.2, from memory).
+	MaxWD = 3.65
 )
 
 // Clause cites the equation this package implements.
@@ -84,6 +88,11 @@ func HeatedPerimeterIn(o Outline, a, b float64) (float64, error) {
 //
 //	W′ = W + 50·h·D/144               IBC 2021 722.5.1.2 (from memory)
 //	R  = 130·[h·(W′/D)/2]^0.75        IBC 2021 722.5.1.2 (from memory)
+//
+// The equation applies up to W/D = MaxWD; a heavier column is credited with
+// no more than a column at that limit (the board of a W14X233, IBC 2021
+// 722.5.1.2.2, from memory), so R stops rising with W/D there. Since
+// W′/D = W/D + 50·h/144, R depends on W and D only through W/D.
 func Minutes(w, d, h float64) (float64, error) {
 	if err := checkWD(w, d); err != nil {
 		return 0, err
@@ -91,9 +100,18 @@ func Minutes(w, d, h float64) (float64, error) {
 	if !finite(h) || h <= 0 || h > 12 {
 		return 0, bad("board thickness h", h, "a thickness greater than 0 and at most 12 in")
 	}
-	wp := WPrime(w, d, h)
-	return 130 * math.Pow(h*(wp/d)/2, 0.75), nil
+	wpd := EquationWD(w, d) + BoardDensityPcf*h/144 // W′/D
+	return 130 * math.Pow(h*wpd/2, 0.75), nil
 }
+
+// EquationWD returns the W/D, lb/ft/in, the board equation is applied with:
+// the column's own W/D up to MaxWD, and MaxWD above it (IBC 2021
+// 722.5.1.2.2, from memory: a heavier column takes the board of a W14X233).
+func EquationWD(w, d float64) float64 { return math.Min(w/d, MaxWD) }
+
+// Capped reports whether a column's W/D exceeds MaxWD, so that its board
+// is that of a W14X233 rather than its own equation's.
+func Capped(w, d float64) bool { return w/d > MaxWD }
 
 // WPrime returns W′ = W + 50·h·D/144, lb/ft: the steel and the board
 // together (IBC 2021 722.5.1.2, from memory).
@@ -175,6 +193,10 @@ func Size(w, d, hours float64) (Enclosure, error) {
 		Step{Clause, "W/D", "steel weight over heated perimeter", w / d, "lb/ft/in"},
 		Step{Clause, "R required", "rating × 60", need, "min"},
 	)
+	if Capped(w, d) {
+		e.Steps = append(e.Steps, Step{"IBC 2021 722.5.1.2.2 (from memory)", "W/D used",
+			"W/D above 3.65: the board of a W14X233 (W/D taken as 3.65)", MaxWD, "lb/ft/in"})
+	}
 	e.Layers, e.Minutes, e.OK, _ = Fewest(w, d, hours) // inputs checked above
 	e.ThicknessIn = float64(e.Layers) * LayerIn
 	e.WPrimeLbFt = WPrime(w, d, e.ThicknessIn)
@@ -182,7 +204,7 @@ func Size(w, d, hours float64) (Enclosure, error) {
 		Step{Clause, "layers", "fewest 5/8 in Type X layers with R ≥ R required", float64(e.Layers), ""},
 		Step{Clause, "h", "layers × 0.625 in", e.ThicknessIn, "in"},
 		Step{Clause, "W′", "W + 50·h·D/144", e.WPrimeLbFt, "lb/ft"},
-		Step{Clause, "R", "130·[h·(W′/D)/2]^0.75", e.Minutes, "min"},
+		Step{Clause, "R", "130·[h·(W′/D)/2]^0.75, W′/D = W/D used + 50·h/144", e.Minutes, "min"},
 	)
 	if !e.OK {
 		e.Reason = ShortReason(e.Minutes, hours)

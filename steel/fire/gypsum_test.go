@@ -126,3 +126,49 @@ func TestRejectsBadInput(t *testing.T) {
 		t.Errorf("unknown outline: %v", err)
 	}
 }
+
+// Above W/D = 3.65 lb/ft/in the board equation is not applied to the
+// column's own W/D: the column takes the board of a W14X233 (IBC 2021
+// 722.5.1.2.2, from memory). W14X233: W = 233 lb/ft, d = 16.04 in,
+// bf = 15.89 in (AISC Manual Table 1-1, from memory), D = 63.86 in,
+// W/D = 3.649. W14X342: W = 342 lb/ft, d = 17.54 in, bf = 16.36 in,
+// D = 67.80 in, W/D = 5.04 (same source). At 3 h, by hand with W/D = 3.65:
+// one layer (h = 0.625) R = 130·[0.625·(3.65 + 0.217)/2]^0.75 = 130·1.2084^0.75
+// = 149.8 min < 180; two layers R = 130·[1.25·(3.65 + 0.434)/2]^0.75 = 130·2.5525^0.75
+// = 262.5 min ≥ 180; so both shapes take two layers, where W14X342's own
+// W/D would give one layer R = 130·[0.625·5.261/2]^0.75 = 188.8 min.
+func TestSizeHeavyShapeTakesW14X233Board(t *testing.T) {
+	d233, d342 := 2*(16.04+15.89), 2*(17.54+16.36)
+	e233, err := Size(233, d233, 3)
+	if err != nil {
+		t.Fatal(err)
+	}
+	e342, err := Size(342, d342, 3)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if e342.Layers != 2 || e233.Layers != 2 {
+		t.Errorf("layers at 3 h: W14X342 %d, W14X233 %d; want 2 and 2 (hand calculation)", e342.Layers, e233.Layers)
+	}
+	if math.Abs(e342.Minutes-262.5) > 0.1 {
+		t.Errorf("W14X342 R = %.1f min, want 262.5 (hand calculation at W/D = 3.65)", e342.Minutes)
+	}
+	if Capped(233, d233) || !Capped(342, d342) {
+		t.Errorf("Capped: W14X233 %v, W14X342 %v; want false, true", Capped(233, d233), Capped(342, d342))
+	}
+	found := false
+	for _, s := range e342.Steps {
+		if s.Quantity == "W/D used" && s.Value == MaxWD {
+			found = true
+		}
+	}
+	if !found {
+		t.Error("the trace does not say that W/D was limited to 3.65")
+	}
+	// R never rises with W/D past the limit.
+	r1, _ := Minutes(400, 60, 0.625)
+	r2, _ := Minutes(800, 60, 0.625)
+	if r1 != r2 {
+		t.Errorf("R past the W/D limit: %v and %v min, want equal", r1, r2)
+	}
+}

@@ -371,3 +371,26 @@ func TestFireHeatedPerimeterByFamily(t *testing.T) {
 	}
 	assert.Len(t, seen, len(SteelFamilies))
 }
+
+// No W shape gets fewer layers than a W14X233 at 3 h: the board equation
+// stops at W/D = 3.65 and heavier shapes take the W14X233's board (IBC 2021
+// 722.5.1.2.2, from memory; hand calculation in steel/fire gives two layers
+// for W14X342 and W14X233 alike). Shapes from the catalogue.
+func TestFireHeavyWShapesTakeW14X233Board(t *testing.T) {
+	m := fireModel(t, "3h", "", "steel")
+	f233, i233 := fireFind(t, m, "W14X233")
+	ref := f233.Static(i233).Fire.Layers
+	assert.Equal(t, 2, ref)
+	for _, des := range []string{"W14X342", "W14X873", "W12X279", "W12X336"} {
+		fi, i, ok := m.Find(des)
+		require.True(t, ok, des)
+		fc := m.Families[fi].Static(i).Fire
+		require.NotNil(t, fc, des)
+		assert.Equal(t, ref, fc.Layers, des)
+		var used bool
+		for _, s := range m.Detail(fi, i, m.Scheme.Setting).Steps {
+			used = used || s.Quantity == "W/D used"
+		}
+		assert.True(t, used, "%s: the trace names the W/D limit", des)
+	}
+}

@@ -85,7 +85,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.barGrade, "bar-grade", "", "reinforcing bar grade: 60 or 80")
 	fs.StringVar(&f.rhoMax, "rho-max", "", "largest reinforcement ratio, e.g. 0.04 or 4%")
 	fs.StringVar(&f.m1m2, "m1m2", "", "end-moment ratio M1/M2, -1 (single curvature) to 1")
-	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1, used for every combination (default: each LRFD combination's own, factored dead over total)")
+	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1: each LRFD combination takes the larger of this and its own factored dead over total, so it never lowers a combination's βdns (default: each combination's own)")
 	fs.StringVar(&f.ei, "ei", "", "(EI)eff expression of ACI 318-19 6.6.4.4.4: a or b")
 	fs.StringVar(&f.transverse, "transverse", "", "concrete columns: ties, spiral or all")
 	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "concrete: δ above 1.4 never works (ACI 318-19 6.2.5.3); false only adds the strength without the limit to the trace as a note")
@@ -100,7 +100,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.fire, "fire", "", "fire-resistance rating for every material: none, 1h, 1.5h, 2h, 3h (steel boxed in gypsum board, concrete least size and cover, timber char)")
 	fs.StringVar(&f.aggregate, "aggregate", "", "concrete aggregate for the fire rating: siliceous (default), carbonate, semi-lightweight")
 	fs.StringVar(&f.fireSides, "fire-sides", "", "timber sides exposed to fire: 3 or 4")
-	fs.StringVar(&f.duration, "duration", "", "ASD load duration: permanent, ten-years, two-months, seven-days, ten-minutes")
+	fs.StringVar(&f.duration, "duration", "", "ASD load duration: permanent, ten-years, two-months, seven-days, ten-minutes; each combination takes the lower of its CD and this one, so it never raises a combination's CD (default: each combination's own)")
 
 	fs.StringVar(&f.fillFc, "fill-fc", "", "f'c of the concrete filling the composite HSS, 3000 to 10000 psi, e.g. 6ksi, 40MPa (default: --fc)")
 	fs.StringVar(&f.compositeFamilies, "composite-families", "", "comma list of "+strings.Join(model.CompositeFamilies, ", "))

@@ -2,6 +2,7 @@ package model
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"sync"
 
@@ -203,13 +204,16 @@ func (f *concreteFamily) quick(sec *concrete.Section, cq *concrete.Quick) Quick 
 // (ACI 318-19 is strength design).
 func (f *concreteFamily) Cases(m Method) []LoadCase { return f.ls.LRFDCases }
 
-// betaOf is the βdns used for a combination: the typed one, or the
-// combination's factored dead over its total (ACI 318-19 6.6.4.4.4).
+// betaOf is the βdns used for a combination: the combination's factored
+// dead over its total (ACI 318-19 6.6.4.4.4), or a typed βdns where it is
+// higher. A typed βdns may only make a combination more conservative: it
+// never lowers βdns = 1 under 1.4D.
 func (f *concreteFamily) betaOf(c *LoadCase, selfN float64) float64 {
+	own := c.BetaDns(selfN)
 	if f.betaFixed >= 0 {
-		return f.betaFixed
+		return math.Max(f.betaFixed, own)
 	}
-	return c.BetaDns(selfN)
+	return own
 }
 
 // CaseQuick implements CaseFamily: φPn with the combination's βdns.
@@ -319,7 +323,7 @@ func (f *concreteFamily) Detail(i int, s Setting) Detail {
 	puN := gc.DemandN(selfN)
 	betaWords := "factored dead over total factored load of " + gc.Name + " (ACI 318-19 6.6.4.4.4); every LRFD combination is checked with its own"
 	if f.betaFixed >= 0 {
-		betaWords = "typed in the concrete options, used for every combination"
+		betaWords = fmt.Sprintf("the larger of the typed %.2f and %s's own factored dead over total (ACI 318-19 6.6.4.4.4): a typed βdns only makes a combination more conservative", f.betaFixed, gc.Name)
 	}
 	d.Steps = append(d.Steps,
 		Step{Clause: "ACI 318-19 6.6.4.4.4", Quantity: "βdns", Formula: betaWords, Value: c.BetaDns, Unit: ""},

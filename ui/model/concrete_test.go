@@ -309,3 +309,32 @@ func BenchmarkConcreteBuild(b *testing.B) {
 		}
 	})
 }
+
+// A typed βdns never lowers a combination's own: under a typed 0.6, 1.4D
+// keeps βdns = 1 (all load sustained, ACI 318-19 6.6.4.4.4), while a
+// combination whose own is lower takes 0.6.
+func TestConcreteTypedBetaPerCombination(t *testing.T) {
+	sc := DefaultScheme()
+	sc.Concrete.BetaFromLoads, sc.Concrete.BetaDns = false, 0.6
+	ls, err := Summarize(sc.Load, LRFD)
+	require.NoError(t, err)
+	fams, err := buildConcrete(&sc, ls)
+	require.NoError(t, err)
+	f := fams[0].(*concreteFamily)
+	var saw14, sawLow bool
+	for _, c := range f.Cases(LRFD) {
+		own := c.BetaDns(0)
+		got := f.betaOf(&c, 0)
+		assert.Equal(t, math.Max(0.6, own), got, c.Name)
+		if own == 1 {
+			saw14 = true
+			assert.Equal(t, 1.0, got, "%s: 1.4D keeps βdns 1 under a typed 0.6", c.Name)
+		}
+		if own < 0.6 {
+			sawLow = true
+			assert.Equal(t, 0.6, got, c.Name)
+		}
+	}
+	assert.True(t, saw14, "1.4D is among the combinations")
+	assert.True(t, sawLow, "a combination with βdns below 0.6 is among them")
+}

@@ -214,13 +214,23 @@ func timberFireQuick(fq *timber.FireQuick) Quick {
 // Cases implements CaseFamily: every combination of the method.
 func (f *timberFamily) Cases(m Method) []LoadCase { return f.ls.CasesFor(m) }
 
-// timeOf is the time factor used for a combination: the typed ASD load
-// duration when one is given, else the combination's own.
+// timeOf is the time factor used for a combination: the combination's own
+// (NDS 2018 Table 2.3.2 or N3), or a typed ASD load duration where it is
+// lower. A typed duration may only make a combination more conservative: it
+// never raises D alone above CD 0.9 (NDS 2018 2.3.2, from memory).
 func (f *timberFamily) timeOf(c *LoadCase, m Method) float64 {
 	if m == ASD && f.cdFixed > 0 {
-		return f.cdFixed
+		return math.Min(f.cdFixed, c.Time)
 	}
 	return c.Time
+}
+
+// typedWords says how a typed load duration was applied, for the trace.
+func (f *timberFamily) typedWords(m Method) string {
+	if m != ASD || f.cdFixed == 0 {
+		return ""
+	}
+	return fmt.Sprintf(", or the typed CD %.2f where it is lower (a typed duration only makes a combination more conservative)", f.cdFixed)
 }
 
 // CaseQuick implements CaseFamily: the unburnt section with the
@@ -351,7 +361,7 @@ func (f *timberFamily) Detail(i int, s Setting) Detail {
 		timeName = "CD"
 	}
 	d.Steps = append(d.Steps,
-		Step{Clause: "NDS 2018 N3.3 / 2.3.2", Quantity: "combination", Formula: fmt.Sprintf("the trace above is for %s, %s = %.2f, the combination with the highest utilization; every combination is checked with its own %s", gc.Name, timeName, f.timeOf(gc, s.Method), timeName), Value: caseN / 1000, Unit: "kN"},
+		Step{Clause: "NDS 2018 N3.3 / 2.3.2", Quantity: "combination", Formula: fmt.Sprintf("the trace above is for %s, %s = %.2f, the combination with the highest utilization; every combination is checked with its own %s%s", gc.Name, timeName, f.timeOf(gc, s.Method), timeName, f.typedWords(s.Method)), Value: caseN / 1000, Unit: "kN"},
 		Step{Clause: "ASCE 7-22 2.3/2.4 via the load summary", Quantity: "demand",
 			Formula: "largest combination including self-weight", Value: demandN / 1000, Unit: "kN"},
 		Step{Clause: "NDS 2018 N3.3 / 2.3.2", Quantity: "capacity on the demand scale",

@@ -210,9 +210,15 @@ func TestTimberOptionsTakeEffect(t *testing.T) {
 	inc.Timber.Incised = true
 	assert.Less(t, timberCap(t, inc, 0, "4x4 DF-L No.1", s).CapacityN, timberCap(t, base, 0, "4x4 DF-L No.1", s).CapacityN, "Ci lowers 4x capacity")
 
+	// A typed duration only makes a combination more conservative: ten
+	// minutes (CD 1.6) never raises a combination's own CD, permanent (0.9)
+	// lowers D + L's 1.0 (NDS 2018 Table 2.3.2, from memory).
 	short := base
 	short.Timber.Duration = "ten-minutes"
-	assert.Greater(t, timberCap(t, short, 0, "8x8 DF-L No.1", s).CapacityN, p0, "CD 1.6 raises capacity")
+	assert.LessOrEqual(t, timberCap(t, short, 0, "8x8 DF-L No.1", s).CapacityN, p0, "CD 1.6 typed does not raise capacity")
+	perm := base
+	perm.Timber.Duration = "permanent"
+	assert.LessOrEqual(t, timberCap(t, perm, 0, "8x8 DF-L No.1", s).CapacityN, p0, "CD 0.9 typed never raises capacity")
 
 	sp := base
 	sp.Timber.Species, sp.Timber.Grade = "SP", "SS"
@@ -395,5 +401,39 @@ func BenchmarkTimberQuick(b *testing.B) {
 	b.ReportMetric(float64(n), "candidates")
 	if sum == 0 {
 		b.Fatal("no capacity")
+	}
+}
+
+// A typed ASD duration caps each combination's own CD and never raises it:
+// D alone keeps 0.9 and D + L keeps 1.0 under a typed ten-minute CD 1.6, and
+// a typed permanent 0.9 lowers D + L to 0.9 (NDS 2018 2.3.2 and Table 2.3.2,
+// from memory).
+func TestTimberTypedDurationPerCombination(t *testing.T) {
+	for _, row := range []struct {
+		duration string
+		want     map[string]float64 // CD by combination name prefix
+	}{
+		{"ten-minutes", map[string]float64{"ASD 1": 0.9, "ASD 2": 1.0}}, // own CD (Table 2.3.2, from memory)
+		{"permanent", map[string]float64{"ASD 1": 0.9, "ASD 2": 0.9}},   // typed 0.9 lower than D + L's 1.0
+		{"", map[string]float64{"ASD 1": 0.9, "ASD 2": 1.0}},            // own CD
+	} {
+		sc := DefaultScheme()
+		sc.Setting.Method = ASD
+		sc.Timber.Duration = row.duration
+		ls, err := Summarize(sc.Load, ASD)
+		require.NoError(t, err)
+		fams, err := buildTimber(&sc, ls)
+		require.NoError(t, err)
+		cf := fams[0].(CaseFamily)
+		seen := 0
+		for _, c := range cf.Cases(ASD) {
+			for prefix, want := range row.want {
+				if strings.HasPrefix(c.Name, prefix+":") {
+					assert.Equal(t, want, cf.CaseFactors(&c, 0)["CD"], "%s under typed %q", c.Name, row.duration)
+					seen++
+				}
+			}
+		}
+		assert.Equal(t, len(row.want), seen, "combinations found for %q", row.duration)
 	}
 }

@@ -28,10 +28,14 @@ const (
 // and the code gives no single value. 0 for an invalid value.
 func (e Ends) K() float64 {
 	switch e {
-	case FixedFixed, FixedPinned, PinnedPinned:
-		return 1.0 // ACI 318-19 6.6.4.4.3: k = 1.0 permitted for nonsway members (from memory)
+	case FixedFixed:
+		return 0.65
+	case FixedPinned:
+		return 0.80
 	case FixedGuided:
 		return 1.2
+	case PinnedPinned:
+		return 1.0
 	case FixedFree:
 		return 2.1
 	case PinnedGuided:
@@ -40,12 +44,25 @@ func (e Ends) K() float64 {
 	return 0
 }
 
-// KWords says where Ends.K comes from, for the trace.
-func (e Ends) KWords() string {
-	if e.Sway() {
-		return fmt.Sprintf("%s ends: sway, k above 1.0; idealized value (common practice, as AISC 360-22 C-A-7.1, from memory)", e)
+// KSimplified returns k with the simplification ACI 318-19 6.6.4.4.3
+// permits for nonsway members, k = 1.0 (from memory); sway ends keep K.
+func (e Ends) KSimplified() float64 {
+	if e.Sway() || e.K() == 0 {
+		return e.K()
 	}
-	return fmt.Sprintf("%s ends: nonsway, k = 1.0 (ACI 318-19 6.6.4.4.3 permits it, from memory; cast-in-place ends are rarely fully fixed)", e)
+	return 1.0
+}
+
+// KWords says where the end condition's k comes from, for the trace;
+// simplified says the nonsway k = 1.0 of ACI 318-19 6.6.4.4.3 was chosen.
+func (e Ends) KWords(simplified bool) string {
+	switch {
+	case e.Sway():
+		return fmt.Sprintf("%s ends: sway, k above 1.0; recommended design value (common practice, as AISC 360-22 C-A-7.1, from memory)", e)
+	case simplified:
+		return fmt.Sprintf("%s ends: nonsway, k = 1.0 (ACI 318-19 6.6.4.4.3 permits it, from memory; chosen in the scheme)", e)
+	}
+	return fmt.Sprintf("%s ends: nonsway, the recommended design k of these ends, as for every material (common practice, as AISC 360-22 C-A-7.1, from memory; ACI 318-19 6.6.4.4.3 permits it, and k = 1.0 in its place)", e)
 }
 
 // Sway reports whether the top of the column can translate sideways.
@@ -73,22 +90,42 @@ func (e Ends) String() string {
 // EIMethod selects the effective stiffness of ACI 318-19 6.6.4.4.4.
 type EIMethod int
 
-// The two stiffness expressions offered.
+// The stiffness expressions offered; ACI 318-19 6.6.4.4.4 permits each.
 const (
 	EIGross     EIMethod = iota // (a): 0.4EcIg/(1+βdns)
 	EIWithSteel                 // (b): (0.2EcIg + EsIse)/(1+βdns)
+	EIMember                    // (c): EcI/(1+βdns), I from Table 6.6.3.1.1(b) at Pu (from memory)
+	EILargest                   // the largest strength of (a), (b) and (c)
 )
+
+// Letter returns "a", "b", "c" or "largest".
+func (m EIMethod) Letter() string {
+	switch m {
+	case EIGross:
+		return "a"
+	case EIWithSteel:
+		return "b"
+	case EIMember:
+		return "c"
+	case EILargest:
+		return "largest"
+	}
+	return "invalid"
+}
 
 // Conditions are the length, ends and slenderness inputs at which a section is evaluated.
 type Conditions struct {
-	LuXMM   float64  // unbraced length for bending about x (strong axis), mm
-	LuYMM   float64  // unbraced length for bending about y (weak axis), mm
-	Ends    Ends     // idealized end condition
-	K       float64  // typed effective-length factor; 0 takes Ends.K()
-	M1M2    float64  // end-moment ratio M1/M2, −1 (single curvature) to 1 (double curvature), ACI 318-19 6.2.5.1
-	BetaDns float64  // sustained-load ratio βdns, 0 to 1
-	EI      EIMethod // ACI 318-19 6.6.4.4.4 (a) or (b)
-	Cap14   bool     // also hold δ to 1.4, the second-order limit of ACI 318-19 6.2.5.3 (off: the strength is where δ·M2,min meets the diagram)
+	LuXMM float64 // unbraced length for bending about x (strong axis), mm
+	LuYMM float64 // unbraced length for bending about y (weak axis), mm
+	Ends  Ends    // idealized end condition
+	K     float64 // typed effective-length factor; 0 takes Ends.K() (or Ends.KSimplified() with NonswayK1)
+	// NonswayK1 takes k = 1.0 at nonsway ends, the simplification of ACI
+	// 318-19 6.6.4.4.3, in place of the ends' recommended design k.
+	NonswayK1 bool
+	M1M2      float64  // end-moment ratio M1/M2, −1 (single curvature) to 1 (double curvature), ACI 318-19 6.2.5.1
+	BetaDns   float64  // sustained-load ratio βdns, 0 to 1
+	EI        EIMethod // ACI 318-19 6.6.4.4.4 (a), (b), (c) or the largest
+	Cap14     bool     // also hold δ to 1.4, the second-order limit of ACI 318-19 6.2.5.3 (off: the strength is where δ·M2,min meets the diagram)
 }
 
 // Limits on the conditions.
@@ -118,8 +155,8 @@ func (c *Conditions) Validate() error {
 	if !finite(c.BetaDns) || c.BetaDns < 0 || c.BetaDns > 1 {
 		return badInput("βdns", c.BetaDns, "a sustained-load ratio from 0 to 1")
 	}
-	if c.EI != EIGross && c.EI != EIWithSteel {
-		return badInput("EI method", float64(c.EI), "(a) 0 or (b) 1 of ACI 318-19 6.6.4.4.4")
+	if c.EI < EIGross || c.EI > EILargest {
+		return badInput("EI method", float64(c.EI), "(a) 0, (b) 1, (c) 2 of ACI 318-19 6.6.4.4.4 or 3 for the largest")
 	}
 	return nil
 }
@@ -129,13 +166,17 @@ func (c *Conditions) ok() bool {
 	return c.LuXMM > 0 && c.LuXMM <= MaxLengthMM && c.LuYMM > 0 && c.LuYMM <= MaxLengthMM &&
 		c.Ends.K() != 0 && (c.K == 0 || (c.K >= MinK && c.K <= MaxK)) &&
 		c.M1M2 >= -1 && c.M1M2 <= 1 && c.BetaDns >= 0 && c.BetaDns <= 1 &&
-		(c.EI == EIGross || c.EI == EIWithSteel)
+		c.EI >= EIGross && c.EI <= EILargest
 }
 
-// KFactor returns the typed K, or the end condition's recommended K when none is typed.
+// KFactor returns the typed K, or the end condition's recommended K when
+// none is typed (k = 1.0 at nonsway ends with NonswayK1).
 func (c *Conditions) KFactor() float64 {
 	if c.K != 0 {
 		return c.K
+	}
+	if c.NonswayK1 {
+		return c.Ends.KSimplified()
 	}
 	return c.Ends.K()
 }
@@ -221,17 +262,30 @@ type Magnification struct {
 	Mc    float64 // δ·M2,min, N·mm
 }
 
-// eiEff returns (EI)eff about an axis by ACI 318-19 6.6.4.4.4.
-func (s *Section) eiEff(ax Axis, c *Conditions) float64 {
-	if c.EI == EIWithSteel {
+// MemberI returns I/Ig of a column by ACI 318-19 Table 6.6.3.1.1(b) (from
+// memory): (0.80 + 25Ast/Ag)(1 − Mu/(Pu·h) − 0.5Pu/P0), at least 0.35 and
+// at most 0.875, with Mu the minimum moment Pu·e0 of Eq. 6.6.4.5.4, so
+// Mu/(Pu·h) = e0/h.
+func (s *Section) MemberI(ax Axis, pu float64) float64 {
+	r := (0.80 + 25*s.AstMM2/s.AgMM2) * (1 - s.e0(ax)/s.Depth[ax] - 0.5*pu/s.P0)
+	return math.Max(0.35, math.Min(0.875, r))
+}
+
+// eiEff returns (EI)eff about an axis by ACI 318-19 6.6.4.4.4 with method m
+// (not EILargest) at a factored load pu (used by (c) only).
+func (s *Section) eiEff(ax Axis, m EIMethod, c *Conditions, pu float64) float64 {
+	switch m {
+	case EIWithSteel:
 		return (0.2*s.EcMPa*s.Ig[ax] + EsMPa*s.Ise[ax]) / (1 + c.BetaDns) // Eq. 6.6.4.4.4b
+	case EIMember:
+		return s.EcMPa * s.MemberI(ax, pu) * s.Ig[ax] / (1 + c.BetaDns) // Eq. 6.6.4.4.4c
 	}
 	return 0.4 * s.EcMPa * s.Ig[ax] / (1 + c.BetaDns) // Eq. 6.6.4.4.4a
 }
 
 // pc returns the critical buckling load about an axis, ACI 318-19 Eq. 6.6.4.4.2.
-func (s *Section) pc(ax Axis, klu float64, c *Conditions) float64 {
-	return math.Pi * math.Pi * s.eiEff(ax, c) / (klu * klu)
+func (s *Section) pc(ax Axis, klu float64, m EIMethod, c *Conditions, pu float64) float64 {
+	return math.Pi * math.Pi * s.eiEff(ax, m, c, pu) / (klu * klu)
 }
 
 // e0 returns the minimum eccentricity 0.6 in + 0.03h of ACI 318-19 Eq. 6.6.4.5.4, mm.
@@ -253,17 +307,69 @@ func delta(pu, pc float64) float64 {
 }
 
 // Magnify returns the magnifier about an axis at a factored load pu, N,
-// for an unbraced length lu, mm, and the conditions' K, βdns and EI method.
+// for an unbraced length lu, mm, and the conditions' K, βdns and EI method
+// (EILargest takes the method that gives this axis the largest strength).
 // An unknown axis gives the zero Magnification.
 func (s *Section) Magnify(ax Axis, pu, lu float64, c *Conditions) Magnification {
 	if ax != AxisX && ax != AxisY {
 		return Magnification{}
 	}
 	k := c.KFactor()
-	pc := s.pc(ax, k*lu, c)
+	m := c.EI
+	if m == EILargest {
+		_, _, m = s.slenderBest(ax, k*lu, c)
+	}
+	pc := s.pc(ax, k*lu, m, c, pu)
 	d := delta(pu, pc)
-	m := pu * s.e0(ax)
-	return Magnification{EIeff: s.eiEff(ax, c), Pc: pc, Cm: 1, Delta: d, M2min: m, Mc: d * m}
+	m2 := pu * s.e0(ax)
+	return Magnification{EIeff: s.eiEff(ax, m, c, pu), Pc: pc, Cm: 1, Delta: d, M2min: m2, Mc: d * m2}
+}
+
+// slenderWith returns the slender strength about an axis with one EI
+// method. Under (c) I falls as Pu rises, so the strength is found by
+// successive substitution from I at φPn,max: the odd iterates lie below
+// the fixed point and each satisfies the check with I at its own load. The
+// iteration stops when two successive iterates agree to 1e-9 of φPn,max
+// (or after 24), returning the lower of the last two.
+// Special case: under (a) and (b) Pc does not depend on Pu and one solve suffices.
+func (s *Section) slenderWith(ax Axis, klu float64, m EIMethod, c *Conditions) (float64, limitBy) {
+	if m != EIMember {
+		return s.slenderStrength(ax, s.pc(ax, klu, m, c, 0), c.Cap14)
+	}
+	prev := s.PhiPnMax
+	p, by := s.slenderStrength(ax, s.pc(ax, klu, EIMember, c, prev), c.Cap14)
+	for i := 0; i < 24 && math.Abs(p-prev) > 1e-9*s.PhiPnMax; i++ {
+		q, qby := s.slenderStrength(ax, s.pc(ax, klu, EIMember, c, p), c.Cap14)
+		prev, p, by = p, q, qby
+	}
+	// The fixed point lies between the last two iterates; any load at or
+	// below it satisfies the check with I at that load.
+	return math.Min(p, prev), by
+}
+
+// slenderBest returns, under EILargest, the method of (a), (b) and (c)
+// that gives the largest strength about an axis (the first on a tie); for
+// another method, that method.
+func (s *Section) slenderBest(ax Axis, klu float64, c *Conditions) (float64, limitBy, EIMethod) {
+	if c.EI != EILargest {
+		p, by := s.slenderWith(ax, klu, c.EI, c)
+		return p, by, c.EI
+	}
+	best, bb, bm := -1.0, byAxial, EIGross
+	for m := EIGross; m <= EIMember; m++ {
+		if p, by := s.slenderWith(ax, klu, m, c); p > best {
+			best, bb, bm = p, by, m
+		}
+	}
+	return best, bb, bm
+}
+
+// EIUsed returns the EI method that sets the strength about an axis at
+// length lu: the conditions' own, or under EILargest the one of (a), (b)
+// and (c) that gives the largest strength.
+func (s *Section) EIUsed(ax Axis, lu float64, c *Conditions) EIMethod {
+	_, _, m := s.slenderBest(ax, c.KFactor()*lu, c)
+	return m
 }
 
 // slenderStrength returns the largest Pu ≤ φPn,max, below 0.75Pc, for which
@@ -342,7 +448,7 @@ func (s *Section) axisStrength(ax Axis, lu float64, c *Conditions) (klr float64,
 	if klr <= c.SlendernessLimit()*(1+1e-12) {
 		return klr, false, s.PhiPnMax, byAxial
 	}
-	cap, by = s.slenderStrength(ax, s.pc(ax, k*lu, c), c.Cap14)
+	cap, by, _ = s.slenderBest(ax, k*lu, c)
 	return klr, true, cap, by
 }
 

@@ -72,10 +72,15 @@ func TestSlendernessLimits(t *testing.T) {
 		ends Ends
 		k    float64
 	}{
-		{FixedFixed, 1.0}, {FixedPinned, 1.0}, {FixedGuided, 1.2}, {PinnedPinned, 1.0}, {FixedFree, 2.1}, {PinnedGuided, 2.0},
+		{FixedFixed, 0.65}, {FixedPinned, 0.80}, {FixedGuided, 1.2}, {PinnedPinned, 1.0}, {FixedFree, 2.1}, {PinnedGuided, 2.0},
 	}
 	for _, r := range kRows {
-		assert.Equal(t, r.k, r.ends.K(), "K for %s: nonsway 1.0 (ACI 318-19 6.6.4.4.3, from memory); sway idealized values (common practice, AISC 360-22 C-A-7.1)", r.ends)
+		assert.Equal(t, r.k, r.ends.K(), "K for %s: recommended design values (AISC 360-22 Commentary Table C-A-7.1, from memory)", r.ends)
+		want := r.k
+		if !r.ends.Sway() {
+			want = 1.0 // ACI 318-19 6.6.4.4.3 simplification (from memory)
+		}
+		assert.Equal(t, want, r.ends.KSimplified(), "simplified k for %s", r.ends)
 	}
 }
 
@@ -132,7 +137,11 @@ func TestInputsMoveStrengthTheRightWay(t *testing.T) {
 	fixed.K = 0.65
 	assert.Greater(t, sq.Quick(&fixed).PhiPn, q0.PhiPn, "typed k = 0.65 is stronger than k = 1")
 	fixed.K, fixed.Ends = 0, FixedFixed
-	assert.Equal(t, q0.PhiPn, sq.Quick(&fixed).PhiPn, "nonsway fixed-fixed takes k = 1.0 like pinned-pinned (ACI 318-19 6.6.4.4.3, from memory)")
+	k065 := fixed
+	k065.K = 0.65
+	assert.Equal(t, sq.Quick(&k065).PhiPn, sq.Quick(&fixed).PhiPn, "nonsway fixed-fixed takes its recommended design k = 0.65 (AISC 360-22 C-A-7.1, from memory), as steel and timber do")
+	fixed.NonswayK1 = true
+	assert.Equal(t, q0.PhiPn, sq.Quick(&fixed).PhiPn, "with the simplification, nonsway fixed-fixed takes k = 1.0 like pinned-pinned (ACI 318-19 6.6.4.4.3, from memory)")
 	typed := base
 	typed.K = 1.0
 	assert.Equal(t, q0.PhiPn, sq.Quick(&typed).PhiPn, "typed K = 1 equals pinned-pinned")
@@ -261,4 +270,44 @@ func TestSecondOrderCap(t *testing.T) {
 	c = pinned(2000)
 	c.Cap14 = true
 	assert.Equal(t, Crushing, sq.Quick(&c).Mode)
+}
+
+// (EI)eff by ACI 318-19 Eq. 6.6.4.4.4c with I from Table 6.6.3.1.1(b)
+// (from memory), by hand for the 16 in square, 8 #9 (Ast = 8.00 in²),
+// f'c = 5,000 psi, Grade 60, βdns = 0.6:
+//
+//	P0 = 0.85(5)(256 − 8) + 60(8) = 1,534 kip                     (Eq. 22.4.2.2)
+//	e0/h = (0.6 + 0.03·16)/16 = 0.0675                             (Mu = Pu·e0, Eq. 6.6.4.5.4)
+//	at Pu = 1,400 kip: I/Ig = (0.80 + 25·8/256)(1 − 0.0675 − 0.5·1,400/1,534)
+//	    = 1.58125 × 0.47618 = 0.75295                              (Table 6.6.3.1.1(b))
+//	(EI)eff = 4,030.5 × 0.75295 × 5,461.33 / 1.6 = 10,358,746 kip-in²
+//	Pc = π²(10,358,746)/240² = 1,774.94 kip                       (Eq. 6.6.4.4.2)
+//	at Pu = 400 kip the product is 1.268, held to 0.875 (Table 6.6.3.1.1(b) upper limit).
+func TestEIMemberByHand(t *testing.T) {
+	sq := square16(t)
+	assert.InDelta(t, 0.75295, sq.MemberI(AxisX, 1400*NPerKip), 1e-4, "I/Ig by hand")
+	assert.Equal(t, 0.875, sq.MemberI(AxisX, 400*NPerKip), "upper limit 0.875Ig")
+	c := pinned(240 * MMPerInch)
+	c.EI = EIMember
+	m := sq.Magnify(AxisX, 1400*NPerKip, c.LuXMM, &c)
+	assert.InDelta(t, 10358746, m.EIeff/(NPerKip*in2), 50, "(EI)eff by Eq. 6.6.4.4.4c by hand")
+	assert.InDelta(t, 1774.94, m.Pc/NPerKip, 0.05, "Pc by hand")
+
+	// Each of (a), (b), (c) is permitted: the largest is at least each one.
+	var best float64
+	for _, ei := range []EIMethod{EIGross, EIWithSteel, EIMember} {
+		c.EI = ei
+		best = math.Max(best, sq.Quick(&c).PhiPn)
+	}
+	c.EI = EILargest
+	assert.Equal(t, best, sq.Quick(&c).PhiPn, "largest of (a), (b), (c)")
+	// (c) gives this lightly reinforced slender column more than (a).
+	ca, cc := c, c
+	ca.EI, cc.EI = EIGross, EIMember
+	assert.Greater(t, sq.Quick(&cc).PhiPn, sq.Quick(&ca).PhiPn)
+	// The strength under (c) satisfies the check with I at its own load:
+	// δ from Pc at that load keeps δ·M2,min inside the diagram.
+	q := sq.Quick(&cc)
+	mq := sq.Magnify(AxisX, q.PhiPn, cc.LuXMM, &cc)
+	assert.LessOrEqual(t, mq.Mc, sq.PhiMnAt(AxisX, q.PhiPn)*(1+1e-6))
 }

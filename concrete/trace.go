@@ -29,6 +29,7 @@ type AxisResult struct {
 	PhiPn   float64       // strength for this axis, N (0 above k·lu/r = 100)
 	Mag     Magnification // magnifier at PhiPn (zero when not slender)
 	PhiMn   float64       // φMn of the diagram at PhiPn, N·mm
+	EI      EIMethod      // the EI method that set the strength (slender axes only)
 }
 
 // Result is the full evaluation with its trace.
@@ -114,7 +115,7 @@ func (s *Section) Evaluate(c Conditions) (Result, error) {
 
 	// Slenderness about each axis in turn.
 	k := c.KFactor()
-	kWords := c.Ends.KWords()
+	kWords := c.Ends.KWords(c.NonswayK1)
 	if c.K != 0 {
 		kWords = "typed"
 	}
@@ -153,10 +154,19 @@ func (s *Section) Evaluate(c Conditions) (Result, error) {
 		}
 		a.Mag = s.Magnify(ax, a.PhiPn, lus[ax], &c)
 		a.PhiMn = s.PhiMnAt(ax, a.PhiPn)
-		if c.EI == EIWithSteel {
-			add("ACI 318-19 Eq. 6.6.4.4.4b", "(EI)eff"+n, fmt.Sprintf("(0.2EcIg + EsIse)/(1 + βdns), βdns = %.2f", c.BetaDns), a.Mag.EIeff*1e-9, "kN·m2")
-		} else {
-			add("ACI 318-19 Eq. 6.6.4.4.4a", "(EI)eff"+n, fmt.Sprintf("0.4EcIg/(1 + βdns), βdns = %.2f", c.BetaDns), a.Mag.EIeff*1e-9, "kN·m2")
+		a.EI = s.EIUsed(ax, lus[ax], &c)
+		chosen := ""
+		if c.EI == EILargest {
+			chosen = fmt.Sprintf("; (%s) gives the largest strength of (a), (b) and (c), each of which 6.6.4.4.4 permits", a.EI.Letter())
+		}
+		switch a.EI {
+		case EIWithSteel:
+			add("ACI 318-19 Eq. 6.6.4.4.4b", "(EI)eff"+n, fmt.Sprintf("(0.2EcIg + EsIse)/(1 + βdns), βdns = %.2f%s", c.BetaDns, chosen), a.Mag.EIeff*1e-9, "kN·m2")
+		case EIMember:
+			add("ACI 318-19 Table 6.6.3.1.1(b)", "I/Ig"+n, fmt.Sprintf("(0.80 + 25Ast/Ag)(1 − Mu/(Pu·h) − 0.5Pu/P0), 0.35 to 0.875, Mu = Pu·e0, at Pu = %.0f kN (from memory)", a.PhiPn*kN), s.MemberI(ax, a.PhiPn), "")
+			add("ACI 318-19 Eq. 6.6.4.4.4c", "(EI)eff"+n, fmt.Sprintf("EcI/(1 + βdns), βdns = %.2f%s", c.BetaDns, chosen), a.Mag.EIeff*1e-9, "kN·m2")
+		default:
+			add("ACI 318-19 Eq. 6.6.4.4.4a", "(EI)eff"+n, fmt.Sprintf("0.4EcIg/(1 + βdns), βdns = %.2f%s", c.BetaDns, chosen), a.Mag.EIeff*1e-9, "kN·m2")
 		}
 		add("ACI 318-19 Eq. 6.6.4.4.2", "Pc"+n, "π²(EI)eff/(k·lu)²", a.Mag.Pc*kN, "kN")
 		if a.Sway {

@@ -19,7 +19,7 @@ var steelFamilies = model.SteelFamilies
 var (
 	barGradeChoices   = []choice{{"Grade 60", "60"}, {"Grade 80", "80"}}
 	transverseChoices = []choice{{"Tied and spiral", "all"}, {"Tied only", "ties"}, {"Spiral only", "spiral"}}
-	eiChoices         = []choice{{"(a) 0.4 Ec Ig", "a"}, {"(b) 0.2 Ec Ig + Es Ise", "b"}}
+	eiChoices         = []choice{{"Largest of (a), (b), (c)", "largest"}, {"(a) 0.4 Ec Ig", "a"}, {"(b) 0.2 Ec Ig + Es Ise", "b"}, {"(c) Ec I, I of Table 6.6.3.1.1(b)", "c"}}
 	speciesChoices    = named(timber.SawnSpecies(), map[string]string{"DF-L": "Douglas fir-larch", "SP": "Southern pine", "HF": "Hem-fir", "SPF": "Spruce-pine-fir"})
 	gradeChoices      = named(timber.SawnGrades(), map[string]string{"SS": "Select structural", "No.1": "No. 1", "No.2": "No. 2"})
 	sidesChoices      = []choice{{"4 sides exposed", "4"}, {"3 sides exposed", "3"}}
@@ -47,6 +47,7 @@ type materialWidgets struct {
 	eiMethod      *widget.Select
 	betaFromLoads *widget.Check
 	cap14         *widget.Check
+	nonswayK1     *widget.Check
 	species       *widget.Select
 	grade         *widget.Select
 	sawn, glulam  *widget.Check
@@ -89,6 +90,9 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			})
 		})
 		o.steelProblem = problemLabel()
+		o.nonswayK1 = widget.NewCheck("k = 1.0 at nonsway ends (ACI 318-19 6.6.4.4.3) in place of the ends' recommended K", func(on bool) {
+			w.change(func(sc *model.Scheme) { sc.Concrete.NonswayK1 = on })
+		})
 		return container.NewVBox(w.newField("steel Fy").box, widget.NewLabel("Shape families"), o.steelFam, o.steelProblem)
 	case "concrete":
 		o.barGrade = widget.NewSelect(labels(barGradeChoices), func(s string) {
@@ -120,6 +124,7 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			small("The typed βdns is used with a typed load or when the box above is off."),
 			labelled("(EI)eff, ACI 318-19 6.6.4.4.4", o.eiMethod),
 			o.cap14,
+			o.nonswayK1,
 		)
 	case "timber":
 		o.species = widget.NewSelect(labels(speciesChoices), func(s string) {
@@ -198,6 +203,7 @@ func (o *materialWidgets) sync(w *Window) {
 		o.eiMethod.SetSelected(labelOf(eiChoices, c.EIMethod))
 		o.betaFromLoads.SetChecked(c.BetaFromLoads)
 		o.cap14.SetChecked(c.SecondOrderCap)
+		o.nonswayK1.SetChecked(c.NonswayK1)
 	}
 	if o.species != nil {
 		t := d.Timber

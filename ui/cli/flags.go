@@ -42,6 +42,7 @@ type schemeFlags struct {
 
 	carbon     string
 	limitDelta bool
+	nonswayK1  bool
 
 	fillFc, compositeFamilies string
 	aggregate                 string // concrete aggregate for the fire rating
@@ -86,7 +87,8 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.rhoMax, "rho-max", "", "largest reinforcement ratio, e.g. 0.04 or 4%")
 	fs.StringVar(&f.m1m2, "m1m2", "", "end-moment ratio M1/M2, -1 (single curvature) to 1")
 	fs.StringVar(&f.betaDns, "beta-dns", "", "sustained-load ratio βdns, 0 to 1: each LRFD combination takes the larger of this and its own factored dead over total, so it never lowers a combination's βdns (default: each combination's own)")
-	fs.StringVar(&f.ei, "ei", "", "(EI)eff expression of ACI 318-19 6.6.4.4.4: a or b")
+	fs.StringVar(&f.ei, "ei", "", "(EI)eff of ACI 318-19 6.6.4.4.4: a, b, c, or largest (default: the largest strength of the three, each permitted)")
+	fs.BoolVar(&f.nonswayK1, "nonsway-k1", false, "concrete: k = 1.0 at nonsway ends, the simplification of ACI 318-19 6.6.4.4.3, in place of the ends' recommended design K that every material takes by default")
 	fs.StringVar(&f.transverse, "transverse", "", "concrete columns: ties, spiral or all")
 	fs.BoolVar(&f.limitDelta, "limit-magnifier", true, "concrete: δ above 1.4 never works (ACI 318-19 6.2.5.3); false only adds the strength without the limit to the trace as a note")
 	fs.StringVar(&f.carbon, "carbon", "", "embodied-carbon factors to change, e.g. concrete=300,rolled-steel=1.1 (kinds: "+carbonKindList()+")")
@@ -431,10 +433,13 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 	}
 	if f.ei != "" {
 		e := strings.ToLower(f.ei)
-		if e != "a" && e != "b" {
-			return usagef("--ei %q: not accepted; give a or b (ACI 318-19 6.6.4.4.4)", f.ei)
+		if e != "a" && e != "b" && e != "c" && e != "largest" {
+			return usagef("--ei %q: not accepted; give %s", f.ei, model.EIAccepted)
 		}
 		c.EIMethod = e
+	}
+	if f.set("nonsway-k1") {
+		c.NonswayK1 = f.nonswayK1
 	}
 	if f.set("limit-magnifier") {
 		c.SecondOrderCap = f.limitDelta

@@ -37,6 +37,7 @@ func Assumptions() []Assumption {
 		return se.K()
 	})
 	concreteK := kList(func(e EndCondition) float64 { return concreteEnds(e).K() })
+	concreteK1 := kList(func(e EndCondition) float64 { return concreteEnds(e).KSimplified() })
 	timberK := kList(func(e EndCondition) float64 {
 		return timberGeometry(Setting{LengthMM: 1, WeakMM: 1, Ends: e}).Ends.Ke()
 	})
@@ -49,8 +50,8 @@ func Assumptions() []Assumption {
 			"Lc/r above 200 is marked (AISC 360-22 E2 User Note); strength is still given",
 		}},
 		{"concrete", []string{
-			concreteK + " (nonsway k = 1.0, ACI 318-19 6.6.4.4.3, from memory; sway: idealized values, common practice), unless K is typed",
-			"ACI 318-19 is strength design: every LRFD combination is checked with its own βdns = factored dead / total (6.6.4.4.4); under ASD the governing strength is restated on the service-load scale; δ above 1.4 never works (6.2.5.3)",
+			concreteK + " (the recommended design values, as steel and timber take: AISC 360-22 C-A-7.1, from memory), unless K is typed; with the nonsway-k1 setting " + concreteK1 + " (nonsway k = 1.0, the simplification ACI 318-19 6.6.4.4.3 permits, from memory)",
+			"ACI 318-19 is strength design: every LRFD combination is checked with its own βdns = factored dead / total (6.6.4.4.4), and (EI)eff by whichever of 6.6.4.4.4 (a), (b) and (c) gives the largest strength unless one is chosen; under ASD the governing strength is restated on the service-load scale; δ above 1.4 never works (6.2.5.3)",
 			"concrete at 2,320 kg/m³ plus bars, added as dead load with each combination's dead factor",
 			"the weak-axis brace sets lu about the weak axis; no torsional mode",
 			"k·lu/r above 100 is not permitted (6.2.6) and marked",

@@ -170,25 +170,30 @@ func TestConcreteNonswayK(t *testing.T) {
 	rows := []struct {
 		ends EndCondition
 		k    float64
+		k1   bool // the ACI simplification chosen
 		want float64
 		src  string
 	}{
-		{FixedFixed, 0, 1.0, "ACI 318-19 6.6.4.4.3: k = 1.0 permitted for nonsway members (from memory)"},
-		{FixedPinned, 0, 1.0, "ACI 318-19 6.6.4.4.3"},
-		{PinnedPinned, 0, 1.0, "ACI 318-19 6.6.4.4.3"},
-		{FixedGuided, 0, 1.2, "sway: idealized value (common practice, AISC 360-22 C-A-7.1)"},
-		{FixedFree, 0, 2.1, "sway: idealized value (common practice)"},
-		{PinnedGuided, 0, 2.0, "sway: idealized value (common practice)"},
-		{FixedFixed, 0.65, 0.65, "typed K is used as typed"},
+		{FixedFixed, 0, false, 0.65, "recommended design value, as steel and timber (AISC 360-22 C-A-7.1, from memory)"},
+		{FixedPinned, 0, false, 0.80, "recommended design value (AISC 360-22 C-A-7.1, from memory)"},
+		{PinnedPinned, 0, false, 1.0, "recommended design value (AISC 360-22 C-A-7.1, from memory)"},
+		{FixedFixed, 0, true, 1.0, "ACI 318-19 6.6.4.4.3: k = 1.0 permitted for nonsway members (from memory)"},
+		{FixedPinned, 0, true, 1.0, "ACI 318-19 6.6.4.4.3"},
+		{FixedGuided, 0, false, 1.2, "sway: recommended design value (AISC 360-22 C-A-7.1)"},
+		{FixedGuided, 0, true, 1.2, "sway: the simplification is for nonsway members only"},
+		{FixedFree, 0, false, 2.1, "sway: recommended design value"},
+		{PinnedGuided, 0, false, 2.0, "sway: recommended design value"},
+		{FixedFixed, 0.9, false, 0.9, "typed K is used as typed"},
 	}
 	sc := DefaultScheme()
 	sc.Materials = []string{"concrete"}
 	for _, r := range rows {
 		sc.Setting = Setting{LengthMM: 4000, WeakMM: 4000, Ends: r.ends, K: r.k, Method: LRFD}
+		sc.Concrete.NonswayK1 = r.k1
 		m, err := New(sc)
 		require.NoError(t, err)
 		d := m.Detail(0, 0, sc.Setting)
-		assert.Equal(t, r.want, d.Calc["k"], "%s: %s", r.ends, r.src)
+		assert.Equal(t, r.want, d.Calc["k"], "%s (k1 %v): %s", r.ends, r.k1, r.src)
 		words := ""
 		for _, st := range d.Steps {
 			if strings.HasPrefix(st.Quantity, "k (") {
@@ -200,8 +205,10 @@ func TestConcreteNonswayK(t *testing.T) {
 			assert.Contains(t, words, "typed", "the trace says why")
 		case r.ends.Sway():
 			assert.Contains(t, words, "sway, k above 1.0", "the trace says why")
-		default:
+		case r.k1:
 			assert.Contains(t, words, "nonsway, k = 1.0", "the trace says why")
+		default:
+			assert.Contains(t, words, "recommended design k", "the trace says why")
 		}
 	}
 }

@@ -127,9 +127,8 @@ func buildConcrete(sc *Scheme, ls LoadSummary) ([]Family, error) {
 	if !o.BetaFromLoads {
 		betaFixed = o.BetaDns
 	}
-	if o.EIMethod == "b" {
-		cond.EI = concrete.EIWithSteel
-	}
+	cond.EI = concreteEIMethods[o.EIMethod]
+	cond.NonswayK1 = o.NonswayK1
 	var kinds []concrete.Kind
 	switch o.Transverse {
 	case "ties":
@@ -349,7 +348,7 @@ func (f *concreteFamily) Detail(i int, s Setting) Detail {
 		}
 	}
 	d.Calc = f.calc(sec, &r, &c, s, &d)
-	d.Calc["k_source"] = c.Ends.KWords()
+	d.Calc["k_source"] = c.Ends.KWords(c.NonswayK1)
 	if c.K != 0 {
 		d.Calc["k_source"] = "typed"
 	}
@@ -411,7 +410,8 @@ func (f *concreteFamily) calc(sec *concrete.Section, r *concrete.Result, c *conc
 		"delta":          delta,
 		"beta_dns":       c.BetaDns,
 		"beta_source":    map[bool]string{true: "the concrete options", false: "the governing combination"}[f.betaFixed >= 0],
-		"EI_method":      map[concrete.EIMethod]string{concrete.EIGross: "a", concrete.EIWithSteel: "b"}[c.EI],
+		"EI_method":      c.EI.Letter(),
+		"EI_used":        map[bool]string{true: g.EI.Letter(), false: ""}[g.Slender],
 		"EIeff_kNm2":     m.EIeff * 1e-9,
 		"Pc_kN":          m.Pc / 1e3,
 		"Mmin_kNm":       m.M2min * 1e-6,

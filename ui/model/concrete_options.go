@@ -1,5 +1,7 @@
 package model
 
+import "upright/concrete"
+
 // ConcreteOptions are the concrete column choices.
 type ConcreteOptions struct {
 	FcMPa         float64 // specified compressive strength f'c, MPa; 0 means the default for the unit system (5,000 psi or 35 MPa)
@@ -9,7 +11,11 @@ type ConcreteOptions struct {
 	M1M2          float64 // end-moment ratio M1/M2, -1 (single curvature) to 1
 	BetaDns       float64 // sustained-load ratio; used when BetaFromLoads is false or the load has no split
 	BetaFromLoads bool    // derive βdns from the takedown's dead/live split
-	EIMethod      string  // "a" or "b" of ACI 318-19 6.6.4.4.4
+	EIMethod      string  // "a", "b" or "c" of ACI 318-19 6.6.4.4.4, or "largest" (the largest strength of the three, each permitted)
+	// NonswayK1 takes k = 1.0 at nonsway ends, the simplification ACI
+	// 318-19 6.6.4.4.3 permits, in place of the ends' recommended design K
+	// that every material takes by default.
+	NonswayK1 bool
 	// SecondOrderCap concerns the 1.4 limit of ACI 318-19 6.2.5.3 (total
 	// moment with second-order effects at most 1.4 times the first-order
 	// moment). The limit always applies: δ above 1.4 never works. Switched
@@ -21,7 +27,7 @@ type ConcreteOptions struct {
 func defaultConcreteOptions() ConcreteOptions {
 	return ConcreteOptions{
 		BarGrade: 60, RhoMax: 0.04, Transverse: "all", M1M2: -1,
-		BetaDns: 0.6, BetaFromLoads: true, EIMethod: "a", SecondOrderCap: true,
+		BetaDns: 0.6, BetaFromLoads: true, EIMethod: "largest", SecondOrderCap: true,
 	}
 }
 
@@ -46,8 +52,16 @@ func (c ConcreteOptions) validate() error {
 	if !finite(c.BetaDns) || c.BetaDns < 0 || c.BetaDns > 1 {
 		return bad("beta-dns", c.BetaDns, "a sustained-load ratio from 0 to 1")
 	}
-	if c.EIMethod != "a" && c.EIMethod != "b" {
-		return bad("EI method", c.EIMethod, "a or b (ACI 318-19 6.6.4.4.4)")
+	if _, ok := concreteEIMethods[c.EIMethod]; !ok {
+		return bad("EI method", c.EIMethod, EIAccepted)
 	}
 	return nil
+}
+
+// EIAccepted names the accepted (EI)eff choices.
+const EIAccepted = "a, b, c (ACI 318-19 6.6.4.4.4) or largest (the largest strength of the three, each permitted)"
+
+// concreteEIMethods maps an EIMethod option to the concrete package's.
+var concreteEIMethods = map[string]concrete.EIMethod{
+	"a": concrete.EIGross, "b": concrete.EIWithSteel, "c": concrete.EIMember, "largest": concrete.EILargest,
 }

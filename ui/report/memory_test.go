@@ -19,7 +19,7 @@ func TestReportMarksRecalledValues(t *testing.T) {
 	for _, want := range []string{
 		"Commentary Table C-A-7.1, from memory",                   // steel K
 		"Table G1 (from memory)",                                  // timber Ke
-		"6.6.4.4.3 permits it, from memory",                       // concrete K
+		"as AISC 360-22 C-A-7.1, from memory",                     // concrete K
 		"combination 3 (factors from memory)",                     // load factors
 		"hot-rolled steel sections 1.22 kg CO2e/kg (from memory)", // the carbon line
 		"published tables, and some were recalled from memory",

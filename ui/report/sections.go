@@ -799,8 +799,8 @@ func assumptions(d *doc, f *facts) {
 		if !sc.Concrete.SecondOrderCap {
 			cap = "moment magnifier held to 1.4 (ACI 318-19 6.2.5.3): δ above 1.4 never works; the strength without the limit is shown in the trace as a note only"
 		}
-		items = append(items, fmt.Sprintf("Concrete: ACI 318-19, Building Code Requirements for Structural Concrete: axial strength with the interaction diagram at the minimum moment (6.6.4.5.4), slenderness by moment magnification (6.6.4) with (EI)eff expression (%s) of 6.6.4.4.4 and %s; %s; grade %d bars, reinforcement ratio up to %.1f%%; %s.",
-			sc.Concrete.EIMethod, beta, fc, sc.Concrete.BarGrade, sc.Concrete.RhoMax*100, cap))
+		items = append(items, fmt.Sprintf("Concrete: ACI 318-19, Building Code Requirements for Structural Concrete: axial strength with the interaction diagram at the minimum moment (6.6.4.5.4), slenderness by moment magnification (6.6.4) with (EI)eff %s of 6.6.4.4.4 and %s; %s; %s; grade %d bars, reinforcement ratio up to %.1f%%; %s.",
+			eiWords(sc.Concrete.EIMethod), beta, concreteKWords(sc.Concrete.NonswayK1), fc, sc.Concrete.BarGrade, sc.Concrete.RhoMax*100, cap))
 	}
 	if mats["timber"] {
 		dur := " Every combination is checked with its own time effect factor λ (NDS 2018 Table N3, N3.3)."
@@ -884,4 +884,20 @@ func cautions(d *doc) {
 		d.para(strings.Join(lines, " "), "B", sizeBody)
 		d.pdf.Ln(1.5)
 	}
+}
+
+// eiWords names the (EI)eff choice for the method section.
+func eiWords(m string) string {
+	if m == "largest" {
+		return "by whichever of expressions (a), (b) and (c) gives the largest strength (each is permitted)"
+	}
+	return "expression (" + m + ")"
+}
+
+// concreteKWords names the concrete k at nonsway ends for the method section.
+func concreteKWords(k1 bool) string {
+	if k1 {
+		return "k = 1.0 at nonsway ends (the simplification ACI 318-19 6.6.4.4.3 permits, from memory)"
+	}
+	return "the ends' recommended design K, as for every material (k = 1.0 at nonsway ends, which ACI 318-19 6.6.4.4.3 permits, is a scheme setting)"
 }

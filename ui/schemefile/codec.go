@@ -31,7 +31,7 @@ var (
 	loadKeys     = []string{"mode", "direct", "dead_share", "takedown"}
 	takedownKeys = []string{"tributary_area", "floors", "floor_dead", "floor_live", "roof_dead", "roof_live", "snow", "live_reduction", "kll", "occupancy"}
 	steelKeys    = []string{"families", "fy"}
-	concreteKeys = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap"}
+	concreteKeys = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap", "nonsway_k1"}
 	timberKeys   = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire_sides", "duration"}
 	fireKeys     = []string{"rating", "aggregate"}
 	// timberKeysV1 are the timber fields a version-1 file may hold: those of
@@ -108,6 +108,7 @@ type wConcrete struct {
 	BetaFromLoads bool    `json:"beta_from_loads"`
 	EIMethod      string  `json:"ei_method"`
 	SecondOrder   bool    `json:"second_order_cap"`
+	NonswayK1     bool    `json:"nonsway_k1"`
 }
 
 type wTimber struct {
@@ -192,7 +193,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 		Concrete: wConcrete{
 			BarGrade: c.BarGrade, RhoMax: c.RhoMax, Transverse: c.Transverse, M1M2: c.M1M2,
 			BetaDns: c.BetaDns, BetaFromLoads: c.BetaFromLoads, EIMethod: c.EIMethod,
-			SecondOrder: c.SecondOrderCap,
+			SecondOrder: c.SecondOrderCap, NonswayK1: c.NonswayK1,
 		},
 		Timber: wTimber{
 			Species: t.Species, Grade: t.Grade, Sawn: t.Sawn, Glulam: t.Glulam,
@@ -733,7 +734,10 @@ func (r *reader) concrete(root *node, c *model.ConcreteOptions) error {
 	if c.BetaFromLoads, err = r.boolean(n, p, "beta_from_loads", "true to derive βdns from the takedown's dead and live loads"); err != nil {
 		return err
 	}
-	if c.EIMethod, err = r.str(n, p, "ei_method", `"a" or "b" (ACI 318-19 6.6.4.4.4)`); err != nil {
+	if c.EIMethod, err = r.str(n, p, "ei_method", `"a", "b", "c" (ACI 318-19 6.6.4.4.4) or "largest"`); err != nil {
+		return err
+	}
+	if c.NonswayK1, err = r.absentBool(n, p, "nonsway_k1", false, "true for k = 1.0 at nonsway ends (ACI 318-19 6.6.4.4.3), false for the ends' recommended design K"); err != nil {
 		return err
 	}
 	c.SecondOrderCap, err = r.boolean(n, p, "second_order_cap", "true to hold the moment magnifier to 1.4 (ACI 318-19 6.2.5.3), as the code requires")

@@ -81,7 +81,8 @@
 //	    "m1_m2": -1,                   -1 to 1
 //	    "beta_dns": 0.6,               0 to 1, used unless derived from the loads
 //	    "beta_from_loads": true,
-//	    "ei_method": "a",              a or b (ACI 318-19 6.6.4.4.4)
+//	    "ei_method": "largest",        a, b or c (ACI 318-19 6.6.4.4.4), or largest: the largest strength of the three
+//	    "nonsway_k1": false,           true: k = 1.0 at nonsway ends (ACI 318-19 6.6.4.4.3); absent means false
 //	    "second_order_cap": true       hold the moment magnifier to 1.4 (ACI 318-19 6.2.5.3)
 //	  },
 //	  "timber": {

@@ -89,7 +89,8 @@ func genScheme(t *rapid.T) model.Scheme {
 	c.M1M2 = rapid.Float64Range(-1, 1).Draw(t, "m1m2")
 	c.BetaDns = rapid.Float64Range(0, 1).Draw(t, "beta dns")
 	c.BetaFromLoads = rapid.Bool().Draw(t, "beta from loads")
-	c.EIMethod = rapid.SampledFrom([]string{"a", "b"}).Draw(t, "EI method")
+	c.EIMethod = rapid.SampledFrom([]string{"a", "b", "c", "largest"}).Draw(t, "EI method")
+	c.NonswayK1 = rapid.Bool().Draw(t, "nonsway k1")
 	c.SecondOrderCap = rapid.Bool().Draw(t, "second-order cap")
 
 	tm := &sc.Timber
@@ -165,7 +166,7 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 		"Load.RoofDeadKPa", "Load.RoofLiveKPa", "Load.SnowKPa", "Load.LiveReduction", "Load.KLL", "Load.Occupancy",
 		"Steel.Families", "Steel.FyMPa",
 		"Concrete.FcMPa", "Concrete.BarGrade", "Concrete.RhoMax", "Concrete.Transverse", "Concrete.M1M2",
-		"Concrete.BetaDns", "Concrete.BetaFromLoads", "Concrete.EIMethod", "Concrete.SecondOrderCap",
+		"Concrete.BetaDns", "Concrete.BetaFromLoads", "Concrete.EIMethod", "Concrete.SecondOrderCap", "Concrete.NonswayK1",
 		"Timber.Species", "Timber.Grade", "Timber.Glulam", "Timber.Sawn", "Timber.Wet", "Timber.Incised",
 		"Timber.Hot", "Timber.FireSides", "Timber.Duration", "Timber.GlulamCombos",
 		"Composite.Families", "Composite.FillFcMPa",

@@ -62,13 +62,15 @@ func bad(name string, v float64, accepted string) error {
 func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
 // HeatedPerimeterIn returns the heated perimeter D of a column under a board
-// enclosure, in. For an I-shaped profile the board boxes the section, so D is
-// the box perimeter 2(bf + d); for a rectangular HSS it is the outer
-// perimeter, taken as 2(B + H) (the sharp-cornered box, which is slightly
-// larger than the true perimeter and so errs on the safe side: a larger D
-// lowers R); for a round section it is π·OD (IBC 2021 722.5.1.2, definition
-// of D and its figure of heated perimeters, from memory). a and b are the two
-// plan dimensions (d and bf, B and H, or OD twice).
+// enclosure, in: the inside perimeter of the box the board forms (IBC 2021
+// 722.5.1.2, D for board as the inside perimeter of the protection, from
+// memory). For an I-shaped profile the board boxes the section, so D is
+// 2(bf + d); for a rectangular HSS it is the outer perimeter, taken as
+// 2(B + H) (the sharp-cornered box, slightly larger than the true perimeter,
+// which errs on the safe side: a larger D lowers R); a round section is
+// boxed in a square of side OD, so D is 4·OD, not the tube's own π·OD (the
+// box perimeter is the larger, so this errs on the safe side too). a and b
+// are the two plan dimensions (d and bf, B and H, or OD twice).
 func HeatedPerimeterIn(o Outline, a, b float64) (float64, error) {
 	if !finite(a) || !finite(b) || a <= 0 || b <= 0 || a > 200 || b > 200 {
 		return 0, bad("plan dimension", math.Max(a, b), "plan dimensions greater than 0 and at most 200 in")
@@ -77,7 +79,7 @@ func HeatedPerimeterIn(o Outline, a, b float64) (float64, error) {
 	case Profile, Box:
 		return 2 * (a + b), nil
 	case Round:
-		return math.Pi * a, nil
+		return 4 * a, nil // the square box round the tube
 	}
 	return 0, bad("outline", float64(o), "profile (0), box (1) or round (2)")
 }

@@ -35,9 +35,10 @@ func TestSizeHandCalculations(t *testing.T) {
 		{"HSS6X6X1/4 1 h", Box, 6.0, 6.0, 19.02, 1, 2, 106.5, 54.7},
 		{"HSS6X6X1/4 2 h", Box, 6.0, 6.0, 19.02, 2, 3, 163.1, 106.5},
 		{"HSS6X6X1/4 3 h", Box, 6.0, 6.0, 19.02, 3, 4, 224.8, 163.1},
-		{"HSS6.625X0.280 1 h", Round, 6.625, 6.625, 18.99, 1, 2, 114.2, 59.5},
-		{"HSS6.625X0.280 2 h", Round, 6.625, 6.625, 18.99, 2, 3, 173.2, 114.2},
-		{"HSS6.625X0.280 3 h", Round, 6.625, 6.625, 18.99, 3, 4, 236.9, 173.2},
+		// Round: D = 4·OD = 26.5 in, the square box the board forms; W/D = 0.7166.
+		{"HSS6.625X0.280 1 h", Round, 6.625, 6.625, 18.99, 1, 2, 101.5, 51.6},
+		{"HSS6.625X0.280 2 h", Round, 6.625, 6.625, 18.99, 2, 3, 156.6, 101.5},
+		{"HSS6.625X0.280 3 h", Round, 6.625, 6.625, 18.99, 3, 4, 217.1, 156.6},
 	}
 	for _, r := range rows {
 		d, err := HeatedPerimeterIn(r.outline, r.a, r.b)
@@ -101,7 +102,7 @@ func TestHeatedPerimeter(t *testing.T) {
 	}{
 		{"W box 2(d + bf)", Profile, 9.98, 10.0, 39.96},
 		{"rectangular HSS 2(B + H)", Box, 4, 8, 24},
-		{"round π·OD", Round, 6.625, 6.625, 20.8131},
+		{"round in a square box 4·OD", Round, 6.625, 6.625, 26.5},
 	}
 	for _, r := range rows {
 		got, err := HeatedPerimeterIn(r.o, r.a, r.b)

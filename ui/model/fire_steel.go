@@ -83,9 +83,13 @@ func ProtectSteel(st Static, o BoardOutline, steelKgPerM, hours float64) (Static
 		if err != nil {
 			return nil
 		}
-		out := make([]Step, 0, len(e.Steps)+2)
+		out := make([]Step, 0, len(e.Steps)+3)
 		for _, x := range e.Steps {
 			out = append(out, fireSteelStep(x))
+		}
+		if o == fire.Round {
+			out = append(out, Step{Clause: fire.Clause, Quantity: "D of a round section",
+				Formula: "4·OD, the inside perimeter of the square box the board forms (not the tube's π·OD)", Value: d * steelMMPerIn, Unit: "mm"})
 		}
 		return append(out,
 			Step{Clause: "protected plan", Quantity: "plan with board", Formula: "bare plan + 2h each way", Value: pw * pd, Unit: "mm2"},

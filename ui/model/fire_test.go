@@ -301,8 +301,8 @@ func TestFireNoNaN(t *testing.T) {
 // A material with a steel shell and no fire rule of its own (a filled HSS)
 // is boxed as bare steel of the shell's weight, the core ignored, and says
 // so. HSS6.625X0.280 shell: 18.99 lb/ft = 28.26 kg/m, OD = 6.625 in (AISC
-// Manual Table 1-13, from memory); at 2 h three layers (R = 173.2 min, see
-// steel/fire hand calculations).
+// Manual Table 1-13, from memory); boxed in a square, D = 4·OD = 26.5 in;
+// at 2 h three layers (R = 156.6 min, see steel/fire hand calculations).
 func TestFireOtherSteelShell(t *testing.T) {
 	d := 6.625 * 25.4
 	st := Static{
@@ -315,8 +315,8 @@ func TestFireOtherSteelShell(t *testing.T) {
 	require.NotNil(t, out.Fire)
 	assert.True(t, out.Fire.OK)
 	assert.Equal(t, 3, out.Fire.Layers)
-	assert.InDelta(t, 173.2/60, out.Fire.ProvidedH, 0.01)
-	assert.InDelta(t, math.Pi*d, out.Fire.HeatedPerimeterMM, 1e-6, "round outline: π·OD")
+	assert.InDelta(t, 156.6/60, out.Fire.ProvidedH, 0.01)
+	assert.InDelta(t, 4*d, out.Fire.HeatedPerimeterMM, 1e-6, "round outline in a square box: 4·OD")
 	assert.Contains(t, out.Fire.System, "concrete core ignored")
 	assert.InDelta(t, st.MassKgPerM+out.Fire.BoardKgPerM, out.MassKgPerM, 1e-9)
 	// No steel at all: not permitted, with the reason.
@@ -351,9 +351,9 @@ func TestFireQuickMatchesDetail(t *testing.T) {
 	}
 }
 
-// Heated perimeter by outline (IBC 2021 722.5.1.2, from memory): the box
-// 2(d + bf) round W and HP, 2(B + H) for rectangular HSS, π·OD for round HSS
-// and pipe.
+// Heated perimeter by outline (IBC 2021 722.5.1.2, from memory): the inside
+// perimeter of the board box, 2(d + bf) round W and HP, 2(B + H) for
+// rectangular HSS, and 4·OD for round HSS and pipe (boxed in a square).
 func TestFireHeatedPerimeterByFamily(t *testing.T) {
 	m := fireModel(t, "1h", "", "steel")
 	seen := map[string]bool{}
@@ -361,10 +361,7 @@ func TestFireHeatedPerimeterByFamily(t *testing.T) {
 		for i := 0; i < f.Len(); i++ {
 			fc := f.Static(i).Fire
 			a, b := fc.BareFootprintMM[0], fc.BareFootprintMM[1]
-			want := 2 * (a + b)
-			if f.Name() == "HSS round" || f.Name() == "Pipe" {
-				want = math.Pi * a
-			}
+			want := 2 * (a + b) // a = b = OD for round HSS and pipe: 4·OD
 			require.InDelta(t, want, fc.HeatedPerimeterMM, 1e-6, f.Static(i).Designation)
 			seen[f.Name()] = true
 		}

@@ -223,7 +223,7 @@ func NewCandidate(m *model.Model, r *model.Row, s model.Setting) Candidate {
 		Warnings: d.Warnings, Explanation: d.Plain, Steps: d.Steps,
 		Checks: checksJSON(d.Checks), Limit: r.Limit,
 	}
-	c.Fire = fireJSON(r.Static)
+	c.Fire = fireJSON(r.Static, d.Fire)
 	if c.Warnings == nil {
 		c.Warnings = []string{}
 	}

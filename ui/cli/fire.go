@@ -11,7 +11,7 @@ import (
 // fireJSON is the "fire" object of a candidate: the fire check with its
 // lengths rounded to 0.1 mm, or, with no rating, the bare plan and a
 // rating of zero.
-func fireJSON(st *model.Static) model.FireCheck {
+func fireJSON(st *model.Static, at *model.FireCheck) model.FireCheck {
 	if st.Fire == nil {
 		return model.FireCheck{
 			System: "none (no fire rating asked for)", OK: true,
@@ -20,6 +20,9 @@ func fireJSON(st *model.Static) model.FireCheck {
 		}
 	}
 	fc := *st.Fire
+	if at != nil {
+		fc = *at // the check at this length and load
+	}
 	fc.ProvidedH = round(fc.ProvidedH, 2)
 	fc.LayerMM = round(fc.LayerMM, 2)
 	fc.ThicknessMM = round(fc.ThicknessMM, 2)

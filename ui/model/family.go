@@ -137,6 +137,10 @@ type Detail struct {
 	Steps    []Step         // readable trace in the order the standard gives
 	Plain    string         // one sentence a client understands on what governs
 	Checks   []Check        // every load combination checked (filled by Model.Detail)
+	// Fire is the fire check at this length and load, nil with no rating.
+	// It can differ from Static.Fire where the check depends on the length
+	// (timber: whether the charred section carries the service load).
+	Fire *FireCheck
 }
 
 // Family is one group of candidates of one material that the model evaluates

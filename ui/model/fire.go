@@ -240,6 +240,8 @@ func (f *fireFamily) Detail(i int, s Setting) Detail {
 	if fc == nil {
 		return d
 	}
+	fc = fireAtLength(fc, d.Calc)
+	d.Fire = fc
 	// The fire section of the trace: the rating, the method's lines, the verdict.
 	verdict := "reached: " + fc.System
 	if !fc.OK {
@@ -251,7 +253,18 @@ func (f *fireFamily) Detail(i int, s Setting) Detail {
 	if d.Calc == nil {
 		d.Calc = map[string]any{}
 	}
-	d.Calc["fire"] = fc.calc()
+	fire := fc.calc()
+	if own, ok := d.Calc["fire"].(map[string]any); ok {
+		// The material's own fire-case details (timber: the char depth and
+		// the residual section) stay beside the check.
+		for k, v := range own {
+			if _, clash := fire[k]; clash {
+				k = "char_" + k
+			}
+			fire[k] = v
+		}
+	}
+	d.Calc["fire"] = fire
 	if fc.BoardKgPerM > 0 {
 		// The board's weight is dead load on the column: the model's demand
 		// uses the protected mass, so the trace shows the same.
@@ -268,8 +281,10 @@ func (f *fireFamily) Detail(i int, s Setting) Detail {
 			}
 		}
 	}
-	if !fc.OK {
+	if !st.Fire.OK {
 		d.Quick = Quick{Governing: fireNotPerm, Reason: fc.Reason}
+	}
+	if !fc.OK {
 		d.Warnings = append(d.Warnings, "Fire rating not reached: "+fc.Reason)
 		d.Plain = fmt.Sprintf("This size cannot reach the %s h fire rating: %s", fireHoursText(fc.RatingH), fc.Reason)
 	} else {
@@ -388,4 +403,31 @@ func (f *fireFamily) ProtectionMM(i int, _ Setting) float64 {
 		return fc.ThicknessMM
 	}
 	return 0
+}
+
+// fireAtLength returns the fire check as it stands at the length and load
+// of a Detail whose material checks its fire case with the strength
+// (timber: the charred section against the service combination, NDS 2018
+// 16.2.2). When that case fails, the rating is not reached: the check is
+// not OK, provides no rating, and says why. Otherwise fc is returned.
+func fireAtLength(fc *FireCheck, calc map[string]any) *FireCheck {
+	own, ok := calc["fire"].(map[string]any)
+	if !ok || !fc.OK {
+		return fc
+	}
+	permitted, _ := own["permitted"].(bool)
+	capKN, _ := own["capacity_kN"].(float64)
+	demKN, _ := own["demand_kN"].(float64)
+	if permitted && capKN >= demKN {
+		return fc
+	}
+	out := *fc
+	out.OK, out.ProvidedH = false, 0
+	out.System = "exposed wood sized for its char layer: the charred section does not carry the service load at the rating"
+	if r, _ := own["reason"].(string); !permitted && r != "" {
+		out.Reason = fmt.Sprintf("after %s h of char the residual section is not permitted: %s (NDS 2018 16.2)", fireHoursText(fc.RatingH), r)
+	} else {
+		out.Reason = fmt.Sprintf("after %s h of char the residual section carries %.0f kN, less than the service demand of %.0f kN (NDS 2018 16.2.2)", fireHoursText(fc.RatingH), capKN, demKN)
+	}
+	return &out
 }

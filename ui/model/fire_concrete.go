@@ -85,7 +85,7 @@ func timberFire(st Static, hours float64) Static {
 	} else {
 		fc.OK = true
 		fc.ProvidedH = hours
-		fc.System = "exposed wood sized for its char layer (residual section carries the load)"
+		fc.System = "exposed wood sized for its char layer; the charred section is checked against the service load at each length"
 		fc.trace = func() []Step {
 			return []Step{{Clause: "NDS 2018 16.2", Quantity: "exposure time", Formula: "the scheme's rating drives the char depth; the fire-case strength is part of the strength above", Value: hours, Unit: "h"}}
 		}

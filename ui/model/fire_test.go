@@ -391,3 +391,41 @@ func TestFireHeavyWShapesTakeW14X233Board(t *testing.T) {
 		assert.True(t, used, "%s: the trace names the W/D limit", des)
 	}
 }
+
+// Timber under a rating: when the charred section does not carry the
+// service load (NDS 2018 16.2.2), the fire check says the rating is not
+// reached, provides no rating, and keeps the char details; when it does, the
+// rating is reached. 16x16 DF-L No.1 at 4 m: about 725 kN after 2 h of char
+// against a service demand above 1,100 kN at 1,500 kN factored (this
+// model's char calculation, NDS 2018 16.2); at 100 kN it carries the load.
+func TestFireTimberVerdictFollowsTheFireCase(t *testing.T) {
+	for _, row := range []struct {
+		loadN float64
+		ok    bool
+	}{{1500e3, false}, {100e3, true}} {
+		sc := DefaultScheme()
+		sc.Load = Load{Mode: LoadDirect, DirectN: row.loadN}
+		sc.Fire.Rating = "2h"
+		sc.Materials = []string{"timber"}
+		m, err := New(sc)
+		require.NoError(t, err)
+		fi, i, ok := m.Find("16x16 DF-L No.1")
+		require.True(t, ok)
+		d := m.Detail(fi, i, sc.Setting)
+		require.NotNil(t, d.Fire)
+		assert.Equal(t, row.ok, d.Fire.OK, "load %v N", row.loadN)
+		fj := d.Calc["fire"].(map[string]any)
+		assert.Equal(t, row.ok, fj["ok"])
+		assert.Contains(t, fj, "aeff_mm", "char details stay in calc.fire")
+		assert.Contains(t, fj, "b_mm")
+		assert.Contains(t, fj, "capacity_kN")
+		if row.ok {
+			assert.Equal(t, 2.0, d.Fire.ProvidedH)
+			continue
+		}
+		assert.Zero(t, d.Fire.ProvidedH, "no rating is provided")
+		assert.NotContains(t, d.Fire.System, "carries the load")
+		assert.Contains(t, d.Fire.Reason, "less than the service demand")
+		assert.False(t, m.Row(fi, i, sc.Setting).OK, "the row fails too")
+	}
+}

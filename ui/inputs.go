@@ -467,7 +467,7 @@ func (w *Window) updateLoadSummary() {
 		b.WriteString(", typed factored load")
 	}
 	if m.Scheme.SelfWeight {
-		b.WriteString(", plus each column's own weight.")
+		b.WriteString(model.SelfWeightWords(&m.Scheme) + ".")
 	} else {
 		b.WriteString(".")
 	}

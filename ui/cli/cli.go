@@ -354,9 +354,7 @@ func printHeader(w io.Writer, m *model.Model) {
 	default:
 		fmt.Fprintf(w, "Demand %s", units.Force(ls.DemandN, sys))
 	}
-	if sc.SelfWeight {
-		fmt.Fprint(w, ", plus each column's self-weight")
-	}
+	fmt.Fprint(w, model.SelfWeightWords(&sc))
 	fmt.Fprintf(w, "; ranked by %s; near-tie tolerance %s\n", sc.Metric, strings.TrimPrefix(model.TieText(sc.Tie), "within "))
 	printFireLine(w, sc)
 	fmt.Fprintln(w, "Every combination is checked with its own factors (timber λ or CD, concrete βdns); the highest utilization governs.")

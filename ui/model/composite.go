@@ -24,7 +24,7 @@ type compositeFamily struct {
 	name   string
 	cols   []composite.Column
 	static []Static
-	selfW  bool
+	selfW  float64
 	ls     LoadSummary
 }
 
@@ -69,7 +69,7 @@ func buildComposite(sc *Scheme, ls LoadSummary) ([]Family, error) {
 		if err != nil {
 			return nil, bad("fill f'c", fcMPa, FillFcAccepted)
 		}
-		out = append(out, &compositeFamily{name: CompositeFamilies[i], cols: p.cols, static: p.static, selfW: sc.SelfWeight, ls: ls})
+		out = append(out, &compositeFamily{name: CompositeFamilies[i], cols: p.cols, static: p.static, selfW: selfStoreys(sc), ls: ls})
 	}
 	return out, nil
 }

@@ -103,7 +103,7 @@ type concreteFamily struct {
 	cond      concrete.Conditions // M1/M2, EI method and the 1.4 limit; lengths, ends and βdns come per setting and combination
 	betaFixed float64             // βdns typed in the options for every combination; -1 takes each combination's own
 	uncapped  bool                // the 1.4 limit was switched off: its uncapped strength is shown as a note only
-	selfW     bool
+	selfW     float64
 	ls        LoadSummary
 }
 
@@ -142,7 +142,7 @@ func buildConcrete(sc *Scheme, ls LoadSummary) ([]Family, error) {
 	for _, k := range kinds {
 		out = append(out, &concreteFamily{
 			kind: k, secs: e.secs[k], static: append([]Static(nil), e.static[k]...),
-			cond: cond, betaFixed: betaFixed, uncapped: !o.SecondOrderCap, selfW: sc.SelfWeight, ls: ls,
+			cond: cond, betaFixed: betaFixed, uncapped: !o.SecondOrderCap, selfW: selfStoreys(sc), ls: ls,
 		})
 	}
 	return out, nil

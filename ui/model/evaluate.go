@@ -137,16 +137,39 @@ func (r *Result) BestOverall() *Row {
 
 // SelfWeightN returns a candidate's service self-weight over the length, N.
 func (m *Model) SelfWeightN(st *Static, lengthMM float64) float64 {
-	return selfWeightN(m.Scheme.SelfWeight, st, lengthMM)
+	return selfWeightN(selfStoreys(&m.Scheme), st, lengthMM)
 }
 
-// selfWeightN is the service weight of a column over its length, N, or 0
-// when self-weight is switched off. The model and the adapters' traces share it.
-func selfWeightN(on bool, st *Static, lengthMM float64) float64 {
-	if !on {
+// selfStoreys is how many storeys of column weigh on the column checked:
+// 0 with self-weight off; with a takedown, the column itself and one above
+// each floor it carries (1 + floors), each of the same size and length as a
+// first estimate; with a typed load, the column alone (1).
+func selfStoreys(sc *Scheme) float64 {
+	switch {
+	case !sc.SelfWeight:
 		return 0
+	case sc.Load.Mode == LoadTakedown:
+		return float64(1 + sc.Load.Floors)
 	}
-	return st.MassKgPerM * Gravity * lengthMM / 1000
+	return 1
+}
+
+// SelfWeightWords says, after a demand, what self-weight is added to it:
+// "" with self-weight off.
+func SelfWeightWords(sc *Scheme) string {
+	switch n := selfStoreys(sc); {
+	case n == 0:
+		return ""
+	case n > 1:
+		return fmt.Sprintf(", plus each column's own weight and that of the %d columns of the same size above it (one per floor carried, as a first estimate)", int(n)-1)
+	}
+	return ", plus each column's own weight"
+}
+
+// selfWeightN is the service weight of n storeys of a column of the given
+// length, N (0 for n = 0). The model and the adapters' traces share it.
+func selfWeightN(n float64, st *Static, lengthMM float64) float64 {
+	return n * st.MassKgPerM * Gravity * lengthMM / 1000
 }
 
 // row evaluates one candidate.

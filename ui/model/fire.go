@@ -212,7 +212,7 @@ func fireHoursText(h float64) string { return strconv.FormatFloat(h, 'f', -1, 64
 type fireFamily struct {
 	Family
 	static []Static
-	selfW  bool
+	selfW  float64
 	ls     LoadSummary
 }
 
@@ -307,7 +307,7 @@ func applyFire(sc *Scheme, ls LoadSummary, fams []Family) ([]Family, error) {
 		wg.Add(1)
 		go func(fi int, f Family) { // one family per goroutine, as the build does
 			defer wg.Done()
-			w := &fireFamily{Family: f, static: make([]Static, f.Len()), selfW: sc.SelfWeight, ls: ls}
+			w := &fireFamily{Family: f, static: make([]Static, f.Len()), selfW: selfStoreys(sc), ls: ls}
 			for i := range w.static {
 				st, err := fireProtect(sc, f, i, hours)
 				if err != nil {

@@ -27,7 +27,7 @@ type steelFamily struct {
 	fam    steel.Family
 	cols   []steel.Column
 	static []Static
-	selfW  bool
+	selfW  float64
 	ls     LoadSummary
 }
 
@@ -56,7 +56,7 @@ func buildSteel(sc *Scheme, ls LoadSummary) ([]Family, error) {
 		if err != nil {
 			return nil, bad("steel Fy", o.FyMPa, "a yield stress from 200 to 700 MPa (29 to 100 ksi)")
 		}
-		out = append(out, &steelFamily{name: f.String(), fam: f, cols: p.cols, static: p.static, selfW: sc.SelfWeight, ls: ls})
+		out = append(out, &steelFamily{name: f.String(), fam: f, cols: p.cols, static: p.static, selfW: selfStoreys(sc), ls: ls})
 	}
 	return out, nil
 }

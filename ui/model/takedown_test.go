@@ -486,3 +486,28 @@ func FuzzTakedown(f *testing.F) {
 		checkSummaryFinite(t, l, ls)
 	})
 }
+
+// With a takedown, the self-weight reaching the column is its own and that
+// of one column of the same size above each floor carried (a first
+// estimate): 3 floors below the roof give 4 storeys of column. A typed load
+// counts the column alone. W10X49: 49 lb/ft = 72.9 kg/m (AISC Manual Table
+// 1-1, from memory); over 4 m, 4 × 72.9 × 9.80665 × 4 = 11.44 kN.
+func TestSelfWeightOfTheColumnsAbove(t *testing.T) {
+	sc := DefaultScheme()
+	sc.Materials = []string{"steel"}
+	sc.Load = Load{Mode: LoadTakedown, TributaryM2: 50, Floors: 3, FloorDeadKPa: 4, FloorLiveKPa: 2.4, RoofDeadKPa: 3}
+	m, err := New(sc)
+	require.NoError(t, err)
+	fi, i, ok := m.Find("W10X49")
+	require.True(t, ok)
+	st := m.Families[fi].Static(i)
+	assert.InDelta(t, 4*st.MassKgPerM*Gravity*4, m.SelfWeightN(st, 4000), 1e-9)
+	assert.InDelta(t, 11.44e3, m.SelfWeightN(st, 4000), 0.02e3, "4 storeys of W10X49 over 4 m")
+	assert.Contains(t, SelfWeightWords(&sc), "3 columns of the same size above")
+	sc.Load = Load{Mode: LoadDirect, DirectN: 1000e3}
+	m, err = New(sc)
+	require.NoError(t, err)
+	assert.InDelta(t, st.MassKgPerM*Gravity*4, m.SelfWeightN(st, 4000), 1e-9, "a typed load: the column alone")
+	sc.SelfWeight = false
+	assert.Empty(t, SelfWeightWords(&sc))
+}

@@ -43,7 +43,7 @@ type timberFamily struct {
 	cdFixed   float64    // ASD load duration factor typed in the options; 0 takes each combination's own
 	fastLRFD  []LoadCase // the LRFD combinations that can govern (dominantCases), for Quick
 	fastASD   []LoadCase // the ASD ones
-	selfW     bool
+	selfW     float64
 	ls        LoadSummary
 }
 
@@ -67,7 +67,7 @@ func buildTimber(sc *Scheme, ls LoadSummary) ([]Family, error) {
 		Fire: timber.Fire{Hours: sc.Fire.timberHours(), Sides: sides},
 	}
 	newFam := func(name string) *timberFamily {
-		f := &timberFamily{name: name, fire: base.Fire.On(), cdFixed: cdFixed, selfW: sc.SelfWeight, ls: ls}
+		f := &timberFamily{name: name, fire: base.Fire.On(), cdFixed: cdFixed, selfW: selfStoreys(sc), ls: ls}
 		f.fastLRFD = dominantCases(ls.LRFDCases, func(c *LoadCase) float64 { return f.timeOf(c, LRFD) })
 		f.fastASD = dominantCases(ls.ASDCases, func(c *LoadCase) float64 { return f.timeOf(c, ASD) })
 		return f

@@ -193,10 +193,7 @@ func summary(d *doc, f *facts) {
 	d.heading("Summary", 30)
 	text := fmt.Sprintf("At an unbraced length of %s with %s, the governing axial demand is %s",
 		f.both(units.Length, s.LengthMM), endsWords(s), demandWords(f))
-	if sc.SelfWeight {
-		text += ", plus each column's own weight"
-	}
-	text += "."
+	text += model.SelfWeightWords(&sc) + "."
 	if len(f.m.Families) == 0 {
 		d.para(text+" No material family is available in this build or switched on in the scheme, so there is nothing to compare.", "", sizeBody)
 		return
@@ -836,7 +833,7 @@ func assumptions(d *doc, f *facts) {
 	}
 	items = append(items, kItem)
 	if sc.SelfWeight {
-		items = append(items, "Self-weight: each column's own weight over its height is added to the demand as dead load, with the dead-load factor of every combination.")
+		items = append(items, "Self-weight: each column's own weight over its height"+strings.TrimPrefix(model.SelfWeightWords(&sc), ", plus each column's own weight")+" is added to the demand as dead load, with the dead-load factor of every combination.")
 	} else {
 		items = append(items, "Self-weight: the columns' own weight is not added to the demand.")
 	}

@@ -3,6 +3,7 @@ package composite
 import (
 	"fmt"
 	"math"
+	"strconv"
 
 	"upright/steel"
 )
@@ -181,7 +182,7 @@ func (c *Column) Check(in steel.Input) (Result, error) {
 // plain puts the governing mode in one sentence a client understands.
 func plain(c *Column, st Strength) string {
 	share := 100 * st.Pn / c.pno
-	fill := fmt.Sprintf("the %s filled with %g ksi concrete", c.Sec.Name, c.Mat.Fc)
+	fill := fmt.Sprintf("the %s filled with %s", c.Sec.Name, FillWords(c.Mat.Fc))
 	var how string
 	switch st.Mode.Regime() {
 	case Crushing:
@@ -213,4 +214,10 @@ func plain(c *Column, st Strength) string {
 		return "This column could not be checked."
 	}
 	return how + "."
+}
+
+// FillWords names the fill in the plain sentence, "5 ksi concrete", with
+// f'c rounded to 0.01 ksi; callers that show other units replace it.
+func FillWords(fcKsi float64) string {
+	return strconv.FormatFloat(math.Round(fcKsi*100)/100, 'f', -1, 64) + " ksi concrete"
 }

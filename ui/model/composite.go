@@ -3,6 +3,7 @@ package model
 import (
 	"math"
 	"strconv"
+	"strings"
 	"sync"
 
 	"upright/concrete"
@@ -26,6 +27,7 @@ type compositeFamily struct {
 	static []Static
 	selfW  float64
 	ls     LoadSummary
+	si     bool // the scheme shows SI units
 }
 
 // compositeFill returns the fill's f'c in MPa: the composite option, else
@@ -69,7 +71,7 @@ func buildComposite(sc *Scheme, ls LoadSummary) ([]Family, error) {
 		if err != nil {
 			return nil, bad("fill f'c", fcMPa, FillFcAccepted)
 		}
-		out = append(out, &compositeFamily{name: CompositeFamilies[i], cols: p.cols, static: p.static, selfW: selfStoreys(sc), ls: ls})
+		out = append(out, &compositeFamily{name: CompositeFamilies[i], cols: p.cols, static: p.static, selfW: selfStoreys(sc), ls: ls, si: sc.Units == SI})
 	}
 	return out, nil
 }
@@ -204,6 +206,9 @@ func (f *compositeFamily) Detail(i int, s Setting) Detail {
 		},
 		Warnings: r.Warnings,
 		Plain:    r.Plain,
+	}
+	if f.si { // the fill in the scheme's units
+		d.Plain = strings.Replace(d.Plain, composite.FillWords(c.Mat.Fc), compositeFcLabel(c.Mat.Fc, true)+" concrete", 1)
 	}
 	if compositePastLimit(&c.Sec, r.Lcx, r.Lcy) {
 		d.Limit = LimitComposite

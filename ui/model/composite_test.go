@@ -198,3 +198,17 @@ func BenchmarkCompositeFamilyQuick(b *testing.B) {
 	}
 	b.ReportMetric(float64(n), "candidates")
 }
+
+// In SI the plain sentence names the fill in MPa, rounded as the
+// designation is (a 35 MPa fill, not 5.0763208205573225 ksi).
+func TestCompositePlainFillInSchemeUnits(t *testing.T) {
+	sc := DefaultScheme()
+	sc.Units = SI
+	sc.Materials = []string{"composite"}
+	sc.Composite.FillFcMPa = 35
+	m, err := New(sc)
+	require.NoError(t, err)
+	d := m.Detail(0, 0, sc.Setting)
+	assert.Contains(t, d.Plain, "35 MPa concrete")
+	assert.NotContains(t, d.Plain, "ksi")
+}

@@ -239,10 +239,7 @@ func successiveBests(es []reachEntry) []reachEntry {
 		}
 	}
 	sort.SliceStable(sorted, func(a, b int) bool {
-		if sorted[a].score != sorted[b].score {
-			return sorted[a].score < sorted[b].score
-		}
-		return sorted[a].name < sorted[b].name
+		return Ahead(sorted[a].score, sorted[a].name, sorted[b].score, sorted[b].name)
 	})
 	var bests []reachEntry
 	for k := range sorted {

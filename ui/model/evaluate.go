@@ -124,11 +124,12 @@ type Result struct {
 	Families []FamilyResult
 }
 
-// BestOverall returns the best working row across families by the metric, or nil.
+// BestOverall returns the best working row across families by the metric,
+// exact ties broken by Ahead, or nil.
 func (r *Result) BestOverall() *Row {
 	var best *Row
 	for i := range r.Families {
-		if b := r.Families[i].Best(); b != nil && (best == nil || b.Score < best.Score) {
+		if b := r.Families[i].Best(); b != nil && (best == nil || Ahead(b.Score, b.Static.Designation, best.Score, best.Static.Designation)) {
 			best = b
 		}
 	}

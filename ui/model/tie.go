@@ -65,7 +65,9 @@ func (r *Result) NearTies(tie float64) []*Row {
 			out = append(out, b)
 		}
 	}
-	sort.SliceStable(out, func(a, b int) bool { return out[a].Score < out[b].Score })
+	sort.SliceStable(out, func(a, b int) bool {
+		return Ahead(out[a].Score, out[a].Static.Designation, out[b].Score, out[b].Static.Designation)
+	})
 	return out
 }
 
@@ -168,6 +170,29 @@ func (m *Model) familyChanges(reaches [][]reachEntry, tie float64) []Crossover {
 		out = append(out, x)
 		inc = g
 	}
+	return mergeShortReigns(out)
+}
+
+// mergeShortReigns drops a family's reign shorter than ToleranceMM, the
+// accuracy the lengths are found to: A → B at t1 and B → C at t2 < t1 +
+// ToleranceMM become A → C at t1 (and vanish when C is A). The end of the
+// list (nothing works beyond) is kept.
+func mergeShortReigns(xs []Crossover) []Crossover {
+	out := xs[:0:0]
+	for _, x := range xs {
+		n := len(out)
+		if n > 0 && x.To != "" && out[n-1].To == x.From && x.LengthMM-out[n-1].LengthMM < ToleranceMM {
+			prev := out[n-1]
+			if prev.From == x.To {
+				out = out[:n-1] // A → B → A: B never held for a measurable length
+				continue
+			}
+			prev.Family, prev.To, prev.ToDesignation, prev.NearTies = x.Family, x.To, x.ToDesignation, x.NearTies
+			out[n-1] = prev
+			continue
+		}
+		out = append(out, x)
+	}
 	return out
 }
 
@@ -184,4 +209,15 @@ func (m *Model) NearTieNote(res *Result) string {
 		parts[i] = m.Families[r.Family].Name() + " (" + r.Static.Designation + ")"
 	}
 	return TieText(m.Scheme.Tie) + ": " + strings.Join(parts, ", ")
+}
+
+// Ahead reports whether a candidate of score sa and designation da ranks
+// before one of score sb and designation db: the lower score, and on an
+// exact tie the designation first in byte order. It is the one rule for
+// exact ties, used by the table, the best overall, the crossovers and the map.
+func Ahead(sa float64, da string, sb float64, db string) bool {
+	if sa != sb {
+		return sa < sb
+	}
+	return da < db
 }

@@ -104,3 +104,34 @@ func TestTieField(t *testing.T) {
 		assert.Contains(t, err.Error(), "tie")
 	}
 }
+
+// One rule for exact ties: the lower score, then the designation first in
+// byte order, wherever candidates are ranked (common practice: a stable,
+// documented tie-break).
+func TestAheadBreaksExactTiesByDesignation(t *testing.T) {
+	assert.True(t, Ahead(1, "b", 2, "a"), "lower score first")
+	assert.True(t, Ahead(2, "a", 2, "b"), "exact tie: designation")
+	assert.False(t, Ahead(2, "b", 2, "a"))
+	assert.False(t, Ahead(2, "a", 2, "a"), "equal is not ahead")
+	r := Result{Families: []FamilyResult{
+		{Family: 0, Working: 1, Rows: []Row{{Family: 0, OK: true, Score: 10, Static: &Static{Designation: "W8X10"}}}},
+		{Family: 1, Working: 1, Rows: []Row{{Family: 1, OK: true, Score: 10, Static: &Static{Designation: "HSS4X4X1/4"}}}},
+	}}
+	assert.Equal(t, "HSS4X4X1/4", r.BestOverall().Static.Designation, "the map's rule: designation on an exact tie, whatever the family order")
+}
+
+// A family that leads for less than the search tolerance (ToleranceMM, the
+// accuracy crossover lengths are found to) is not listed as a reign.
+func TestMergeShortReigns(t *testing.T) {
+	xs := []Crossover{
+		{Kind: KindFamily, LengthMM: 3000, From: "A", To: "B", Family: "B", ToDesignation: "b1"},
+		{Kind: KindFamily, LengthMM: 3003, From: "B", To: "C", Family: "C", ToDesignation: "c1"},
+		{Kind: KindFamily, LengthMM: 5000, From: "C", To: "A", Family: "A", ToDesignation: "a2"},
+		{Kind: KindFamily, LengthMM: 5002, From: "A", To: "C", Family: "C", ToDesignation: "c2"},
+		{Kind: KindFamily, LengthMM: 7000, From: "C"},
+	}
+	got := mergeShortReigns(xs)
+	require.Len(t, got, 2)
+	assert.Equal(t, Crossover{Kind: KindFamily, LengthMM: 3000, From: "A", To: "C", Family: "C", ToDesignation: "c1"}, got[0])
+	assert.Equal(t, 7000.0, got[1].LengthMM, "nothing works beyond: kept")
+}

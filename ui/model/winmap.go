@@ -272,10 +272,7 @@ func (mp *Mapper) Compute(ctx context.Context, sc Scheme, sp MapSpec, progress f
 		}
 		score := base.scores[fi]
 		sort.SliceStable(o, func(a, b int) bool {
-			if score[o[a]] != score[o[b]] {
-				return score[o[a]] < score[o[b]]
-			}
-			return f.Static(o[a]).Designation < f.Static(o[b]).Designation
+			return Ahead(score[o[a]], f.Static(o[a]).Designation, score[o[b]], f.Static(o[b]).Designation)
 		})
 		order[fi] = o
 	}
@@ -442,7 +439,7 @@ func (wk *mapWorker) row(ctx context.Context, base *Model, sc Scheme, axis MapAx
 			}
 			s := m.scores[fi][k]
 			d := m.Families[fi].Static(k).Designation
-			if wk.strict[j] < 0 || s < cs || (s == cs && d < cd) {
+			if wk.strict[j] < 0 || Ahead(s, d, cs, cd) {
 				wk.strict[j], cs, cd = fi, s, d
 			}
 		}

@@ -119,6 +119,19 @@ type Bar struct {
 // Name returns the bar size as written on drawings, e.g. "#9".
 func (b Bar) Name() string { return "#" + strconv.Itoa(b.Size) }
 
+// softMetric maps an inch-pound bar number to its soft-metric designation
+// of ASTM A615M, the same bar (from memory).
+var softMetric = map[int]int{3: 10, 4: 13, 5: 16, 6: 19, 7: 22, 8: 25, 9: 29, 10: 32, 11: 36, 14: 43, 18: 57}
+
+// MetricName returns the bar's soft-metric name, e.g. "#29" for #9 (ASTM
+// A615M, from memory); a size without one keeps its inch-pound name.
+func (b Bar) MetricName() string {
+	if m, ok := softMetric[b.Size]; ok {
+		return "#" + strconv.Itoa(m)
+	}
+	return b.Name()
+}
+
 func bar(size int, diaIn, areaIn2 float64) Bar {
 	return Bar{Size: size, DiaMM: diaIn * MMPerInch, AreaMM2: areaIn2 * MMPerInch * MMPerInch}
 }

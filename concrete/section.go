@@ -270,14 +270,14 @@ func (s *Section) layout() error {
 		e := s.CoverMM + s.Tie.DiaMM + db/2 // face to bar centre
 		bc, hc := s.WidthMM-2*e, s.DepthMM-2*e
 		if bc <= db || hc <= db {
-			return badInput("bars", float64(s.NBars), "bars that fit inside the ties: this section is too small for "+s.Bar.Name()+" bars")
+			return badInput("bars", float64(s.NBars), "bars that fit inside the ties: this section is too small for "+s.BarName(s.Bar)+" bars")
 		}
 		nx, ny, sx, sy := rectArrangement(s.NBars, bc, hc, s.WidthMM == s.DepthMM)
 		s.NX, s.NY = nx, ny
 		s.ClearMM = math.Min(sx, sy) - db
 		if s.ClearMM < s.MinClearMM-1e-9 {
 			return badInput("bars", float64(s.NBars), "bars that fit at the ACI 318-19 25.2.3 clear spacing of "+
-				strconv.FormatFloat(s.MinClearMM, 'f', 1, 64)+" mm: "+strconv.Itoa(s.NBars)+" "+s.Bar.Name()+" bars leave "+
+				strconv.FormatFloat(s.MinClearMM, 'f', 1, 64)+" mm: "+strconv.Itoa(s.NBars)+" "+s.BarName(s.Bar)+" bars leave "+
 				strconv.FormatFloat(s.ClearMM, 'f', 1, 64)+" mm")
 		}
 		xs := make([][2]float64, 0, s.NBars)
@@ -298,13 +298,13 @@ func (s *Section) layout() error {
 		}
 		rb := s.WidthMM/2 - s.CoverMM - s.Tie.DiaMM - db/2 // radius to bar centres
 		if rb <= db {
-			return badInput("bars", float64(s.NBars), "bars that fit inside the ties or spiral: this section is too small for "+s.Bar.Name()+" bars")
+			return badInput("bars", float64(s.NBars), "bars that fit inside the ties or spiral: this section is too small for "+s.BarName(s.Bar)+" bars")
 		}
 		chord := 2 * rb * math.Sin(math.Pi/float64(s.NBars))
 		s.ClearMM = chord - db
 		if s.ClearMM < s.MinClearMM-1e-9 {
 			return badInput("bars", float64(s.NBars), "bars that fit at the ACI 318-19 25.2.3 clear spacing of "+
-				strconv.FormatFloat(s.MinClearMM, 'f', 1, 64)+" mm: "+strconv.Itoa(s.NBars)+" "+s.Bar.Name()+" bars leave "+
+				strconv.FormatFloat(s.MinClearMM, 'f', 1, 64)+" mm: "+strconv.Itoa(s.NBars)+" "+s.BarName(s.Bar)+" bars leave "+
 				strconv.FormatFloat(s.ClearMM, 'f', 1, 64)+" mm")
 		}
 		xs := make([][2]float64, s.NBars)
@@ -452,5 +452,14 @@ func (s *Section) designation() string {
 	if s.Grade == 80 {
 		g = " Gr 80"
 	}
-	return size + " " + tr + ", " + strconv.Itoa(s.NBars) + " " + s.Bar.Name() + g + ", " + fc
+	return size + " " + tr + ", " + strconv.Itoa(s.NBars) + " " + s.BarName(s.Bar) + g + ", " + fc
+}
+
+// BarName names a bar in the section's series: inch-pound (#9) for US
+// sizes, soft metric (#29) for SI sizes.
+func (s *Section) BarName(b Bar) string {
+	if s.Series == SeriesSI {
+		return b.MetricName()
+	}
+	return b.Name()
 }

@@ -82,17 +82,17 @@ func (s *Section) Evaluate(c Conditions) (Result, error) {
 	if s.Shape == Circular {
 		minBars = "at least 6 bars around a round section"
 	}
-	add("ACI 318-19 10.7.3.1", "bars", fmt.Sprintf("%d %s, %s", s.NBars, s.Bar.Name(), minBars), float64(s.NBars), "")
+	add("ACI 318-19 10.7.3.1", "bars", fmt.Sprintf("%d %s, %s", s.NBars, s.BarName(s.Bar), minBars), float64(s.NBars), "")
 	add("ASTM A615 (bar dimensions from memory)", "Ast", fmt.Sprintf("%d × %.0f mm²", s.NBars, s.Bar.AreaMM2), s.AstMM2, "mm2")
 	add("ACI 318-19 10.6.1.1", "ρg", "Ast/Ag, from 0.01 to 0.08", s.Rho, "")
 	add("ACI 318-19 20.5.1.3.1", "cover", "clear cover to the ties or spiral", s.CoverMM, "mm")
 	add("ACI 318-19 25.2.3", "clear spacing", fmt.Sprintf("at least max(1.5 in, 1.5db, 4/3 × 3/4 in aggregate) = %.1f mm", s.MinClearMM), s.ClearMM, "mm")
 	if s.Transverse == Tied {
-		add("ACI 318-19 25.7.2.2", "tie", s.Tie.Name()+" ties (#3 for bars #10 and smaller, #4 for #11, #14, #18)", s.Tie.DiaMM, "mm")
+		add("ACI 318-19 25.7.2.2", "tie", s.BarName(s.Tie)+" ties (#3 for bars #10 and smaller, #4 for #11, #14, #18)", s.Tie.DiaMM, "mm")
 		add("ACI 318-19 25.7.2.1", "tie spacing", "min(16db, 48dtie, least dimension)", s.TieSpaceMM, "mm")
 	} else {
 		add("ACI 318-19 Eq. 25.7.3.3", "ρs,min", "0.45(Ag/Ach − 1)f'c/fyt", s.RhoSMin, "")
-		add("ACI 318-19 25.7.3.1", "spiral pitch", s.Tie.Name()+" spiral, clear spacing 1 in to 3 in", s.TieSpaceMM, "mm")
+		add("ACI 318-19 25.7.3.1", "spiral pitch", s.BarName(s.Tie)+" spiral, clear spacing 1 in to 3 in", s.TieSpaceMM, "mm")
 		add("ACI 318-19 25.7.3.3", "ρs", "4Asp/(Dch·s)", s.RhoS, "")
 	}
 

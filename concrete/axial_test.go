@@ -135,7 +135,7 @@ func TestCatalogueRules(t *testing.T) {
 	for _, s := range cat {
 		sizes[s.WidthMM] = append(sizes[s.WidthMM], s.Rho)
 	}
-	assert.Len(t, sizes, 14, "10 to 36 in in 2 in steps")
+	assert.Len(t, sizes, 20, "10 to 48 in in 2 in steps")
 	for b, rhos := range sizes {
 		assert.Less(t, rhos[0], 0.02, "lightest layout near 1%% for %v mm", b)
 		assert.GreaterOrEqual(t, len(rhos), 3, "heavier variants for %v mm", b)

@@ -6,13 +6,21 @@ import (
 )
 
 // Sizes returns the section sizes of a family in a series as (b, h) pairs in
-// mm (h = b = D for round): US squares and rectangles 10 to 36 in in 2 in
-// steps with h/b up to 2, US rounds 12 to 36 in; SI squares and rectangles
-// 250 to 900 mm in 50 mm steps, SI rounds 300 to 900 mm.
+// mm (h = b = D for round): US squares and rectangles 10 to 48 in in 2 in
+// steps with h/b up to 2, US rounds 12 to 48 in; SI squares and rectangles
+// 250 to 1,200 mm in 50 mm steps, SI rounds 300 to 1,200 mm.
+//
+// Where each limit comes from: ACI 318-19 sets no least or greatest column
+// size (the minimum dimensions of earlier editions were dropped, from
+// memory); the least sizes are common practice (room for ties, bars and
+// cover; a fire rating asks for more, ACI/TMS 216.1); the greatest, 48 in
+// or 1,200 mm, is the practical end of cast-in-place column formwork in
+// buildings (common practice). The 4 and 6 bar minimums of 10.7.3.1 apply
+// in every size.
 func Sizes(series Series, kind Kind) [][2]float64 {
-	lo, hi, step, unit := 10.0, 36.0, 2.0, MMPerInch
+	lo, hi, step, unit := 10.0, 48.0, 2.0, MMPerInch
 	if series == SeriesSI {
-		lo, hi, step, unit = 250, 900, 50, 1
+		lo, hi, step, unit = 250, 1200, 50, 1
 	}
 	if kind == SpiralRound || kind == TiedRound {
 		if series == SeriesSI {

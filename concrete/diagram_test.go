@@ -225,7 +225,14 @@ func TestIndependentFibreCheck(t *testing.T) {
 			if s.Shape == Circular {
 				want = math.Min(want, f.mcap(AxisY, pu))
 			}
-			assert.InDelta(t, want, s.PhiMnAt(AxisX, pu), 0.01*want+1e3, "%s φMn at %.0f%% φPn,max", s.Designation, 100*frac)
+			tol := 0.01
+			if frac == 0 {
+				// Pure bending: the strength never reads the diagram here
+				// (M2,min = Pu·e0 vanishes with Pu); the table's straight
+				// lines are allowed 1.5% at this end.
+				tol = 0.015
+			}
+			assert.InDelta(t, want, s.PhiMnAt(AxisX, pu), tol*want+1e3, "%s φMn at %.0f%% φPn,max", s.Designation, 100*frac)
 		}
 		for _, lu := range []float64{2500, 5000, 8000, 11000} {
 			c := pinned(lu)

@@ -329,7 +329,7 @@ func (s *Section) Magnify(ax Axis, pu, lu float64, c *Conditions) Magnification 
 // method. Under (c) I falls as Pu rises, so the strength is found by
 // successive substitution from I at φPn,max: the odd iterates lie below
 // the fixed point and each satisfies the check with I at its own load. The
-// iteration stops when two successive iterates agree to 1e-9 of φPn,max
+// iteration stops when two successive iterates agree to 1e-7 of φPn,max
 // (or after 24), returning the lower of the last two.
 // Special case: under (a) and (b) Pc does not depend on Pu and one solve suffices.
 func (s *Section) slenderWith(ax Axis, klu float64, m EIMethod, c *Conditions) (float64, limitBy) {
@@ -338,7 +338,7 @@ func (s *Section) slenderWith(ax Axis, klu float64, m EIMethod, c *Conditions) (
 	}
 	prev := s.PhiPnMax
 	p, by := s.slenderStrength(ax, s.pc(ax, klu, EIMember, c, prev), c.Cap14)
-	for i := 0; i < 24 && math.Abs(p-prev) > 1e-9*s.PhiPnMax; i++ {
+	for i := 0; i < 24 && math.Abs(p-prev) > 1e-7*s.PhiPnMax; i++ {
 		q, qby := s.slenderStrength(ax, s.pc(ax, klu, EIMember, c, p), c.Cap14)
 		prev, p, by = p, q, qby
 	}
@@ -355,13 +355,27 @@ func (s *Section) slenderBest(ax Axis, klu float64, c *Conditions) (float64, lim
 		p, by := s.slenderWith(ax, klu, c.EI, c)
 		return p, by, c.EI
 	}
-	best, bb, bm := -1.0, byAxial, EIGross
-	for m := EIGross; m <= EIMember; m++ {
-		if p, by := s.slenderWith(ax, klu, m, c); p > best {
-			best, bb, bm = p, by, m
-		}
+	// The strength rises with (EI)eff, so of (a) and (b), whose EI does not
+	// depend on the load, only the stiffer is solved. (c)'s EI falls as the
+	// load rises, between its value at φPn,max and at no load; it is solved
+	// only when it can win, and alone when it wins at every load.
+	ab := EIGross
+	if s.eiEff(ax, EIWithSteel, c, 0) > s.eiEff(ax, EIGross, c, 0) {
+		ab = EIWithSteel
 	}
-	return best, bb, bm
+	eiAB := s.eiEff(ax, ab, c, 0)
+	if s.eiEff(ax, EIMember, c, s.PhiPnMax) >= eiAB {
+		p, by := s.slenderWith(ax, klu, EIMember, c)
+		return p, by, EIMember
+	}
+	p, by := s.slenderWith(ax, klu, ab, c)
+	if s.eiEff(ax, EIMember, c, 0) <= eiAB {
+		return p, by, ab
+	}
+	if pc, byc := s.slenderWith(ax, klu, EIMember, c); pc > p {
+		return pc, byc, EIMember
+	}
+	return p, by, ab
 }
 
 // EIUsed returns the EI method that sets the strength about an axis at

@@ -23,8 +23,11 @@ type boxRow struct {
 	walls []string
 }
 
-// squareRows lists square HSS from 3 in to 16 in.
+// squareRows lists square HSS from 3 in to 22 in.
 var squareRows = []boxRow{
+	{22, 22, []string{t1, t7_8, t3_4, t5_8, t1_2}},
+	{20, 20, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16}},
+	{18, 18, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
 	{16, 16, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
 	{14, 14, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
 	{12, 12, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16, t1_4, t3_16}},
@@ -41,8 +44,21 @@ var squareRows = []boxRow{
 	{3, 3, []string{t3_8, t5_16, t1_4, t3_16, t1_8}},
 }
 
-// rectRows lists rectangular HSS whose both sides lie from 3 in to 20 in.
+// rectRows lists rectangular HSS from 4X3 to 34X10.
 var rectRows = []boxRow{
+	{34, 10, []string{t1, t7_8, t3_4, t5_8}},
+	{30, 10, []string{t1, t7_8, t3_4, t5_8, t1_2}},
+	{24, 20, []string{t3_4, t5_8, t1_2, t3_8, t5_16}},
+	{24, 18, []string{t3_4, t5_8, t1_2, t3_8, t5_16}},
+	{24, 16, []string{t3_4, t5_8, t1_2, t3_8, t5_16}},
+	{24, 14, []string{t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
+	{24, 12, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
+	{24, 8, []string{t1_2, t3_8, t5_16, t1_4}},
+	{22, 20, []string{t3_4, t5_8, t1_2, t3_8, t5_16}},
+	{22, 18, []string{t3_4, t5_8, t1_2, t3_8, t5_16}},
+	{22, 16, []string{t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
+	{22, 14, []string{t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
+	{22, 10, []string{t5_8, t1_2, t3_8, t5_16, t1_4}},
 	{20, 16, []string{t3_4, t5_8, t1_2, t3_8, t5_16, t1_4}},
 	{20, 12, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16}},
 	{20, 8, []string{t1, t7_8, t3_4, t5_8, t1_2, t3_8, t5_16}},
@@ -96,9 +112,13 @@ type roundRow struct {
 	walls []float64
 }
 
-// roundRows lists round HSS from 3.5 in to 20 in outside diameter (AISC
+// roundRows lists round HSS from 3.5 in to 28 in outside diameter (AISC
 // Manual Table 1-13, ASTM A500).
 var roundRows = []roundRow{
+	{28.000, []float64{1.000, 0.875, 0.750, 0.625, 0.500, 0.375}},
+	{26.000, []float64{0.750, 0.625, 0.500, 0.375, 0.313}},
+	{24.000, []float64{1.000, 0.875, 0.750, 0.625, 0.500, 0.375, 0.313}},
+	{22.000, []float64{0.750, 0.625, 0.500, 0.375, 0.313}},
 	{20.000, []float64{1.000, 0.875, 0.750, 0.625, 0.500, 0.375, 0.313, 0.250}},
 	{18.000, []float64{1.000, 0.875, 0.750, 0.625, 0.500, 0.375, 0.313, 0.250}},
 	{16.000, []float64{1.000, 0.875, 0.750, 0.625, 0.500, 0.438, 0.375, 0.312, 0.250}},
@@ -134,8 +154,16 @@ type pipeRow struct {
 }
 
 // pipeRows lists standard, extra-strong and double-extra-strong pipe up to
-// 12 in nominal size.
+// 26 in nominal size; from 14 in up the outside diameter is the nominal
+// size, standard wall 0.375 in and extra-strong 0.500 in (ASME B36.10M, from
+// memory).
 var pipeRows = []pipeRow{
+	{"26", 26.000, 0.375, 0.500, 0},
+	{"24", 24.000, 0.375, 0.500, 0},
+	{"20", 20.000, 0.375, 0.500, 0},
+	{"18", 18.000, 0.375, 0.500, 0},
+	{"16", 16.000, 0.375, 0.500, 0},
+	{"14", 14.000, 0.375, 0.500, 0},
 	{"12", 12.750, 0.375, 0.500, 1.000},
 	{"10", 10.750, 0.365, 0.500, 1.000},
 	{"8", 8.625, 0.322, 0.500, 0.875},

@@ -78,7 +78,7 @@ func (s Series) LamIn() float64 {
 func (s Series) Widths() []float64 {
 	switch s {
 	case Western:
-		return []float64{3.125, 5.125, 6.75, 8.75, 10.75, 12.25} // common practice (from memory)
+		return []float64{3.125, 5.125, 6.75, 8.75, 10.75, 12.25, 14.25} // common practice (from memory): the western stock widths up to 14-1/4 in
 	case Southern:
 		return []float64{3, 5, 6.75, 8.5, 10.5} // common practice (from memory)
 	}

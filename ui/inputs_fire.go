@@ -14,12 +14,14 @@ import (
 var (
 	fireRatingChoices = []choice{{"None", "none"}, {"1 hour", "1h"}, {"1½ hours", "1.5h"}, {"2 hours", "2h"}, {"3 hours", "3h"}}
 	aggregateChoices  = []choice{{"Siliceous", "siliceous"}, {"Carbonate", "carbonate"}, {"Semi-lightweight", "semi-lightweight"}}
+	protectionChoices = []choice{{"Gypsum board box", "board"}, {"Sprayed material", "spray"}}
 )
 
 // fireWidgets are the inputs of the scheme's one fire-resistance rating.
 type fireWidgets struct {
-	rating    *widget.Select
-	aggregate *widget.Select
+	rating     *widget.Select
+	aggregate  *widget.Select
+	protection *widget.Select // steel (and filled tubes that need it): board or spray
 }
 
 // buildFireInputs makes the fire-resistance group: the rating every
@@ -31,11 +33,15 @@ func (w *Window) buildFireInputs() fyne.CanvasObject {
 	w.fire.aggregate = widget.NewSelect(labels(aggregateChoices), func(s string) {
 		w.change(func(sc *model.Scheme) { sc.Fire.Aggregate = valueOf(aggregateChoices, s) })
 	})
-	note := small("Steel boxed in Type X gypsum board, concrete least size and cover, timber char. Calculated methods for comparison; listed assemblies and the local code govern.")
+	w.fire.protection = widget.NewSelect(labels(protectionChoices), func(s string) {
+		w.change(func(sc *model.Scheme) { sc.Fire.SteelProtection = valueOf(protectionChoices, s) })
+	})
+	note := small("Steel boxed in Type X gypsum board or sprayed, concrete least size and cover, timber char. Calculated methods for comparison; listed assemblies and the local code govern.")
 	note.Wrapping = fyne.TextWrapWord
 	return container.NewVBox(heading("Fire resistance"),
 		row("Rating", w.fire.rating),
 		row("Concrete aggregate", w.fire.aggregate),
+		row("Steel protection", w.fire.protection),
 		note,
 	)
 }
@@ -48,6 +54,7 @@ func (w *Window) syncFire() {
 	d := &w.st.Draft
 	w.fire.rating.SetSelected(labelOf(fireRatingChoices, d.Fire.Rating))
 	w.fire.aggregate.SetSelected(labelOf(aggregateChoices, d.Fire.Aggregate))
+	w.fire.protection.SetSelected(labelOf(protectionChoices, d.Fire.SteelProtection))
 }
 
 // fireNote is the line under the table note on the fire rating: empty without one.

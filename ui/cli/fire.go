@@ -45,6 +45,6 @@ func printFireLine(w io.Writer, sc model.Scheme) {
 	if !sc.Fire.On() {
 		return
 	}
-	fmt.Fprintf(w, "Fire rating %s h for every material (concrete: %s aggregate): plan, weight and carbon include the protection; sizes that cannot reach it are not permitted\n",
-		strconv.FormatFloat(sc.Fire.Hours(), 'f', -1, 64), sc.Fire.Aggregate)
+	fmt.Fprintf(w, "Fire rating %s h for every material (steel: %s; filled tubes exposed by IBC 722.5.1.5 where it applies, else as steel; concrete: %s aggregate): plan, weight and carbon include the protection; sizes that cannot reach it are not permitted\n",
+		strconv.FormatFloat(sc.Fire.Hours(), 'f', -1, 64), map[string]string{"board": "gypsum board", "spray": "sprayed material"}[sc.Fire.SteelProtection], sc.Fire.Aggregate)
 }

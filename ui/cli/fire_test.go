@@ -88,7 +88,7 @@ func TestCompareFireListsFewerOrLarger(t *testing.T) {
 func TestCompareFireTextSaysRating(t *testing.T) {
 	code, out, errOut := run("compare", "--length", "4m", "--load", "1500kN", "--fire", "1.5h", "--aggregate", "carbonate")
 	require.Equal(t, 0, code, errOut)
-	assert.Contains(t, out, "Fire rating 1.5 h for every material (concrete: carbonate aggregate)")
+	assert.Contains(t, out, "Fire rating 1.5 h for every material (steel: gypsum board; filled tubes exposed by IBC 722.5.1.5 where it applies, else as steel; concrete: carbonate aggregate)")
 	code, out, _ = run("compare", "--length", "4m", "--load", "1500kN")
 	require.Equal(t, 0, code)
 	assert.False(t, strings.Contains(out, "Fire rating"))

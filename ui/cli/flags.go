@@ -46,6 +46,7 @@ type schemeFlags struct {
 
 	fillFc, compositeFamilies string
 	aggregate                 string // concrete aggregate for the fire rating
+	steelProtection           string // board or spray
 	tie                       string
 }
 
@@ -100,6 +101,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.BoolVar(&f.incised, "incised", false, "incised sawn lumber")
 	fs.BoolVar(&f.hot, "hot", false, "timber at sustained temperature 100 to 125 °F")
 	fs.StringVar(&f.fire, "fire", "", "fire-resistance rating for every material: none, 1h, 1.5h, 2h, 3h (steel boxed in gypsum board, concrete least size and cover, timber char)")
+	fs.StringVar(&f.steelProtection, "steel-protection", "", "fire protection of steel and of filled tubes that need it: board (Type X gypsum board, IBC 722.5.1.2; the default) or spray (sprayed fire-resistive material, IBC 722.5.1.3)")
 	fs.StringVar(&f.aggregate, "aggregate", "", "concrete aggregate for the fire rating: siliceous (default), carbonate, semi-lightweight")
 	fs.StringVar(&f.fireSides, "fire-sides", "", "timber sides exposed to fire: 3 or 4")
 	fs.StringVar(&f.duration, "duration", "", "ASD load duration: permanent, ten-years, two-months, seven-days, ten-minutes; each combination takes the lower of its CD and this one, so it never raises a combination's CD (default: each combination's own)")
@@ -505,6 +507,13 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 			return usagef("--fire %q: not accepted; give %s", f.fire, model.FireRatingsAccepted)
 		}
 		sc.Fire.Rating = r
+	}
+	if f.set("steel-protection") {
+		p := strings.ToLower(strings.TrimSpace(f.steelProtection))
+		if p != "board" && p != "spray" {
+			return usagef("--steel-protection %q: not accepted; give %s", f.steelProtection, model.SteelProtectionAccepted)
+		}
+		sc.Fire.SteelProtection = p
 	}
 	if f.aggregate != "" {
 		a, err := model.ParseFireAggregate("--aggregate", f.aggregate)

@@ -2,13 +2,14 @@ package model
 
 // Carbon kinds: the keys of CarbonFactors and of Constituent.Kind.
 const (
-	CarbonRolledSteel = "rolled-steel" // CarbonRolledSteel is hot-rolled structural sections, per kg.
-	CarbonHSSSteel    = "hss-steel"    // CarbonHSSSteel is hollow structural sections, per kg.
-	CarbonRebar       = "rebar"        // CarbonRebar is steel reinforcing bar, per kg.
-	CarbonConcrete    = "concrete"     // CarbonConcrete is ready-mixed concrete, per m³.
-	CarbonSawnTimber  = "sawn-timber"  // CarbonSawnTimber is sawn softwood lumber and timbers, per m³.
-	CarbonGlulam      = "glulam"       // CarbonGlulam is glued-laminated timber, per m³.
-	CarbonGypsum      = "gypsum-board" // CarbonGypsum is Type X gypsum board of a fire enclosure, per kg.
+	CarbonRolledSteel = "rolled-steel"            // CarbonRolledSteel is hot-rolled structural sections, per kg.
+	CarbonHSSSteel    = "hss-steel"               // CarbonHSSSteel is hollow structural sections, per kg.
+	CarbonRebar       = "rebar"                   // CarbonRebar is steel reinforcing bar, per kg.
+	CarbonConcrete    = "concrete"                // CarbonConcrete is ready-mixed concrete, per m³.
+	CarbonSawnTimber  = "sawn-timber"             // CarbonSawnTimber is sawn softwood lumber and timbers, per m³.
+	CarbonGlulam      = "glulam"                  // CarbonGlulam is glued-laminated timber, per m³.
+	CarbonGypsum      = "gypsum-board"            // CarbonGypsum is Type X gypsum board of a fire enclosure, per kg.
+	CarbonSFRM        = "sprayed-fire-protection" // CarbonSFRM is sprayed fire-resistive material, per kg.
 )
 
 // CarbonKind describes one kind of material for embodied carbon.
@@ -28,6 +29,7 @@ var CarbonKinds = []CarbonKind{
 	{CarbonSawnTimber, "Sawn timber", "m³", "kg CO2e/m³"},
 	{CarbonGlulam, "Glued-laminated timber", "m³", "kg CO2e/m³"},
 	{CarbonGypsum, "Gypsum board (fire enclosure)", "kg", "kg CO2e/kg"},
+	{CarbonSFRM, "Sprayed fire-resistive material", "kg", "kg CO2e/kg"},
 }
 
 // defaultCarbon holds the cradle-to-gate (A1–A3) defaults; DefaultCarbon
@@ -56,6 +58,9 @@ var defaultCarbon = CarbonFactors{
 	// board: about 280 kg CO2e per 1,000 ft² at about 2.5 lb/ft², so
 	// 0.25 kg CO2e/kg (from memory).
 	CarbonGypsum: 0.25,
+	// Cementitious sprayed fire-resistive material, gypsum- or cement-based:
+	// about 0.4 kg CO2e/kg (rough figure from memory; use the product EPD).
+	CarbonSFRM: 0.4,
 }
 
 // DefaultCarbon returns a fresh copy of the default cradle-to-gate (A1–A3)

@@ -22,6 +22,7 @@ func TestCarbonDefaults(t *testing.T) {
 		{CarbonSawnTimber, 63, 20, 300, "AWC/CWC industry-average EPD, softwood lumber (from memory)"},
 		{CarbonGlulam, 137, 50, 400, "AWC/CWC industry-average EPD, glulam (from memory)"},
 		{CarbonGypsum, 0.25, 0.1, 1, "Gypsum Association industry-average EPD, 5/8 in Type X board (from memory)"},
+		{CarbonSFRM, 0.4, 0.1, 1.5, "cementitious sprayed fire-resistive material, rough figure (from memory)"},
 	}
 	d := DefaultCarbon()
 	require.Len(t, d, len(rows))

@@ -16,7 +16,18 @@ import (
 type FireOptions struct {
 	Rating    string // "none", "1h", "1.5h", "2h" or "3h"
 	Aggregate string // concrete coarse aggregate: "siliceous", "carbonate" or "semi-lightweight"
+	// SteelProtection is how steel, and a filled tube that needs it, is
+	// protected: "board" (Type X gypsum board box, IBC 722.5.1.2, the
+	// default: a column a client sees is usually boxed) or "spray" (sprayed
+	// fire-resistive material, IBC 722.5.1.3, usual where the column is concealed).
+	SteelProtection string
 }
+
+// SteelProtections lists the steel protections FireOptions.SteelProtection accepts.
+var SteelProtections = []string{"board", "spray"}
+
+// SteelProtectionAccepted names the accepted steel protections.
+const SteelProtectionAccepted = "board (Type X gypsum board, IBC 722.5.1.2) or spray (sprayed fire-resistive material, IBC 722.5.1.3)"
 
 // FireRatings lists the ratings FireOptions.Rating accepts, in display order.
 var FireRatings = []string{"none", "1h", "1.5h", "2h", "3h"}
@@ -30,7 +41,9 @@ const (
 	FireAggregatesAccepted = "siliceous, carbonate or semi-lightweight"
 )
 
-func defaultFireOptions() FireOptions { return FireOptions{Rating: "none", Aggregate: "siliceous"} }
+func defaultFireOptions() FireOptions {
+	return FireOptions{Rating: "none", Aggregate: "siliceous", SteelProtection: "board"}
+}
 
 func (o FireOptions) validate() error {
 	if _, ok := fireHours(o.Rating); !ok {
@@ -38,6 +51,9 @@ func (o FireOptions) validate() error {
 	}
 	if _, ok := fireAggregate(o.Aggregate); !ok {
 		return bad("aggregate", o.Aggregate, FireAggregatesAccepted)
+	}
+	if o.SteelProtection != "board" && o.SteelProtection != "spray" {
+		return bad("steel protection", o.SteelProtection, SteelProtectionAccepted)
 	}
 	return nil
 }
@@ -191,8 +207,10 @@ func (c *FireCheck) calc() map[string]any {
 		out["reason"] = c.Reason
 	}
 	if c.Layers > 0 {
-		out["layers"], out["layer_mm"], out["thickness_mm"] = c.Layers, c.LayerMM, c.ThicknessMM
-		out["heated_perimeter_mm"], out["board_kg_per_m"] = c.HeatedPerimeterMM, c.BoardKgPerM
+		out["layers"], out["layer_mm"] = c.Layers, c.LayerMM
+	}
+	if c.ThicknessMM > 0 {
+		out["thickness_mm"], out["heated_perimeter_mm"], out["board_kg_per_m"] = c.ThicknessMM, c.HeatedPerimeterMM, c.BoardKgPerM
 	}
 	if c.MinDimensionMM > 0 {
 		out["min_dimension_mm"], out["cover_mm"], out["cover_required_mm"] = c.MinDimensionMM, c.CoverMM, c.CoverRequiredMM
@@ -307,6 +325,15 @@ func applyFire(sc *Scheme, ls LoadSummary, fams []Family) ([]Family, error) {
 		wg.Add(1)
 		go func(fi int, f Family) { // one family per goroutine, as the build does
 			defer wg.Done()
+			if f.Material() == "composite" {
+				ff, err := newFilledFireFamily(sc, ls, f, hours)
+				if err != nil {
+					errs[fi] = fmt.Errorf("%s: %w", f.Material(), err)
+					return
+				}
+				out[fi] = ff
+				return
+			}
 			w := &fireFamily{Family: f, static: make([]Static, f.Len()), selfW: selfStoreys(sc), ls: ls}
 			for i := range w.static {
 				st, err := fireProtect(sc, f, i, hours)
@@ -338,7 +365,7 @@ func fireProtect(sc *Scheme, f Family, i int, hours float64) (Static, error) {
 		if err != nil {
 			return Static{}, err
 		}
-		return ProtectSteel(*bare, o, bare.MassKgPerM, hours)
+		return protectSteelBy(sc.Fire.SteelProtection, *bare, o, bare.MassKgPerM, hours)
 	case "concrete":
 		cover := 0.0
 		if cf, ok := f.(interface{ barCoverMM(i int) float64 }); ok {
@@ -349,7 +376,7 @@ func fireProtect(sc *Scheme, f Family, i int, hours float64) (Static, error) {
 	case "timber":
 		return timberFire(*bare, hours), nil
 	}
-	return fireOther(bare, f.Material(), hours)
+	return fireOther(bare, f.Material(), hours, sc.Fire.SteelProtection)
 }
 
 // fireOther protects a candidate of a material without its own fire rule.
@@ -357,7 +384,7 @@ func fireProtect(sc *Scheme, f Family, i int, hours float64) (Static, error) {
 // bare steel of the shell's weight alone: the core's heat sink is ignored,
 // which errs on the safe side, and the system says so. Anything else cannot
 // show that it reaches the rating and is not permitted.
-func fireOther(bare *Static, material string, hours float64) (Static, error) {
+func fireOther(bare *Static, material string, hours float64, protection string) (Static, error) {
 	steelKg, core := 0.0, false
 	for _, c := range bare.Constituents {
 		switch c.Kind {
@@ -372,7 +399,7 @@ func fireOther(bare *Static, material string, hours float64) (Static, error) {
 		if fp := bare.FootprintMM; fp[0] == fp[1] && bare.PlanAreaMM2 < 0.9*fp[0]*fp[1] {
 			o = fireRoundOutline // round: plan area π·D²/4
 		}
-		st, err := ProtectSteel(*bare, o, steelKg, hours)
+		st, err := protectSteelBy(protection, *bare, o, steelKg, hours)
 		if err == nil && core {
 			st.Fire.System += "; the steel shell alone, concrete core ignored (conservative)"
 		}

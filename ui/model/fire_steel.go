@@ -2,6 +2,7 @@ package model
 
 import (
 	"fmt"
+	"math"
 
 	"upright/steel/fire"
 )
@@ -118,4 +119,83 @@ func fireSteelStep(x fire.Step) Step {
 		// W/D stays in the equation's own units (the ratio the IBC equation uses).
 	}
 	return out
+}
+
+// Sprayed material quantities for the dead load and carbon of SFRM.
+const fireSprayKgPerM3 = fire.SprayDensityPcf * 16.018463 // 15 lb/ft³ (common practice, from memory), in kg/m³
+
+// protectSteelBy protects a steel column by the scheme's choice: board
+// (ProtectSteel) or sprayed material (ProtectSteelSpray).
+func protectSteelBy(protection string, st Static, o BoardOutline, steelKgPerM, hours float64) (Static, error) {
+	if protection == "spray" {
+		return ProtectSteelSpray(st, o, steelKgPerM, hours)
+	}
+	return ProtectSteel(st, o, steelKgPerM, hours)
+}
+
+// ProtectSteelSpray returns st with sprayed fire-resistive material thick
+// enough for a fire resistance of hours by IBC 2021 722.5.1.3 (from
+// memory). The material follows the contour: its mass is the contour
+// perimeter × thickness × 15 lb/ft³ and joins the dead load and carbon; the
+// plan grows by the thickness on every side. When the method does not
+// apply, st.Fire says why and the candidate is not permitted.
+func ProtectSteelSpray(st Static, o BoardOutline, steelKgPerM, hours float64) (Static, error) {
+	fc := fireBare(&st, hours)
+	a, b := st.FootprintMM[0]/steelMMPerIn, st.FootprintMM[1]/steelMMPerIn
+	d, err := fire.ContourPerimeterIn(o, a, b)
+	if err != nil {
+		return Static{}, err
+	}
+	wLbFt := steelKgPerM * fireSteelLbftPer
+	sp, err := fire.SprayThickness(wLbFt, d, hours)
+	if err != nil {
+		return Static{}, err
+	}
+	h := sp.ThicknessIn * steelMMPerIn
+	fc.Clause = fire.SprayClause
+	fc.ThicknessMM = h
+	fc.HeatedPerimeterMM = d * steelMMPerIn
+	fc.ProvidedH = fireRound(sp.Minutes / 60)
+	fc.OK, fc.Reason = sp.OK, sp.Reason
+	fc.System = fmt.Sprintf("sprayed fire-resistive material, %s in (%.0f mm)", fireInches(sp.ThicknessIn), h)
+	sprayKg := d * steelMMPerIn * h * 1e-6 * fireSprayKgPerM3
+	fc.BoardKgPerM = sprayKg
+	w, dd := st.FootprintMM[0], st.FootprintMM[1]
+	pw, pd := w+2*h, dd+2*h
+	fc.FootprintMM = [2]float64{pw, pd}
+	fc.trace = func() []Step {
+		out := make([]Step, 0, len(sp.Steps)+2)
+		for _, x := range sp.Steps {
+			out = append(out, fireSteelStep(x))
+		}
+		return append(out,
+			Step{Clause: "protected plan", Quantity: "plan with sprayed material", Formula: "bare plan + 2h each way", Value: pw * pd, Unit: "mm2"},
+			Step{Clause: "sprayed material dead load (from memory: 15 lb/ft³)", Quantity: "sprayed mass", Formula: "contour perimeter × h × 240 kg/m³", Value: sprayKg, Unit: "kg/m"},
+		)
+	}
+	out := st
+	out.FootprintMM = fc.FootprintMM
+	out.PlanAreaMM2 = pw * pd
+	out.MassKgPerM = st.MassKgPerM + sprayKg
+	out.Constituents = append(append(make([]Constituent, 0, len(st.Constituents)+1), st.Constituents...),
+		Constituent{Kind: CarbonSFRM, Amount: sprayKg})
+	out.Fire = fc
+	return out, nil
+}
+
+// fireInches writes a thickness in inches as whole sixteenths, e.g. 1-3/8.
+func fireInches(x float64) string {
+	n := int(math.Round(x * 16))
+	whole, rem := n/16, n%16
+	if rem == 0 {
+		return fmt.Sprint(whole)
+	}
+	num, den := rem, 16
+	for num%2 == 0 {
+		num, den = num/2, den/2
+	}
+	if whole == 0 {
+		return fmt.Sprintf("%d/%d", num, den)
+	}
+	return fmt.Sprintf("%d-%d/%d", whole, num, den)
 }

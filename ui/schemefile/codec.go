@@ -33,7 +33,7 @@ var (
 	steelKeys    = []string{"families", "fy"}
 	concreteKeys = []string{"fc", "bar_grade", "rho_max", "transverse", "m1_m2", "beta_dns", "beta_from_loads", "ei_method", "second_order_cap", "nonsway_k1"}
 	timberKeys   = []string{"species", "grade", "sawn", "glulam", "glulam_combinations", "wet", "incised", "hot", "fire_sides", "duration"}
-	fireKeys     = []string{"rating", "aggregate"}
+	fireKeys     = []string{"rating", "aggregate", "steel_protection"}
 	// timberKeysV1 are the timber fields a version-1 file may hold: those of
 	// version 2 and "fire", the timber fire exposure (now the scheme's rating).
 	timberKeysV1 = append(append([]string(nil), timberKeys...), "fire")
@@ -60,8 +60,9 @@ type wFile struct {
 }
 
 type wFire struct {
-	Rating    string `json:"rating"`
-	Aggregate string `json:"aggregate"`
+	Rating          string `json:"rating"`
+	Aggregate       string `json:"aggregate"`
+	SteelProtection string `json:"steel_protection"`
 }
 
 type wSetting struct {
@@ -200,7 +201,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 			GlulamCombos: append([]string{}, t.GlulamCombos...), Wet: t.Wet,
 			Incised: t.Incised, Hot: t.Hot, FireSides: t.FireSides, Duration: optString(t.Duration),
 		},
-		Fire: wFire{Rating: sc.Fire.Rating, Aggregate: sc.Fire.Aggregate},
+		Fire: wFire{Rating: sc.Fire.Rating, Aggregate: sc.Fire.Aggregate, SteelProtection: sc.Fire.SteelProtection},
 	}
 	if sc.Steel.FyMPa != 0 {
 		v := stressKind.format(sc.Steel.FyMPa, sys)
@@ -801,7 +802,7 @@ func (r *reader) timberRest(n *node, p string, t *model.TimberOptions) error {
 
 // carbonOptional are the carbon kinds added after version 1, which a file
 // may leave out (the default factor applies).
-var carbonOptional = map[string]bool{model.CarbonGypsum: true}
+var carbonOptional = map[string]bool{model.CarbonGypsum: true, model.CarbonSFRM: true}
 
 func (r *reader) carbon(root *node, sc *model.Scheme) error {
 	keys := carbonKeys()
@@ -856,6 +857,11 @@ func (r *reader) fire(root *node, f *model.FireOptions, v1Fire string) error {
 	}
 	if n.get("aggregate") != nil {
 		if f.Aggregate, err = r.str(n, p, "aggregate", quoteAll(model.FireAggregates)); err != nil {
+			return err
+		}
+	}
+	if n.get("steel_protection") != nil {
+		if f.SteelProtection, err = r.str(n, p, "steel_protection", quoteAll(model.SteelProtections)); err != nil {
 			return err
 		}
 	}

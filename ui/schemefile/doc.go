@@ -104,9 +104,11 @@
 //	  "fire": {                        optional; absent: no rating, siliceous
 //	    "rating": "none",              none, 1h, 1.5h, 2h or 3h, for every
 //	                                   material; absent: none
-//	    "aggregate": "siliceous"       concrete aggregate for the rating:
+//	    "aggregate": "siliceous",      concrete aggregate for the rating:
 //	                                   siliceous, carbonate or semi-lightweight;
 //	                                   absent: siliceous
+//	    "steel_protection": "board"    board (IBC 722.5.1.2) or spray (722.5.1.3),
+//	                                   for steel and filled tubes; absent: board
 //	  },
 //	  "carbon": {                      every kind, A1–A3 factors
 //	    "rolled-steel": "1.22 kg CO2e/kg",
@@ -115,7 +117,8 @@
 //	    "concrete": "354 kg CO2e/m³",
 //	    "sawn-timber": "63 kg CO2e/m³",
 //	    "glulam": "137 kg CO2e/m³",
-//	    "gypsum-board": "0.25 kg CO2e/kg"  optional; absent: the default
+//	    "gypsum-board": "0.25 kg CO2e/kg",
+//	    "sprayed-fire-protection": "0.4 kg CO2e/kg"   absent: the default  optional; absent: the default
 //	  },
 //	  "report_map": false,             put the map of the winning family over
 //	                                   length and load in the client report;

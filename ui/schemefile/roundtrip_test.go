@@ -104,6 +104,7 @@ func genScheme(t *rapid.T) model.Scheme {
 	tm.Hot = rapid.Bool().Draw(t, "hot")
 	sc.Fire.Rating = rapid.SampledFrom(model.FireRatings).Draw(t, "fire")
 	sc.Fire.Aggregate = rapid.SampledFrom(model.FireAggregates).Draw(t, "aggregate")
+	sc.Fire.SteelProtection = rapid.SampledFrom(model.SteelProtections).Draw(t, "steel protection")
 	tm.FireSides = rapid.SampledFrom([]int{3, 4}).Draw(t, "fire sides")
 	tm.Duration = rapid.SampledFrom([]string{"", "permanent", "ten-years", "two-months", "seven-days", "ten-minutes"}).Draw(t, "duration")
 
@@ -170,7 +171,7 @@ func TestEveryModelFieldIsInTheFormat(t *testing.T) {
 		"Timber.Species", "Timber.Grade", "Timber.Glulam", "Timber.Sawn", "Timber.Wet", "Timber.Incised",
 		"Timber.Hot", "Timber.FireSides", "Timber.Duration", "Timber.GlulamCombos",
 		"Composite.Families", "Composite.FillFcMPa",
-		"Fire.Rating", "Fire.Aggregate",
+		"Fire.Rating", "Fire.Aggregate", "Fire.SteelProtection",
 	}
 	sort.Strings(got)
 	sort.Strings(want)

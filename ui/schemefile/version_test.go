@@ -64,7 +64,8 @@ func TestFireObjectOptional(t *testing.T) {
 	require.NoError(t, err)
 	s := strings.Replace(string(v2), `  "fire": {
     "rating": "1h",
-    "aggregate": "siliceous"
+    "aggregate": "siliceous",
+    "steel_protection": "board"
   },
 `, "", 1)
 	require.NotEqual(t, string(v2), s)
@@ -75,5 +76,14 @@ func TestFireObjectOptional(t *testing.T) {
 	s = strings.Replace(s, `"rating": "1h",`, ``, 1)
 	sc, err = Unmarshal([]byte(s))
 	require.NoError(t, err)
-	assert.Equal(t, model.FireOptions{Rating: "none", Aggregate: "carbonate"}, sc.Fire)
+	s = strings.Replace(s, `"steel_protection": "board"`, `"steel_protection": "spray"`, 1)
+	sc, err = Unmarshal([]byte(s))
+	require.NoError(t, err)
+	assert.Equal(t, model.FireOptions{Rating: "none", Aggregate: "carbonate", SteelProtection: "spray"}, sc.Fire)
+	// A file from before the steel protection field reads as board.
+	s = strings.Replace(s, `,
+    "steel_protection": "spray"`, ``, 1)
+	sc, err = Unmarshal([]byte(s))
+	require.NoError(t, err)
+	assert.Equal(t, "board", sc.Fire.SteelProtection)
 }

@@ -118,7 +118,7 @@
 //	    "sawn-timber": "63 kg CO2e/m³",
 //	    "glulam": "137 kg CO2e/m³",
 //	    "gypsum-board": "0.25 kg CO2e/kg",
-//	    "sprayed-fire-protection": "0.4 kg CO2e/kg"   absent: the default  optional; absent: the default
+//	    "sprayed-fire-protection": "0.4 kg CO2e/kg"  optional; absent: the default
 //	  },
 //	  "report_map": false,             put the map of the winning family over
 //	                                   length and load in the client report;

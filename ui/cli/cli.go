@@ -78,15 +78,13 @@ func ExitStatus(err error) int {
 
 // schemeFrom parses flags into a scheme, starting from --scheme or the default.
 func schemeFrom(f *schemeFlags, args []string) (model.Scheme, error) {
-	if err := f.fs.Parse(args); err != nil {
-		if errors.Is(err, flag.ErrHelp) {
-			return model.Scheme{}, err
-		}
-		return model.Scheme{}, usagef("%v", err)
+	if err := f.parse(args); err != nil {
+		return model.Scheme{}, err
 	}
 	if f.fs.NArg() > 0 {
 		return model.Scheme{}, usagef("unexpected argument %q; flags start with --", f.fs.Arg(0))
 	}
+
 	base := model.DefaultScheme()
 	if f.scheme != "" {
 		sc, err := schemefile.Load(f.scheme)
@@ -95,7 +93,11 @@ func schemeFrom(f *schemeFlags, args []string) (model.Scheme, error) {
 		}
 		base = sc
 	}
-	return f.build(base)
+	sc, err := f.build(base)
+	if err != nil {
+		return sc, err
+	}
+	return sc, f.requireLoad()
 }
 
 // Candidate is one candidate in the JSON output of compare.

@@ -63,7 +63,10 @@ func TestBadInputNamesFlagValueAndAccepted(t *testing.T) {
 		{[]string{"compare", "stray"}, []string{"stray"}},
 		{[]string{"frobnicate"}, []string{"unknown command"}},
 		{[]string{"curve", "--length", "4m"}, []string{"--designation"}},
-		{[]string{"crossovers", "--from", "5m", "--to", "2m"}, []string{"--from"}},
+		{[]string{"crossovers", "--load", "1000kN", "--from", "5m", "--to", "2m"}, []string{"--from"}},
+		{[]string{"compare", "--length", "4.2m"}, []string{"no load given", "--load", "--tributary"}},
+		{[]string{"sections", "--length", "4.2m", "--out", "s.png"}, []string{"no load given", "--load", "--tributary"}},
+		{[]string{"compare", "--lenght", "4m"}, []string{"unknown flag --lenght; did you mean --length?", "usage: upright compare"}},
 	}
 	for _, c := range cases {
 		code, out, errOut := run(c.args...)
@@ -179,7 +182,7 @@ func TestShownUnitsFollowTheUnitsTyped(t *testing.T) {
 
 func TestCarbonAndMagnifierFlags(t *testing.T) {
 	f := newSchemeFlags("compare", &bytes.Buffer{})
-	sc, err := schemeFrom(f, []string{"--carbon", "concrete=300,rolled-steel=1.1", "--limit-magnifier=false", "--rank", "carbon"})
+	sc, err := schemeFrom(f, []string{"--load", "1000kN", "--carbon", "concrete=300,rolled-steel=1.1", "--limit-magnifier=false", "--rank", "carbon"})
 	require.NoError(t, err)
 	assert.Equal(t, 300.0, sc.Carbon["concrete"])
 	assert.Equal(t, 1.1, sc.Carbon["rolled-steel"])

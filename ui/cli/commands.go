@@ -14,16 +14,22 @@ type command struct {
 	run                 func(args []string, stdout, stderr io.Writer) error
 }
 
-// commands is the one table of headless subcommands, in the order usage lists them.
-var commands = []command{
-	{"compare", "[flags]", "lightest working size of each family at one length", runCompare},
-	{"crossovers", "[flags]", "lengths where the answer changes", runCrossovers},
-	{"curve", "--designation NAME --from 1m --to 10m [flags]", "strength of one candidate against length", runCurve},
-	{"map", "--length-range 1m..12m --load-range 500kN..5000kN [--steps 100x60] [flags] --out map.png (or --json)", "the winning family over length and load (or tributary area)", runMap},
-	{"sections", "[flags] --out FILE.png|.svg|.pdf (or --json)", "the best size of each family drawn in plan to one scale", runSections},
-	{"report", "[flags] --out report.pdf", "the client report as PDF", runReport},
-	{"table", "[flags] [--csv table.csv]", "the candidate table as CSV", runTable},
-	{"scheme", "[flags] --out FILE", "write the scheme built from the flags as a file", runScheme},
+// commands is the one table of headless subcommands, in the order usage
+// lists them. It is filled in init, as the commands' flag parsing reads it
+// for its usage line.
+var commands []command
+
+func init() {
+	commands = []command{
+		{"compare", "[flags]", "lightest working size of each family at one length", runCompare},
+		{"crossovers", "[flags]", "lengths where the answer changes", runCrossovers},
+		{"curve", "--designation NAME --from 1m --to 10m [flags]", "strength of one candidate against length", runCurve},
+		{"map", "--length-range 1m..12m --load-range 500kN..5000kN [--steps 100x60] [flags] --out map.png (or --json)", "the winning family over length and load (or tributary area)", runMap},
+		{"sections", "[flags] --out FILE.png|.svg|.pdf (or --json)", "the best size of each family drawn in plan to one scale", runSections},
+		{"report", "[flags] --out report.pdf", "the client report as PDF", runReport},
+		{"table", "[flags] [--csv table.csv]", "the candidate table as CSV", runTable},
+		{"scheme", "[flags] --out FILE", "write the scheme built from the flags as a file", runScheme},
+	}
 }
 
 // lookup returns the command of that name, or nil.

@@ -3,6 +3,7 @@
 package cli
 
 import (
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -48,6 +49,9 @@ type schemeFlags struct {
 	aggregate                 string // concrete aggregate for the fire rating
 	steelProtection           string // board or spray
 	tie                       string
+
+	name string    // the command, for messages
+	out  io.Writer // where -h prints
 }
 
 func newSchemeFlags(name string, out io.Writer) *schemeFlags {
@@ -108,12 +112,91 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 
 	fs.StringVar(&f.fillFc, "fill-fc", "", "f'c of the concrete filling the composite HSS, 3000 to 10000 psi, e.g. 6ksi, 40MPa (default: --fc)")
 	fs.StringVar(&f.compositeFamilies, "composite-families", "", "comma list of "+strings.Join(model.CompositeFamilies, ", "))
-	fs.Usage = func() {
-		fmt.Fprintf(fs.Output(), "Usage of %s:\n", name)
-		fs.PrintDefaults()
-		fmt.Fprintf(fs.Output(), "\n%s", model.AssumptionsText())
-	}
+	f.name, f.out = name, out
 	return f
+}
+
+// parse reads the flags. -h prints the flags as --name with the
+// assumptions; a misspelled flag gets one line naming the nearest flag and
+// the command's short usage, not the whole list.
+func (f *schemeFlags) parse(args []string) error {
+	f.fs.SetOutput(io.Discard)
+	f.fs.Usage = func() {}
+	err := f.fs.Parse(args)
+	f.fs.SetOutput(f.out)
+	switch {
+	case err == nil:
+		return nil
+	case errors.Is(err, flag.ErrHelp):
+		f.printHelp()
+		return err
+	}
+	msg := err.Error()
+	if name, ok := strings.CutPrefix(msg, "flag provided but not defined: "); ok {
+		name = strings.TrimLeft(name, "-")
+		msg = "unknown flag --" + name
+		if near := f.nearest(name); near != "" {
+			msg += "; did you mean --" + near + "?"
+		}
+	} else {
+		msg = strings.ReplaceAll(msg, " -", " --")
+	}
+	if c := lookup(f.name); c != nil {
+		msg += fmt.Sprintf("\nusage: upright %s %s (upright %s -h lists every flag)", c.name, c.args, c.name)
+	}
+	return usagef("%s", msg)
+}
+
+// printHelp lists every flag as --name with its usage, then the assumptions.
+func (f *schemeFlags) printHelp() {
+	w := f.out
+	fmt.Fprintf(w, "Usage of %s:\n", f.name)
+	f.fs.VisitAll(func(fl *flag.Flag) {
+		kind, _ := flag.UnquoteUsage(fl)
+		if kind != "" {
+			kind = " " + kind
+		}
+		fmt.Fprintf(w, "  --%s%s\n    \t%s\n", fl.Name, kind, fl.Usage)
+	})
+	fmt.Fprintf(w, "\n%s", model.AssumptionsText())
+}
+
+// nearest returns the defined flag closest to name by edit distance, or ""
+// when none is within a third of its length (at least 2 edits).
+func (f *schemeFlags) nearest(name string) string {
+	best, bestD := "", max(2, len(name)/3)+1
+	f.fs.VisitAll(func(fl *flag.Flag) {
+		if d := editDistance(name, fl.Name); d < bestD {
+			best, bestD = fl.Name, d
+		}
+	})
+	return best
+}
+
+// editDistance is the Damerau–Levenshtein distance (adjacent swaps count one).
+func editDistance(a, b string) int {
+	ra, rb := []rune(a), []rune(b)
+	d := make([][]int, len(ra)+1)
+	for i := range d {
+		d[i] = make([]int, len(rb)+1)
+		d[i][0] = i
+	}
+	for j := range d[0] {
+		d[0][j] = j
+	}
+	for i := 1; i <= len(ra); i++ {
+		for j := 1; j <= len(rb); j++ {
+			c := 1
+			if ra[i-1] == rb[j-1] {
+				c = 0
+			}
+			d[i][j] = min(d[i-1][j]+1, d[i][j-1]+1, d[i-1][j-1]+c)
+			if i > 1 && j > 1 && ra[i-1] == rb[j-2] && ra[i-2] == rb[j-1] {
+				d[i][j] = min(d[i][j], d[i-2][j-2]+1)
+			}
+		}
+	}
+	return d[len(ra)][len(rb)]
 }
 
 func (f *schemeFlags) set(name string) bool {
@@ -668,4 +751,18 @@ func (f *schemeFlags) fieldUsage(fe *model.FieldError) error {
 		return usagef("--carbon %q: not accepted; give %s", f.carbon, fe.Accepted)
 	}
 	return usagef("%s %q (from the scheme): not accepted; give %s", fe.Field, fe.Value, fe.Accepted)
+}
+
+// loadFree lists the commands whose answer does not depend on the load.
+var loadFree = map[string]bool{"curve": true, "scheme": true}
+
+// requireLoad refuses a command whose answer depends on the load when it is
+// given none: no --load, no takedown (--tributary) and no scheme file. A map
+// over a load range (--load-range or --tributary-range) has its loads.
+func (f *schemeFlags) requireLoad() error {
+	if loadFree[f.name] || f.scheme != "" || f.set("load") || f.set("tributary") ||
+		f.set("load-range") || f.set("tributary-range") {
+		return nil
+	}
+	return usagef("no load given: %s needs the axial load; give --load (e.g. 1800kN or 400kip), a takedown with --tributary (e.g. --tributary 60m2 --floors 3 --dead 4kPa --live 3kPa), or --scheme FILE", f.name)
 }

@@ -151,7 +151,11 @@ func TestMapBadInput(t *testing.T) {
 	}
 	for _, c := range cases {
 		t.Run(strings.Join(c.args, " "), func(t *testing.T) {
-			code, _, errOut := run(append([]string{"map"}, c.args...)...)
+			args := append([]string{"map"}, c.args...)
+			if j := strings.Join(c.args, " "); !strings.Contains(j, "load-range") && !strings.Contains(j, "tributary-range") && !strings.Contains(j, "--scheme") {
+				args = append(args, "--load", "1000kN") // a map needs its loads
+			}
+			code, _, errOut := run(args...)
 			assert.Equal(t, 2, code)
 			assert.Contains(t, errOut, c.flag)
 			assert.Contains(t, errOut, "give")

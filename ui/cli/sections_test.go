@@ -85,7 +85,7 @@ func TestSectionsBadInput(t *testing.T) {
 		{[]string{"sections", "--out", "s.gif"}, ".png, .svg or .pdf"},
 		{[]string{"sections", "--out", "s.svg", "--length", "tall"}, "--length"},
 	} {
-		code, _, errOut := run(c.args...)
+		code, _, errOut := run(append(c.args, "--load", "1000kN")...)
 		assert.Equal(t, 2, code, c.args)
 		assert.Contains(t, errOut, c.want, c.args)
 	}

@@ -461,16 +461,7 @@ func (f *schemeFlags) buildMaterials(sc *model.Scheme) error {
 	if f.fc != "" {
 		v, err := units.ParseStress(f.fc)
 		if err != nil {
-			// A bare number: psi when above 1000, else MPa.
-			if n, e2 := strconv.ParseFloat(f.fc, 64); e2 == nil && n > 0 {
-				if n >= 1000 {
-					v = n * units.MPaPerKsi / 1000
-				} else {
-					v = n
-				}
-			} else {
-				return flagErr("fc", f.fc, err)
-			}
+			return flagErr("fc", f.fc, err)
 		}
 		if !(v >= model.FcMinMPa && v <= model.FcMaxMPa) {
 			return usagef("--fc %q: not accepted; give %s", f.fc, model.FcAccepted)
@@ -765,4 +756,12 @@ func (f *schemeFlags) requireLoad() error {
 		return nil
 	}
 	return usagef("no load given: %s needs the axial load; give --load (e.g. 1800kN or 400kip), a takedown with --tributary (e.g. --tributary 60m2 --floors 3 --dead 4kPa --live 3kPa), or --scheme FILE", f.name)
+}
+
+// QuantityFlags lists the flags that take a quantity with a unit. One rule
+// holds for all of them: a bare number is refused, naming the accepted
+// units, because a number alone cannot say which unit was meant.
+var QuantityFlags = []string{
+	"length", "weak-length", "load", "tributary", "dead", "live", "roof-dead", "roof-live", "snow",
+	"fy", "fc", "fill-fc",
 }

@@ -1,7 +1,6 @@
 package cli
 
 import (
-	"strconv"
 	"strings"
 
 	"upright/ui/model"
@@ -13,16 +12,7 @@ func (f *schemeFlags) buildComposite(sc *model.Scheme) error {
 	if f.fillFc != "" {
 		v, err := units.ParseStress(f.fillFc)
 		if err != nil {
-			// A bare number: psi when 1000 or more, else MPa, as --fc reads it.
-			n, e2 := strconv.ParseFloat(strings.TrimSpace(f.fillFc), 64)
-			if e2 != nil || !(n > 0) {
-				return usagef("--fill-fc %q: not accepted; give %s, e.g. 6ksi, 6000psi or 40MPa", f.fillFc, model.FillFcAccepted)
-			}
-			if n >= 1000 {
-				v = n * units.MPaPerKsi / 1000
-			} else {
-				v = n
-			}
+			return usagef("--fill-fc %q: not accepted; give %s with its unit, e.g. 6ksi, 6000psi or 40MPa", f.fillFc, model.FillFcAccepted)
 		}
 		if !(v >= model.MinFillFcMPa && v <= model.MaxFillFcMPa) {
 			return usagef("--fill-fc %q: not accepted; give %s", f.fillFc, model.FillFcAccepted)

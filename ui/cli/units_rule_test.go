@@ -1,0 +1,38 @@
+package cli
+
+import (
+	"strings"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+)
+
+// One rule for a number without a unit: every quantity flag refuses it
+// with exit status 2, naming the flag and that a unit is needed (a bare
+// "35" could be MPa or ksi, "6" ksi or MPa, "4.2" metres or feet).
+func TestEveryQuantityFlagRefusesABareNumber(t *testing.T) {
+	f := newSchemeFlags("compare", &strings.Builder{})
+	for _, name := range QuantityFlags {
+		require.NotNil(t, f.fs.Lookup(name), "--%s is a flag", name)
+	}
+	for _, name := range QuantityFlags {
+		for _, bare := range []string{"35", "6", "6000", "4.2"} {
+			args := []string{"compare", "--" + name, bare}
+			if name != "load" {
+				args = append(args, "--load", "1000kN")
+			}
+			if name == "tributary" || name == "dead" || name == "live" || name == "roof-dead" || name == "roof-live" || name == "snow" {
+				args = []string{"compare", "--tributary", "60m2", "--floors", "2", "--dead", "4kPa", "--live", "3kPa", "--" + name, bare}
+			}
+			code, out, errOut := run(args...)
+			assert.Equal(t, 2, code, "%v", args)
+			assert.Empty(t, out, "%v", args)
+			assert.Contains(t, errOut, "--"+name+` "`+bare+`"`, "%v names the flag and value", args)
+			assert.Contains(t, errOut, "unit", "%v says a unit is needed", args)
+		}
+	}
+	// With their units they are read (common practice: 35 MPa ≈ 5 ksi).
+	code, _, errOut := run("compare", "--load", "1000kN", "--fc", "35MPa", "--fill-fc", "6ksi", "--fy", "50ksi")
+	assert.Equal(t, 0, code, errOut)
+}

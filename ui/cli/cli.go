@@ -536,7 +536,7 @@ func runCurve(args []string, stdout, stderr io.Writer) error {
 	pts := m.Curve(fi, i, sc.Setting, r)
 	fam := m.Families[fi]
 	if *asJSON {
-		out := CurveJSON{Designation: *des, Family: fam.Name(), Material: fam.Material(), Method: string(sc.Setting.Method)}
+		out := CurveJSON{Designation: fam.Static(i).Designation, Family: fam.Name(), Material: fam.Material(), Method: string(sc.Setting.Method)}
 		for _, p := range pts {
 			out.Points = append(out.Points, CurvePointJSON{LengthMM: round(p.LengthMM, 1), CapacityKN: round(p.CapacityN/1e3, 3),
 				DemandKN: round(p.DemandN/1e3, 3), Permitted: p.Permitted, Mode: p.Mode})
@@ -547,7 +547,7 @@ func runCurve(args []string, stdout, stderr io.Writer) error {
 		return enc.Encode(out)
 	}
 	sys := units.System(sc.Units)
-	fmt.Fprintf(stdout, "%s (%s, %s), %s\n", *des, fam.Name(), fam.Material(), strings.ToUpper(string(sc.Setting.Method)))
+	fmt.Fprintf(stdout, "%s (%s, %s), %s\n", fam.Static(i).Designation, fam.Name(), fam.Material(), strings.ToUpper(string(sc.Setting.Method)))
 	tw := tabwriter.NewWriter(stdout, 2, 4, 2, ' ', 0)
 	_, fu := units.ForceValue(0, sys)
 	fmt.Fprintf(tw, "Length\tCapacity (%s)\tDemand (%s)\n", fu, fu)

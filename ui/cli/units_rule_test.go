@@ -36,3 +36,13 @@ func TestEveryQuantityFlagRefusesABareNumber(t *testing.T) {
 	code, _, errOut := run("compare", "--load", "1000kN", "--fc", "35MPa", "--fill-fc", "6ksi", "--fy", "50ksi")
 	assert.Equal(t, 0, code, errOut)
 }
+
+// Designations are matched without regard to case: W8x48 is W8X48.
+func TestDesignationIgnoresCase(t *testing.T) {
+	code, out, errOut := run("curve", "--designation", "w8x48", "--from", "1m", "--to", "3m", "--json")
+	require.Equal(t, 0, code, errOut)
+	assert.Contains(t, out, `"designation": "W8X48"`, "the catalogue's spelling")
+	code, _, errOut = run("curve", "--designation", "W8x4800", "--from", "1m", "--to", "3m", "--json")
+	assert.Equal(t, 2, code)
+	assert.Contains(t, errOut, "W8x4800")
+}

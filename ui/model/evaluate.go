@@ -293,11 +293,21 @@ func (m *Model) Detail(fi, i int, s Setting) Detail {
 	return d
 }
 
-// Find returns the family and candidate index of a designation, or ok false.
+// Find returns the family and candidate index of a designation, matched
+// exactly first and then without regard to case, or ok false.
 func (m *Model) Find(designation string) (fi, i int, ok bool) {
 	for fi, f := range m.Families {
 		for i := 0; i < f.Len(); i++ {
 			if f.Static(i).Designation == designation {
+				return fi, i, true
+			}
+		}
+	}
+	// Then without regard to case or surrounding space (W8x48 is W8X48).
+	want := strings.TrimSpace(designation)
+	for fi, f := range m.Families {
+		for i := 0; i < f.Len(); i++ {
+			if strings.EqualFold(f.Static(i).Designation, want) {
 				return fi, i, true
 			}
 		}

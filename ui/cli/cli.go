@@ -287,6 +287,9 @@ func runCompare(args []string, stdout, stderr io.Writer) error {
 	}
 	rows := shownRows(res, *all)
 	if *chart != "" {
+		if err := checkExt("chart", *chart, ".png", ".svg", ".pdf"); err != nil {
+			return err
+		}
 		if err := writeChart(m, res, *chart); err != nil {
 			return err
 		}

@@ -5,6 +5,8 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"path/filepath"
+	"strings"
 
 	"upright/ui/model"
 	"upright/ui/report"
@@ -35,6 +37,9 @@ func runReport(args []string, stdout, stderr io.Writer) error {
 	if *out == "" {
 		return usagef("--out: required; give the PDF file to write, e.g. --out report.pdf")
 	}
+	if err := checkExt("out", *out, ".pdf"); err != nil {
+		return err
+	}
 	if *top < 1 || *top > 50 {
 		return usagef("--top %d: not accepted; give 1 to 50 sizes per family", *top)
 	}
@@ -61,6 +66,11 @@ func runTable(args []string, stdout, stderr io.Writer) error {
 	m, err := buildModel(f, args)
 	if err != nil {
 		return err
+	}
+	if *out != "" && *out != "-" {
+		if err := checkExt("csv", *out, ".csv"); err != nil {
+			return err
+		}
 	}
 	var buf bytes.Buffer
 	if err := report.WriteCSV(&buf, m, report.CSVOptions{All: *all}); err != nil {
@@ -90,6 +100,9 @@ func runScheme(args []string, stdout, stderr io.Writer) error {
 	if *out == "" {
 		return usagef("--out: required; give the scheme file to write, e.g. --out tower%s", schemefile.Extension)
 	}
+	if err := checkExt("out", *out, ".json"); err != nil {
+		return err
+	}
 	if *name != "" {
 		sc.Name = *name
 	}
@@ -102,4 +115,16 @@ func runScheme(args []string, stdout, stderr io.Writer) error {
 	}
 	fmt.Fprintf(stdout, "wrote %s\n", *out)
 	return nil
+}
+
+// checkExt refuses an output file whose extension the command cannot
+// write, naming the flag and the extensions it writes.
+func checkExt(flagName, path string, exts ...string) error {
+	got := strings.ToLower(filepath.Ext(path))
+	for _, e := range exts {
+		if got == e {
+			return nil
+		}
+	}
+	return usagef("--%s %q: this command writes %s files; give a file name ending in %s", flagName, path, strings.Join(exts, ", "), strings.Join(exts, " or "))
 }

@@ -1,6 +1,7 @@
 package cli
 
 import (
+	"os"
 	"strings"
 	"testing"
 
@@ -45,4 +46,27 @@ func TestDesignationIgnoresCase(t *testing.T) {
 	code, _, errOut = run("curve", "--designation", "W8x4800", "--from", "1m", "--to", "3m", "--json")
 	assert.Equal(t, 2, code)
 	assert.Contains(t, errOut, "W8x4800")
+}
+
+// An output file whose extension a command cannot write is refused by
+// every command that writes one, naming the flag and what it writes.
+func TestOutputExtensionRefused(t *testing.T) {
+	dir := t.TempDir()
+	for _, c := range []struct {
+		args []string
+		flag string
+	}{
+		{[]string{"report", "--load", "1000kN", "--out", dir + "/r.docx"}, "--out"},
+		{[]string{"table", "--load", "1000kN", "--csv", dir + "/t.xlsx"}, "--csv"},
+		{[]string{"scheme", "--load", "1000kN", "--out", dir + "/s.yaml"}, "--out"},
+		{[]string{"compare", "--load", "1000kN", "--chart", dir + "/c.gif"}, "--chart"},
+		{[]string{"map", "--load", "1000kN", "--out", dir + "/m.bmp"}, "--out"},
+		{[]string{"sections", "--load", "1000kN", "--out", dir + "/s.jpg"}, "--out"},
+	} {
+		code, _, errOut := run(c.args...)
+		assert.Equal(t, 2, code, "%v", c.args)
+		assert.Contains(t, errOut, c.flag, "%v", c.args)
+	}
+	entries, _ := os.ReadDir(dir)
+	assert.Empty(t, entries, "nothing is written")
 }

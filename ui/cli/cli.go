@@ -361,6 +361,7 @@ func printHeader(w io.Writer, m *model.Model) {
 	}
 	fmt.Fprint(w, model.SelfWeightWords(&sc))
 	fmt.Fprintf(w, "; ranked by %s; near-tie tolerance %s\n", sc.Metric, strings.TrimPrefix(model.TieText(sc.Tie), "within "))
+	printTakedownLine(w, sc)
 	printFireLine(w, sc)
 	fmt.Fprintln(w, "Every combination is checked with its own factors (timber λ or CD, concrete βdns); the highest utilization governs.")
 	fmt.Fprintln(w)
@@ -574,4 +575,32 @@ func nearTieText(x model.Crossover) string {
 		return "; " + t
 	}
 	return ""
+}
+
+// printTakedownLine states every input of a takedown, zeros and defaults
+// included (a roof live load or snow not given is 0), so that nothing that
+// shapes the answer is left unsaid.
+func printTakedownLine(w io.Writer, sc model.Scheme) {
+	l := sc.Load
+	if l.Mode != model.LoadTakedown {
+		return
+	}
+	sys := units.System(sc.Units)
+	zero := func(kpa float64) string {
+		if kpa == 0 {
+			return units.Pressure(0, sys) + " (none given)"
+		}
+		return units.Pressure(kpa, sys)
+	}
+	red := "no live-load reduction"
+	if l.LiveReduction {
+		kll := l.KLL
+		if kll == 0 {
+			kll = 4
+		}
+		red = fmt.Sprintf("live-load reduction by ASCE 7-22 4.7 with KLL %g, %s occupancy", kll, l.Occupancy)
+	}
+	fmt.Fprintf(w, "Takedown: %s per floor, %d %s below the roof; floor dead %s, floor live %s; roof dead %s, roof live Lr %s, snow S %s; %s\n",
+		units.Area(l.TributaryM2, sys), l.Floors, map[bool]string{true: "floor", false: "floors"}[l.Floors == 1],
+		zero(l.FloorDeadKPa), zero(l.FloorLiveKPa), zero(l.RoofDeadKPa), zero(l.RoofLiveKPa), zero(l.SnowKPa), red)
 }

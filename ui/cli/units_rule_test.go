@@ -70,3 +70,13 @@ func TestOutputExtensionRefused(t *testing.T) {
 	entries, _ := os.ReadDir(dir)
 	assert.Empty(t, entries, "nothing is written")
 }
+
+// The header states the defaults that shape a takedown's answer: a roof
+// live load or snow not given is 0, and the reduction's KLL and occupancy.
+func TestHeaderStatesTakedownDefaults(t *testing.T) {
+	code, out, errOut := run("compare", "--length", "4.2m", "--tributary", "60m2", "--floors", "3", "--dead", "4kPa", "--live", "3kPa", "--roof-dead", "3kPa")
+	require.Equal(t, 0, code, errOut)
+	assert.Contains(t, out, "roof live Lr 0.00 kPa (none given)")
+	assert.Contains(t, out, "snow S 0.00 kPa (none given)")
+	assert.Contains(t, out, "KLL 4, general occupancy")
+}

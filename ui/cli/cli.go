@@ -411,9 +411,13 @@ func runCrossovers(args []string, stdout, stderr io.Writer) error {
 	asJSON := f.fs.Bool("json", false, "write JSON: an array of crossover objects")
 	from := f.fs.String("from", "", "start of the length range (default "+model.DefaultRangeHelp+")")
 	to := f.fs.String("to", "", "end of the length range (default "+model.DefaultRangeHelp+")")
+	changes := f.fs.String("changes", "family", "which changes to list: family (where the best family changes and where each family's reach ends, with a line for a family that works nowhere) or all (also every size step and the reach of each shown size)")
 	sc, err := schemeFrom(f, args)
 	if err != nil {
 		return err
+	}
+	if *changes != "family" && *changes != "all" {
+		return usagef("--changes %q: not accepted; give family or all", *changes)
 	}
 	r, err := rangeFlags(*from, *to, sc.Setting.LengthMM, sc.Units)
 	if err != nil {
@@ -423,7 +427,11 @@ func runCrossovers(args []string, stdout, stderr io.Writer) error {
 	if err != nil {
 		return err
 	}
-	xs, err := m.Crossovers(context.Background(), sc.Setting, r, nil)
+	all, err := m.Crossovers(context.Background(), sc.Setting, r, nil)
+	if err != nil {
+		return err
+	}
+	xs, err := listedCrossovers(m, all, r, *changes == "all")
 	if err != nil {
 		return err
 	}
@@ -463,6 +471,10 @@ func DescribeCrossover(x model.Crossover) string {
 			return x.From + " is the last working " + x.Family + " size"
 		}
 		return x.From + " → " + x.To
+	case KindEnd:
+		return x.From + " is the last working " + x.Family + " size: the family's reach ends"
+	case KindNowhere:
+		return "no " + x.Family + " size works anywhere in the range"
 	case model.KindFamily:
 		if x.To == "" {
 			return "best overall " + x.From + " (" + x.FromDesignation + "): nothing works beyond"
@@ -603,4 +615,38 @@ func printTakedownLine(w io.Writer, sc model.Scheme) {
 	fmt.Fprintf(w, "Takedown: %s per floor, %d %s below the roof; floor dead %s, floor live %s; roof dead %s, roof live Lr %s, snow S %s; %s\n",
 		units.Area(l.TributaryM2, sys), l.Floors, map[bool]string{true: "floor", false: "floors"}[l.Floors == 1],
 		zero(l.FloorDeadKPa), zero(l.FloorLiveKPa), zero(l.RoofDeadKPa), zero(l.RoofLiveKPa), zero(l.SnowKPa), red)
+}
+
+// Kinds of crossover the crossovers command adds to the model's.
+const (
+	KindEnd     = "end"     // a family's last working size stops working: its reach ends
+	KindNowhere = "nowhere" // a family works nowhere in the range
+)
+
+// listedCrossovers picks what the crossovers command lists. The last
+// working size of a family is a reach end (KindEnd), not a size step. By
+// default: where the best family changes and where each family's reach
+// ends, and a line for each family that works nowhere in the range (no
+// size works even at its shortest length); with all, every size step and
+// the reach of each shown size too.
+func listedCrossovers(m *model.Model, xs []model.Crossover, r model.Range, all bool) ([]model.Crossover, error) {
+	res, err := m.Evaluate(context.Background(), m.Scheme.Setting.AtLength(r.FromMM))
+	if err != nil {
+		return nil, err
+	}
+	out := make([]model.Crossover, 0, len(xs))
+	for _, fr := range res.Families {
+		if fr.Working == 0 {
+			out = append(out, model.Crossover{Kind: KindNowhere, LengthMM: r.FromMM, Family: m.Families[fr.Family].Name()})
+		}
+	}
+	for _, x := range xs {
+		if x.Kind == model.KindSize && x.To == "" {
+			x.Kind = KindEnd
+		}
+		if all || x.Kind == model.KindFamily || x.Kind == KindEnd {
+			out = append(out, x)
+		}
+	}
+	return out, nil
 }

@@ -179,7 +179,7 @@ func TestDefaultCompareListsComposite(t *testing.T) {
 // TestDemoCrossoversIncludeComposite checks the demo scheme's crossovers
 // include the filled-HSS families.
 func TestDemoCrossoversIncludeComposite(t *testing.T) {
-	code, out, errOut := run("crossovers", "--scheme", "../../testdata/schemes/demo.upright.json", "--json")
+	code, out, errOut := run("crossovers", "--scheme", "../../testdata/schemes/demo.upright.json", "--json", "--changes", "all")
 	require.Equal(t, 0, code, errOut)
 	var xs []model.Crossover
 	require.NoError(t, json.Unmarshal([]byte(out), &xs))

@@ -1,6 +1,7 @@
 package cli
 
 import (
+	"encoding/json"
 	"os"
 	"strings"
 	"testing"
@@ -79,4 +80,45 @@ func TestHeaderStatesTakedownDefaults(t *testing.T) {
 	assert.Contains(t, out, "roof live Lr 0.00 kPa (none given)")
 	assert.Contains(t, out, "snow S 0.00 kPa (none given)")
 	assert.Contains(t, out, "KLL 4, general occupancy")
+}
+
+// crossovers lists by default where the best family changes and where each
+// family's reach ends (its last working size, never a size step), a line
+// for a family that works nowhere in the range, and with --changes all
+// every size step too.
+func TestCrossoverKinds(t *testing.T) {
+	type x struct {
+		Kind   string `json:"kind"`
+		Family string `json:"family"`
+		To     string `json:"to"`
+	}
+	get := func(args ...string) []x {
+		code, out, errOut := run(append([]string{"crossovers", "--json"}, args...)...)
+		require.Equal(t, 0, code, errOut)
+		var xs []x
+		require.NoError(t, json.Unmarshal([]byte(out), &xs))
+		return xs
+	}
+	def := get("--length", "4m", "--load", "3000kN", "--from", "1m", "--to", "12m")
+	kinds := map[string]int{}
+	for _, c := range def {
+		kinds[c.Kind]++
+		assert.Contains(t, []string{"family", KindEnd, KindNowhere}, c.Kind)
+	}
+	assert.Positive(t, kinds[KindEnd], "reach ends are listed")
+	assert.Positive(t, kinds["family"], "family changes are listed")
+	assert.Positive(t, kinds[KindNowhere], "sawn lumber carries 3,000 kN nowhere")
+	all := get("--length", "4m", "--load", "3000kN", "--from", "1m", "--to", "12m", "--changes", "all")
+	sizes := 0
+	for _, c := range all {
+		if c.Kind == "size" {
+			sizes++
+			assert.NotEmpty(t, c.To, "a size step always has a next size; the last working size is an end")
+		}
+	}
+	assert.Positive(t, sizes)
+	assert.Greater(t, len(all), len(def))
+	code, _, errOut := run("crossovers", "--load", "1000kN", "--changes", "some")
+	assert.Equal(t, 2, code)
+	assert.Contains(t, errOut, "--changes")
 }

@@ -379,8 +379,9 @@ func printTable(w io.Writer, m *model.Model, rows []*model.Row, sys units.System
 	var marks []string
 	for _, r := range rows {
 		status := r.Status()
-		capV, _ := units.ForceValue(r.CapacityN, sys)
-		demV, _ := units.ForceValue(r.DemandN, sys)
+		capN, demN := governingPair(m, r, s)
+		capV, _ := units.ForceValue(capN, sys)
+		demV, _ := units.ForceValue(demN, sys)
 		wt := r.Static.MassKgPerM
 		if sys == units.US {
 			wt /= units.KgmPerPlf
@@ -649,4 +650,17 @@ func listedCrossovers(m *model.Model, xs []model.Crossover, r model.Range, all b
 		}
 	}
 	return out, nil
+}
+
+// governingPair is the capacity and demand of a row's governing load
+// combination, the pair its utilization comes from (timber under 1.4D:
+// that combination's load and its strength at λ 0.6, not the largest load
+// over a restated strength); the row's own pair when none governs.
+func governingPair(m *model.Model, r *model.Row, s model.Setting) (capN, demN float64) {
+	for _, c := range m.Checks(r.Family, r.Index, s) {
+		if c.Governing {
+			return c.CapacityN, c.DemandN
+		}
+	}
+	return r.CapacityN, r.DemandN
 }

@@ -2,6 +2,7 @@ package cli
 
 import (
 	"encoding/json"
+	"fmt"
 	"os"
 	"strings"
 	"testing"
@@ -121,4 +122,36 @@ func TestCrossoverKinds(t *testing.T) {
 	code, _, errOut := run("crossovers", "--load", "1000kN", "--changes", "some")
 	assert.Equal(t, 2, code)
 	assert.Contains(t, errOut, "--changes")
+}
+
+// The text table's Capacity and Demand are the governing combination's
+// pair, the ones its utilization divides (NDS 2018: timber's strength
+// depends on the combination's λ, so the largest load need not govern).
+func TestTextTableShowsGoverningPair(t *testing.T) {
+	args := []string{"compare", "--materials", "timber", "--length", "3m", "--load", "1500kN", "--units", "si"}
+	code, out, errOut := run(append(args, "--json")...)
+	require.Equal(t, 0, code, errOut)
+	var cs []Candidate
+	require.NoError(t, json.Unmarshal([]byte(out), &cs))
+	code, text, errOut := run(args...)
+	require.Equal(t, 0, code, errOut)
+	checked := 0
+	for _, c := range cs {
+		for _, ch := range c.Checks {
+			if !ch.Governing || ch.CapacityKN == 0 {
+				continue
+			}
+			line := ""
+			for _, l := range strings.Split(text, "\n") {
+				if strings.Contains(l, c.Designation+" ") && line == "" {
+					line = l
+				}
+			}
+			require.NotEmpty(t, line, c.Designation)
+			assert.Contains(t, line, fmt.Sprintf("%.0f", ch.CapacityKN), "%s: governing capacity", c.Designation)
+			assert.Contains(t, line, fmt.Sprintf("%.0f", ch.DemandKN), "%s: governing demand", c.Designation)
+			checked++
+		}
+	}
+	assert.Positive(t, checked)
 }

@@ -6,7 +6,7 @@ import (
 	"math"
 	"strings"
 
-	"github.com/go-pdf/fpdf"
+	"codeberg.org/go-pdf/fpdf"
 
 	"upright/ui/model"
 	"upright/ui/units"

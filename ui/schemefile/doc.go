@@ -20,8 +20,10 @@
 // Dimensionless values (k, kll, rho_max, m1_m2, beta_dns) are JSON numbers;
 // counts (floors, bar_grade, fire_sides) are whole JSON numbers.
 // "tie" is the one field that may be absent: files written before it
-// existed read with the default, 0.05 (5%); Marshal always writes it. The
-// format version stays 1 for it.
+// existed read with the default, 0.05 (5%); Marshal always writes it. Like
+// the later optional fields (concrete.nonsway_k1, fire.steel_protection,
+// the sprayed-fire-protection carbon factor), it did not change the format
+// version, which is 2.
 //
 // Where null means a default (k, kll, fy, fc, duration), only null means it:
 // a value given there is checked against its range like any other, so 0 or
@@ -89,7 +91,9 @@
 //	    "species": "DF-L",             sawn species code: DF-L, SP, HF or SPF
 //	    "grade": "No.1",               sawn grade code: SS, No.1 or No.2
 //	    "sawn": true, "glulam": true,  products included
-//	    "glulam_combinations": [],     e.g. ["24F-1.8E"]; [] means all
+//	    "glulam_combinations": [],     names as the candidates show them, e.g.
+//	                                   ["Comb. 3 DF", "Comb. 5 DF", "24F-1.8E"];
+//	                                   [] means all
 //	    "wet": false, "incised": false, "hot": false,
 //	    "fire_sides": 4,               3 or 4 sides exposed to the rating
 //	    "duration": null               permanent, ten-years, two-months, seven-days,

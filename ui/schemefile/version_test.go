@@ -87,3 +87,11 @@ func TestFireObjectOptional(t *testing.T) {
 	require.NoError(t, err)
 	assert.Equal(t, "board", sc.Fire.SteelProtection)
 }
+
+// The glulam combinations the format document gives as an example are
+// names the model accepts.
+func TestDocGlulamExampleNamesAreAccepted(t *testing.T) {
+	sc := model.DefaultScheme()
+	sc.Timber.GlulamCombos = []string{"Comb. 3 DF", "Comb. 5 DF", "24F-1.8E"}
+	require.NoError(t, sc.Validate())
+}

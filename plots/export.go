@@ -145,9 +145,11 @@ func newCanvas(f Format, size Size) vg.CanvasWriterTo {
 			vgimg.UseDPI(size.dpi()),
 		)}
 	case SVG:
-		cv = &outlinedText{CanvasWriterTo: vgsvg.New(wd, ht)}
+		// SVG keeps every string as text, with the fonts embedded so it
+		// looks the same on any viewer.
+		cv = vgsvg.NewWith(vgsvg.UseWH(wd, ht), vgsvg.EmbedFonts(true))
 	case PDF:
-		cv = &outlinedText{CanvasWriterTo: vgpdf.New(wd, ht)}
+		cv = &outlinedText{CanvasWriterTo: vgpdf.New(wd, ht), keep: pdfText}
 	}
 	return cv
 }

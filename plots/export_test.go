@@ -31,8 +31,13 @@ func TestWriteChartFormats(t *testing.T) {
 			assert.True(t, bytes.HasPrefix(buf.Bytes(), magic[f]), "%q", buf.Bytes()[:8])
 			if f == SVG {
 				assert.Contains(t, buf.String(), "<svg")
-				// Text is drawn as glyph outlines, so no font is needed to view it.
-				assert.NotContains(t, buf.String(), "<text")
+				// Text stays text, selectable and searchable, in an embedded font.
+				assert.Contains(t, buf.String(), "<text")
+				assert.Contains(t, buf.String(), "@font-face")
+			}
+			if f == PDF {
+				// Plain ASCII in a regular face is written as PDF text.
+				assert.Contains(t, buf.String(), "/Font")
 			}
 		})
 	}

@@ -8,19 +8,47 @@ import (
 	"gonum.org/v1/plot/vg"
 )
 
-// outlinedText wraps a vector canvas so text is drawn as filled glyph
-// outlines instead of font references. The SVG and PDF then look the same as
-// the PNG on any viewer, whatever fonts it has, and characters such as φ and ×
-// survive (gonum's PDF writer only handles code page 1252 text and, in
-// v0.17.0, cannot select bold or italic faces).
+// outlinedText wraps a vector canvas so that text the canvas cannot write
+// as text is drawn as filled glyph outlines: gonum's PDF writer (v0.17.0)
+// only handles code page 1252 text and cannot select bold or italic faces,
+// so a string with φ, × or → or a bold or italic face becomes outlines,
+// and the rest stays text, selectable and searchable, in the embedded font.
+// With keep nil every string becomes outlines.
 type outlinedText struct {
 	vg.CanvasWriterTo
+	keep func(f font.Face, s string) bool // write s as text
 	buf  sfnt.Buffer
 	path vg.Path
 }
 
-// FillString fills the outlines of s with the current colour, with its baseline starting at pt.
+// pdfText reports whether gonum's PDF writer can write s in face f as
+// text: a regular upright face and plain ASCII (the writer passes the
+// string's bytes to a code page 1252 font, so any other character would
+// come out garbled).
+func pdfText(f font.Face, s string) bool {
+	if f.Font.Weight != xfont.WeightNormal || f.Font.Style != xfont.StyleNormal {
+		return false
+	}
+	for i := 0; i < len(s); i++ {
+		if s[i] >= 0x80 {
+			return false
+		}
+	}
+	return true
+}
+
+// FillString writes s as text when the canvas can, else fills its outlines
+// with the current colour, with its baseline starting at pt.
 func (c *outlinedText) FillString(f font.Face, pt vg.Point, s string) {
+	if c.keep != nil && c.keep(f, s) {
+		c.CanvasWriterTo.FillString(f, pt, s)
+		return
+	}
+	c.outline(f, pt, s)
+}
+
+// outline fills the glyph outlines of s with the current colour.
+func (c *outlinedText) outline(f font.Face, pt vg.Point, s string) {
 	sf := f.Face
 	if sf == nil || f.Font.Size == 0 {
 		return

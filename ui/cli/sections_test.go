@@ -2,6 +2,7 @@ package cli
 
 import (
 	"encoding/json"
+	"html"
 	"os"
 	"path/filepath"
 	"strings"
@@ -50,7 +51,16 @@ func TestSectionsSVGLabelsEveryBestSize(t *testing.T) {
 		assert.Contains(t, out, des)
 	}
 	assert.Contains(t, desc, "Preliminary sizing for scheme comparison only")
-	assert.Greater(t, strings.Count(svg, "<path"), 5*len(best), "labels and sections are drawn")
+	assert.Greater(t, strings.Count(svg, "<path"), 2*len(best), "sections are drawn")
+	assert.Greater(t, strings.Count(svg, "<text"), 3*len(best), "labels are text")
+	for _, des := range best {
+		// The first line of each label (long ones wrap at a comma or after the size).
+		first := strings.Split(des, ",")[0]
+		if i := strings.Index(first, " glulam"); i > 0 {
+			first = first[:i]
+		}
+		assert.True(t, strings.Contains(svg, ">"+html.EscapeString(first)), "%s is searchable text", first)
+	}
 }
 
 // TestSectionsJSONLayout checks the layout: one entry per family's best

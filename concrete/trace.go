@@ -82,13 +82,18 @@ func (s *Section) Evaluate(c Conditions) (Result, error) {
 	if s.Shape == Circular {
 		minBars = "at least 6 bars around a round section"
 	}
-	add("ACI 318-19 10.7.3.1", "bars", fmt.Sprintf("%d %s, %s", s.NBars, s.BarName(s.Bar), minBars), float64(s.NBars), "")
-	add("ASTM A615 (bar dimensions from memory)", "Ast", fmt.Sprintf("%d × %.0f mm²", s.NBars, s.Bar.AreaMM2), s.AstMM2, "mm2")
+	barStd, soft := "ASTM A615 (bar dimensions from memory)", ""
+	if s.Series == SeriesSI {
+		barStd = "ASTM A615M (bar dimensions from memory)"
+		soft = fmt.Sprintf("; soft-metric name of the inch-pound %s (ASTM A615M, from memory)", s.Bar.Name())
+	}
+	add("ACI 318-19 10.7.3.1", "bars", fmt.Sprintf("%d %s, %s%s", s.NBars, s.BarName(s.Bar), minBars, soft), float64(s.NBars), "")
+	add(barStd, "Ast", fmt.Sprintf("%d × %.0f mm²", s.NBars, s.Bar.AreaMM2), s.AstMM2, "mm2")
 	add("ACI 318-19 10.6.1.1", "ρg", "Ast/Ag, from 0.01 to 0.08", s.Rho, "")
 	add("ACI 318-19 20.5.1.3.1", "cover", "clear cover to the ties or spiral", s.CoverMM, "mm")
 	add("ACI 318-19 25.2.3", "clear spacing", fmt.Sprintf("at least max(1.5 in, 1.5db, 4/3 × 3/4 in aggregate) = %.1f mm", s.MinClearMM), s.ClearMM, "mm")
 	if s.Transverse == Tied {
-		add("ACI 318-19 25.7.2.2", "tie", s.BarName(s.Tie)+" ties (#3 for bars #10 and smaller, #4 for #11, #14, #18)", s.Tie.DiaMM, "mm")
+		add("ACI 318-19 25.7.2.2", "tie", s.BarName(s.Tie)+" ties ("+s.tieRuleWords()+")", s.Tie.DiaMM, "mm")
 		add("ACI 318-19 25.7.2.1", "tie spacing", "min(16db, 48dtie, least dimension)", s.TieSpaceMM, "mm")
 	} else {
 		add("ACI 318-19 Eq. 25.7.3.3", "ρs,min", "0.45(Ag/Ach − 1)f'c/fyt", s.RhoSMin, "")
@@ -237,4 +242,11 @@ func (s *Section) summary(r *Result) string {
 		return fmt.Sprintf("Slenderness governs (%s, k·lu/r = %.0f): with the top free to sway the column acts as its own story, and the minimum moment magnified by δs = %.2f meets the interaction diagram at %.0f%% of the axial limit.", s.axisName(r.Governs), g.KLR, g.Mag.Delta, 100*r.PhiPn/s.PhiPnMax)
 	}
 	return fmt.Sprintf("Slenderness governs (%s, k·lu/r = %.0f): the minimum moment magnified by δ = %.2f meets the interaction diagram at %.0f%% of the axial limit.", s.axisName(r.Governs), g.KLR, g.Mag.Delta, 100*r.PhiPn/s.PhiPnMax)
+}
+
+// tieRuleWords states the tie size rule of ACI 318-19 25.7.2.2 in the
+// section's bar names: inch-pound, or soft metric for SI sizes.
+func (s *Section) tieRuleWords() string {
+	n := func(size int) string { return s.BarName(Bar{Size: size}) }
+	return n(3) + " for bars " + n(10) + " and smaller, " + n(4) + " for " + n(11) + ", " + n(14) + ", " + n(18)
 }

@@ -255,3 +255,58 @@ func TestLoadCaseBetaDnsWithSelfWeight(t *testing.T) {
 	assert.InDelta(t, 1012e3, c.DemandN(10e3), 1e-6)
 	assert.Equal(t, "fire: D + L", ls.FireCase.Name, "the fire case is the governing service combination (NDS 2018 16.2.2)")
 }
+
+// TestTypedDurationDoesNotLiftEveryCombination is the reviewed case of a
+// typed ten-minute load duration (CD 1.6) on a 14x14 DF-L No.1 (13.5 in
+// square; Fc = 1,000 psi, Emin = 580,000 psi, NDS Supplement Table 4D, from
+// memory) at 12.5 ft pinned, ASD, a typed service load of 250 kip with the
+// default dead share 2/3 (D = 166.7 kip, L = 83.3 kip), no self-weight.
+// With CD 1.6 for every combination, D + L = 250 kip over ndsPostCapacity
+// at 1.6 (about 260 kip) gives 0.96: it "worked". Each combination keeps
+// its own CD when that is lower than the typed one (NDS 2018 2.3.2 and
+// Table 2.3.2, from memory: D alone 0.9, D + L 1.0), so D + L governs at
+// about 1.46 and the post fails.
+func TestTypedDurationDoesNotLiftEveryCombination(t *testing.T) {
+	sc := DefaultScheme()
+	sc.Materials = []string{"timber"}
+	sc.SelfWeight = false
+	sc.Timber.Glulam = false
+	sc.Timber.Duration = "ten-minutes"
+	sc.Load = Load{Mode: LoadDirect, DirectN: 250 * tKip}
+	le := 12.5 * 12.0
+	sc.Setting = Setting{LengthMM: le * 25.4, WeakMM: le * 25.4, Ends: PinnedPinned, Method: ASD}
+	typed := 250 / ndsPostCapacity(1000, 580000, 13.5, le, 1.6, false)
+	own := 250 / ndsPostCapacity(1000, 580000, 13.5, le, 1.0, false)
+	assert.InDelta(t, 0.96, typed, 0.005, "the typed CD everywhere: the reviewed 0.96")
+	assert.InDelta(t, 1.46, own, 0.01, "each combination's own CD: the reviewed 1.46")
+
+	m, err := New(sc)
+	require.NoError(t, err)
+	fi, i, ok := m.Find("14x14 DF-L No.1")
+	require.True(t, ok)
+	row := m.Row(fi, i, sc.Setting)
+	assert.False(t, row.OK, "fails at its own CD")
+	assert.InEpsilon(t, own, row.Util, 1e-9, "D + L at CD 1.0 governs")
+	want := map[string][2]float64{ // CD, capacity kip
+		"ASD 1: D":     {0.9, ndsPostCapacity(1000, 580000, 13.5, le, 0.9, false)},
+		"ASD 2: D + L": {1.0, ndsPostCapacity(1000, 580000, 13.5, le, 1.0, false)},
+	}
+	seen := 0
+	for _, c := range m.Checks(fi, i, sc.Setting) {
+		w, ok := want[c.Combination]
+		if !ok {
+			assert.LessOrEqual(t, c.Factors["CD"], 1.6, c.Combination)
+			continue
+		}
+		seen++
+		assert.Equal(t, w[0], c.Factors["CD"], "%s keeps its own CD under a typed 1.6", c.Combination)
+		assert.InEpsilon(t, w[1]*tKip, c.CapacityN, 1e-9, "%s: NDS 2018 3.7.1 at its own CD", c.Combination)
+	}
+	assert.Equal(t, len(want), seen)
+	d := m.Detail(fi, i, sc.Setting)
+	var said bool
+	for _, st := range d.Steps {
+		said = said || strings.Contains(st.Formula, "only makes a combination more conservative")
+	}
+	assert.True(t, said, "the trace states the rule for a typed duration")
+}

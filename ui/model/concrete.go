@@ -245,8 +245,13 @@ func (f *concreteFamily) Quick(i int, s Setting) Quick {
 		return Quick{Governing: concreteNotPerm, Reason: "no load combination to check"}
 	}
 	hb, big, maxN := 0, 0, 0.0
+	oneBeta := true // every combination has the same βdns, so one strength
 	for k := range cases {
-		if f.betaOf(&cases[k], selfN) > f.betaOf(&cases[hb], selfN) {
+		bk := f.betaOf(&cases[k], selfN)
+		if bk != f.betaOf(&cases[0], selfN) {
+			oneBeta = false
+		}
+		if bk > f.betaOf(&cases[hb], selfN) {
 			hb = k
 		}
 		if d := cases[k].DemandN(selfN); d > maxN {
@@ -258,7 +263,7 @@ func (f *concreteFamily) Quick(i int, s Setting) Quick {
 		return gov
 	}
 	cmin := gov.CapacityN
-	if gov.Mode == int(concrete.Crushing) || f.betaFixed >= 0 || hb == big {
+	if gov.Mode == int(concrete.Crushing) || oneBeta || hb == big {
 		if maxN > 0 {
 			gov.CapacityN *= demandN / maxN
 		}
@@ -383,8 +388,8 @@ func (f *concreteFamily) calc(sec *concrete.Section, r *concrete.Result, c *conc
 		"Ec_MPa":         sec.EcMPa,
 		"beta1":          sec.Beta1,
 		"bars":           sec.NBars,
-		"bar":            sec.Bar.Name(),
-		"tie":            sec.Tie.Name(),
+		"bar":            sec.BarName(sec.Bar),
+		"tie":            sec.BarName(sec.Tie),
 		"tie_spacing_mm": sec.TieSpaceMM,
 		"Ast_mm2":        sec.AstMM2,
 		"Ag_mm2":         sec.AgMM2,
@@ -409,7 +414,7 @@ func (f *concreteFamily) calc(sec *concrete.Section, r *concrete.Result, c *conc
 		"sway":           g.Sway,
 		"delta":          delta,
 		"beta_dns":       c.BetaDns,
-		"beta_source":    map[bool]string{true: "the concrete options", false: "the governing combination"}[f.betaFixed >= 0],
+		"beta_source":    map[bool]string{true: "the concrete options", false: "the governing combination"}[f.betaFixed >= 0 && c.BetaDns == f.betaFixed],
 		"EI_method":      c.EI.Letter(),
 		"EI_used":        map[bool]string{true: g.EI.Letter(), false: ""}[g.Slender],
 		"EIeff_kNm2":     m.EIeff * 1e-9,

@@ -338,3 +338,35 @@ func TestConcreteTypedBetaPerCombination(t *testing.T) {
 	assert.True(t, saw14, "1.4D is among the combinations")
 	assert.True(t, sawLow, "a combination with βdns below 0.6 is among them")
 }
+
+// Under a typed βdns lower than some combinations' own, the combinations
+// no longer share one strength: Quick still finds the highest utilization
+// over every LRFD combination, each at max(typed, own) βdns (ACI 318-19
+// 6.6.4.4.4), as Checks lists them. Typed 2000 kN, s = 2/3 (hand calc in
+// TestConcreteBetaFromLoads): 1.4D keeps βdns 1 under a typed 0.3.
+func TestConcreteTypedBetaQuickGovernsEveryCombination(t *testing.T) {
+	sc := DefaultScheme()
+	sc.SelfWeight = false
+	sc.Concrete.BetaFromLoads, sc.Concrete.BetaDns = false, 0.3
+	ls := typedLoads(t, LRFD)
+	for _, s := range []Setting{
+		{LengthMM: 6000, WeakMM: 6000, Ends: PinnedPinned, Method: LRFD},
+		{LengthMM: 9000, WeakMM: 9000, Ends: PinnedPinned, Method: LRFD},
+	} {
+		for _, fam := range concreteFamilies(t, sc, ls) {
+			f := fam.(*concreteFamily)
+			for i := 0; i < f.Len(); i += 5 {
+				q := f.Quick(i, s)
+				if !q.Permitted {
+					continue
+				}
+				worst := 0.0
+				for k := range ls.LRFDCases {
+					c := &ls.LRFDCases[k]
+					worst = math.Max(worst, c.DemandN(0)/f.CaseQuick(i, s, c, 0).CapacityN)
+				}
+				require.InEpsilon(t, ls.DemandN/worst, q.CapacityN, 1e-12, "%s at %.0f mm: highest utilization governs", f.Static(i).Designation, s.LengthMM)
+			}
+		}
+	}
+}

@@ -106,7 +106,7 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		o.eiMethod = widget.NewSelect(labels(eiChoices), func(s string) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.EIMethod = valueOf(eiChoices, s) })
 		})
-		o.betaFromLoads = widget.NewCheck("βdns of each load combination (factored dead over total); untick to type one for all", func(on bool) {
+		o.betaFromLoads = widget.NewCheck("βdns of each load combination (factored dead over total); untick to type one that may only raise it", func(on bool) {
 			w.change(func(sc *model.Scheme) { sc.Concrete.BetaFromLoads = on })
 		})
 		o.cap14 = widget.NewCheck("δ above 1.4 never works (ACI 318-19 6.2.5.3); untick to see the uncapped strength as a note", func(on bool) {
@@ -121,7 +121,7 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			small("−1 is single curvature (the severe case); 1 is double curvature."),
 			o.betaFromLoads,
 			w.newField("beta-dns").box,
-			small("The typed βdns is used with a typed load or when the box above is off."),
+			small("A typed βdns applies when the box above is off, and only where it is higher than a combination's own."),
 			labelled("(EI)eff, ACI 318-19 6.6.4.4.4", o.eiMethod),
 			o.cap14,
 			o.nonswayK1,

@@ -51,14 +51,14 @@ func Assumptions() []Assumption {
 		}},
 		{"concrete", []string{
 			concreteK + " (the recommended design values, as steel and timber take: AISC 360-22 C-A-7.1, from memory), unless K is typed; with the nonsway-k1 setting " + concreteK1 + " (nonsway k = 1.0, the simplification ACI 318-19 6.6.4.4.3 permits, from memory)",
-			"ACI 318-19 is strength design: every LRFD combination is checked with its own βdns = factored dead / total (6.6.4.4.4), and (EI)eff by whichever of 6.6.4.4.4 (a), (b) and (c) gives the largest strength unless one is chosen; under ASD the governing strength is restated on the service-load scale; δ above 1.4 never works (6.2.5.3)",
+			"ACI 318-19 is strength design: every LRFD combination is checked with its own βdns = factored dead / total (6.6.4.4.4), and (EI)eff by whichever of 6.6.4.4.4 (a), (b) and (c) gives the largest strength unless one is chosen; a typed βdns applies only where it is higher than a combination's own; under ASD the governing strength is restated on the service-load scale; δ above 1.4 never works (6.2.5.3)",
 			"concrete at 2,320 kg/m³ plus bars, added as dead load with each combination's dead factor",
 			"the weak-axis brace sets lu about the weak axis; no torsional mode",
 			"k·lu/r above 100 is not permitted (6.2.6) and marked",
 		}},
 		{"timber", []string{
 			timberK + " (NDS 2018 Appendix G Table G1 recommended Ke, from memory), unless K is typed",
-			"every combination is checked with its own time effect factor λ (LRFD, NDS 2018 Table N3) or load duration factor CD (ASD, Table 2.3.2); with a fire rating the charred section is checked against the governing ASD (service) combination (16.2.2)",
+			"every combination is checked with its own time effect factor λ (LRFD, NDS 2018 Table N3) or load duration factor CD (ASD, Table 2.3.2), a typed duration only where its CD is lower than the combination's own; with a fire rating the charred section is checked against the governing ASD (service) combination (16.2.2)",
 			"wood at its moisture content (19% sawn, 12% glulam), added as dead load with each combination's dead factor",
 			"the weak-axis brace sets le about the weak axis (width b); no torsional mode",
 			"le/d above 50 is not permitted (NDS 2018 3.7.1.4) and marked, for the charred section too",

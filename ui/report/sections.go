@@ -788,7 +788,7 @@ func assumptions(d *doc, f *facts) {
 				}
 			}
 		}
-		beta := fmt.Sprintf("βdns = %.2f typed, for every combination", sc.Concrete.BetaDns)
+		beta := fmt.Sprintf("βdns of each LRFD combination, or the typed %.2f where it is higher (a typed βdns only makes a combination more conservative)", sc.Concrete.BetaDns)
 		if sc.Concrete.BetaFromLoads {
 			beta = fmt.Sprintf("βdns of each LRFD combination (%.2f for the governing one)", ls.BetaDns)
 		}
@@ -804,7 +804,7 @@ func assumptions(d *doc, f *facts) {
 		if s.Method == model.ASD {
 			dur = " Every combination is checked with its own load duration factor CD (NDS 2018 Table 2.3.2, 2.3.2.2)."
 			if sc.Timber.Duration != "" {
-				dur = " The load duration is typed (" + sc.Timber.Duration + ") and used for every combination (NDS 2018 Table 2.3.2)."
+				dur = " The load duration is typed (" + sc.Timber.Duration + "): each ASD combination takes the lower of its own CD and the typed one, so a typed duration only makes a combination more conservative (NDS 2018 Table 2.3.2)."
 			}
 		}
 		items = append(items, "Timber: NDS 2018, National Design Specification for Wood Construction: column stability factor Cp (3.7) with the adjustment factors for the service conditions; "+timberWords(sc.Timber)+"."+dur)

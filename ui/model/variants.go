@@ -146,7 +146,8 @@ type VariantResult struct {
 	Index   int    // −1 for the base, else the variant's index in Scheme.Variants
 	Name    string // "Base" or the variant's label
 	Changes []Change
-	Model   *Model
+	Scheme  Scheme // the scheme evaluated (the variant's, with its setting)
+	Model   *Model // may be the base's model when only the setting differs
 	Result  *Result
 	Err     error // the variant could not be applied or built; Model and Result are nil
 }
@@ -232,9 +233,14 @@ func (c *Comparison) Delta(vi int, family string) Delta {
 }
 
 // sameModel reports whether the variant differs from the base only in its
-// unbraced lengths, so the base's model evaluates it at its own setting.
+// setting (lengths, ends, K, twist bracing; not the method, which sets the
+// load combinations), so the base's model evaluates it at its own setting:
+// the families are built from the scheme's options and loads, never from
+// its setting.
 func sameModel(base, v Scheme) bool {
-	v.Setting.LengthMM, v.Setting.WeakMM, v.Name = base.Setting.LengthMM, base.Setting.WeakMM, base.Name
+	method := v.Setting.Method
+	v.Setting, v.Name = base.Setting, base.Name
+	v.Setting.Method = method
 	v.Variants, base.Variants = nil, nil
 	return reflect.DeepEqual(base, v)
 }
@@ -244,13 +250,23 @@ func sameModel(base, v Scheme) bool {
 // built keeps its error in its column; only a failing base is an error. A
 // variant that changes only the lengths reuses the base's model.
 func CompareVariants(ctx context.Context, sc Scheme) (*Comparison, error) {
+	return CompareVariantsFrom(ctx, sc, nil)
+}
+
+// CompareVariantsFrom is CompareVariants with the base's model already
+// built (nil builds it), as the window has it: a variant then costs no
+// more than evaluating its scheme on its own, and less when it changes
+// only the setting.
+func CompareVariantsFrom(ctx context.Context, sc Scheme, bm *Model) (*Comparison, error) {
 	base := sc
 	base.Variants = nil
-	bm, err := New(base)
-	if err != nil {
-		return nil, err
+	if bm == nil || !sameModel(base, bm.Scheme) || bm.Scheme.Setting.Method != base.Setting.Method {
+		var err error
+		if bm, err = New(base); err != nil {
+			return nil, err
+		}
 	}
-	c := &Comparison{Base: VariantResult{Index: -1, Name: "Base", Model: bm}, Variants: make([]VariantResult, len(sc.Variants))}
+	c := &Comparison{Base: VariantResult{Index: -1, Name: "Base", Scheme: base, Model: bm}, Variants: make([]VariantResult, len(sc.Variants))}
 	var wg sync.WaitGroup
 	wg.Add(1)
 	go func() {
@@ -268,6 +284,7 @@ func CompareVariants(ctx context.Context, sc Scheme) (*Comparison, error) {
 				out.Err = err
 				return
 			}
+			out.Scheme = vs
 			m := bm
 			if !sameModel(base, vs) {
 				if m, err = New(vs); err != nil {

@@ -28,9 +28,11 @@ type variantsPane struct {
 
 	root    fyne.CanvasObject
 	add     *widget.Button
+	edit    *widget.Accordion // the variants' editors, folded away
 	status  *widget.Label
 	rows    [model.MaxVariants]*variantRow
-	grid    *fyne.Container // the side-by-side table
+	table   *widget.Table // the side-by-side table
+	cells   [][]string    // the table's texts, header row first
 	raster  *canvas.Raster
 	front   *image.RGBA // the drawn sections (UI goroutine)
 	quiet   int         // >0 while the pane sets its own entries
@@ -66,7 +68,10 @@ func newVariantsPane(ed editor, do func(func())) *variantsPane {
 	for i := range p.rows {
 		editors.Add(p.newRow(i))
 	}
-	p.grid = container.NewGridWithColumns(1)
+	p.table = widget.NewTable(p.tableSize, p.newCell, p.updateCell)
+	p.table.StickyRowCount, p.table.StickyColumnCount = 1, 1
+	p.table.OnSelected = p.tapped
+	p.table.SetColumnWidth(0, 150)
 	p.raster = canvas.NewRaster(func(w, h int) image.Image {
 		p.mu.Lock()
 		changed := w != p.wantW || h != p.wantH
@@ -81,11 +86,12 @@ func newVariantsPane(ed editor, do func(func())) *variantsPane {
 		return p.front
 	})
 	p.raster.SetMinSize(fyne.NewSize(240, 160))
-	table := container.NewScroll(p.grid)
+	table := p.table
+	p.edit = widget.NewAccordion(widget.NewAccordionItem("Edit the variants", editors))
 	top := container.NewBorder(nil, nil, p.add, nil, p.status)
-	left := container.NewBorder(container.NewVBox(top, editors), nil, nil, nil, table)
+	left := container.NewBorder(container.NewVBox(top, p.edit), nil, nil, nil, table)
 	split := container.NewHSplit(left, p.raster)
-	split.Offset = 0.6
+	split.Offset = 0.55
 	p.root = split
 	p.showRows()
 	return p
@@ -127,6 +133,7 @@ func (p *variantsPane) addVariant() {
 	if n >= model.MaxVariants {
 		return
 	}
+	p.edit.Open(0)
 	p.ed.Edit("add variant", func(sc *model.Scheme) {
 		if len(sc.Variants) < model.MaxVariants {
 			sc.Variants = append(sc.Variants, model.Variant{Name: fmt.Sprintf("Variant %d", len(sc.Variants)+1)})
@@ -221,6 +228,9 @@ func (p *variantsPane) showRows() {
 	}
 	if n == 0 {
 		p.status.SetText("No variants: add one to compare this scheme with a few inputs changed.")
+		p.edit.Hide()
+	} else {
+		p.edit.Show()
 	}
 }
 
@@ -278,49 +288,80 @@ func (p *variantsPane) Show(s *Snapshot) {
 	}()
 }
 
-// showTable lays out the side-by-side table of the comparison shown.
+// Variant table geometry: column widths and the height of a size row
+// (size, weight and plan area, carbon: three lines).
+const (
+	variantColW   = 200
+	variantRowH   = 72
+	variantHeadH  = 40
+	variantBaseCW = 170
+)
+
+func (p *variantsPane) tableSize() (int, int) {
+	if len(p.cells) == 0 {
+		return 0, 0
+	}
+	return len(p.cells), len(p.cells[0])
+}
+
+func (p *variantsPane) newCell() fyne.CanvasObject {
+	l := widget.NewLabel("")
+	l.Wrapping = fyne.TextWrapWord
+	return l
+}
+
+func (p *variantsPane) updateCell(id widget.TableCellID, o fyne.CanvasObject) {
+	l := o.(*widget.Label)
+	if id.Row >= len(p.cells) || id.Col >= len(p.cells[id.Row]) {
+		l.SetText("")
+		return
+	}
+	l.TextStyle = fyne.TextStyle{Bold: id.Row == 0 || id.Row == len(p.cells)-1}
+	l.Importance = widget.MediumImportance
+	if id.Row == 0 && id.Col >= 2 {
+		l.Importance = widget.HighImportance // a variant's name: tap to show it
+	}
+	l.SetText(p.cells[id.Row][id.Col])
+}
+
+// tapped shows the variant whose name was tapped.
+func (p *variantsPane) tapped(id widget.TableCellID) {
+	p.table.UnselectAll()
+	if id.Row == 0 && id.Col >= 2 && p.comp != nil && id.Col-2 < len(p.comp.Variants) {
+		p.showVariant(p.comp.Variants[id.Col-2].Index)
+	}
+}
+
+// showTable fills the side-by-side table from the comparison shown.
 func (p *variantsPane) showTable() {
-	p.grid.RemoveAll()
+	p.cells = nil
 	c := p.comp
 	if c == nil {
-		p.grid.Layout = container.NewGridWithColumns(1).Layout
-		p.grid.Refresh()
+		p.table.Refresh()
 		return
 	}
 	sys := units.System(p.scheme.Units)
 	cols := c.Columns()
-	p.grid.Layout = container.NewGridWithColumns(len(cols) + 1).Layout
-	bold := func(s string) *widget.Label {
-		l := widget.NewLabelWithStyle(s, fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-		l.Wrapping = fyne.TextWrapWord
-		return l
+	head := []string{"Family", "Base (shown)"}
+	for _, col := range cols[1:] {
+		head = append(head, col.Name+" ▸ show")
 	}
-	p.grid.Add(bold("Family"))
-	for i, col := range cols {
-		if i == 0 {
-			p.grid.Add(bold("Base (shown)"))
-			continue
-		}
-		vi := col.Index
-		b := widget.NewButton(col.Name, func() { p.showVariant(vi) })
-		p.grid.Add(b)
-	}
+	p.cells = append(p.cells, head)
 	for _, fam := range c.Families {
-		p.grid.Add(widget.NewLabel(fam))
+		row := []string{fam}
 		for i, col := range cols {
 			text := familyCell(col, fam)
 			if i > 0 {
 				if d := c.Delta(i-1, fam); d.Known {
 					m, a, cb := units.DeltaParts(d.MassKg, d.PlanAreaMM2, d.CarbonKg, sys)
-					text += "\n" + m + " · " + a + " · " + cb
+					text += "\n" + m + ", " + a + "\n" + cb
 				}
 			}
-			l := widget.NewLabel(text)
-			l.Wrapping = fyne.TextWrapWord
-			p.grid.Add(l)
+			row = append(row, text)
 		}
+		p.cells = append(p.cells, row)
 	}
-	p.grid.Add(bold("Best overall"))
+	best := []string{"Best overall"}
 	for _, col := range cols {
 		text := "none works"
 		if col.Err != nil {
@@ -328,16 +369,25 @@ func (p *variantsPane) showTable() {
 		} else if b := col.BestOverall(); b != nil {
 			text = b.Static.Designation + " (" + col.Model.Families[b.Family].Name() + ")"
 		}
-		p.grid.Add(bold(text))
+		best = append(best, text)
 	}
-	p.grid.Refresh()
+	p.cells = append(p.cells, best)
+	p.table.SetColumnWidth(1, variantBaseCW)
+	for k := 2; k < len(head); k++ {
+		p.table.SetColumnWidth(k, variantColW)
+	}
+	p.table.SetRowHeight(0, variantHeadH)
+	for r := 1; r < len(p.cells); r++ {
+		p.table.SetRowHeight(r, variantRowH)
+	}
+	p.table.Refresh()
 	bad := 0
 	for _, v := range c.Variants {
 		if v.Err != nil {
 			bad++
 		}
 	}
-	msg := fmt.Sprintf("%d variant(s) beside the base; change = weight, plan area, carbon against the base. Click a variant's name to show it.", len(c.Variants))
+	msg := fmt.Sprintf("%d variant(s) beside the base; under each size its change in weight, plan area and carbon. Tap a variant's name to show it.", len(c.Variants))
 	if bad > 0 {
 		msg = fmt.Sprintf("%d of %d variants could not be evaluated (see the table).", bad, len(c.Variants))
 	}

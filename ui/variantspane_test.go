@@ -83,13 +83,8 @@ func (h *paneHarness) gridTexts() []string {
 	h.mu.Lock()
 	defer h.mu.Unlock()
 	var out []string
-	for _, o := range h.p.grid.Objects {
-		switch x := o.(type) {
-		case *widget.Label:
-			out = append(out, x.Text)
-		case *widget.Button:
-			out = append(out, x.Text)
-		}
+	for _, row := range h.p.cells {
+		out = append(out, row...)
 	}
 	return out
 }
@@ -113,7 +108,7 @@ func TestVariantsPaneTable(t *testing.T) {
 			}
 		}
 	}
-	for _, want := range []string{"tall", "Best overall", "Base (shown)", " kg CO2e"} {
+	for _, want := range []string{"tall ▸ show", "Best overall", "Base (shown)", " kg CO2e"} {
 		if !strings.Contains(texts, want) {
 			t.Errorf("the table lacks %q", want)
 		}
@@ -157,7 +152,7 @@ func TestVariantsPaneEdits(t *testing.T) {
 	}
 	h.show(t)
 	h.mu.Lock()
-	h.p.showVariant(0)
+	h.p.tapped(widget.TableCellID{Row: 0, Col: 2}) // the variant's name in the table
 	h.mu.Unlock()
 	if h.ed.sc.Setting.LengthMM != 5500 || h.ed.sc.Fire.Rating != "1h" || len(h.ed.sc.Variants) != 1 {
 		t.Errorf("after show: length %v, fire %q, %d variants", h.ed.sc.Setting.LengthMM, h.ed.sc.Fire.Rating, len(h.ed.sc.Variants))

@@ -80,6 +80,9 @@ type PlanSheet struct {
 	// the one scale. Nil, or counts that do not add up to the slots, lets
 	// the layout choose.
 	Rows []int
+	// RowLabels, with Rows, names each row; they are drawn at the left of
+	// the rows, which move right to make room.
+	RowLabels []string
 }
 
 // Validate checks the sheet's numbers: every size positive and finite,

@@ -263,6 +263,16 @@ func (p *planDrawer) place(r vg.Rectangle) (foot vg.Point, area vg.Rectangle) {
 	area.Min.Y += p.footerHeight() + vg.Points(6)
 	p.prepare()
 	p.scale = 0
+	p.rowLabels = len(s.RowLabels) > 0 && len(s.RowLabels) == len(s.Rows) && len(p.rowChoices(len(p.slots))) == 1 && len(s.Rows) > 0
+	if p.rowLabels {
+		lw := vg.Length(0)
+		for _, l := range s.RowLabels {
+			lw = max(lw, p.sty.footBold.Width(l))
+		}
+		lw = min(lw, (area.Max.X-area.Min.X)/4)
+		p.rowLabelX = area.Min.X
+		area.Min.X += lw + vg.Points(planGap)
+	}
 	if len(s.Sections) > 0 {
 		p.layout(area)
 	}

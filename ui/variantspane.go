@@ -71,7 +71,7 @@ func newVariantsPane(ed editor, do func(func())) *variantsPane {
 	p.table = widget.NewTable(p.tableSize, p.newCell, p.updateCell)
 	p.table.StickyRowCount, p.table.StickyColumnCount = 1, 1
 	p.table.OnSelected = p.tapped
-	p.table.SetColumnWidth(0, 150)
+	p.table.SetColumnWidth(0, 130)
 	p.raster = canvas.NewRaster(func(w, h int) image.Image {
 		p.mu.Lock()
 		changed := w != p.wantW || h != p.wantH
@@ -91,7 +91,7 @@ func newVariantsPane(ed editor, do func(func())) *variantsPane {
 	top := container.NewBorder(nil, nil, p.add, nil, p.status)
 	left := container.NewBorder(container.NewVBox(top, p.edit), nil, nil, nil, table)
 	split := container.NewHSplit(left, p.raster)
-	split.Offset = 0.55
+	split.Offset = 0.6
 	p.root = split
 	p.showRows()
 	return p
@@ -291,10 +291,10 @@ func (p *variantsPane) Show(s *Snapshot) {
 // Variant table geometry: column widths and the height of a size row
 // (size, weight and plan area, carbon: three lines).
 const (
-	variantColW   = 200
+	variantColW   = 180
 	variantRowH   = 72
 	variantHeadH  = 40
-	variantBaseCW = 170
+	variantBaseCW = 150
 )
 
 func (p *variantsPane) tableSize() (int, int) {

@@ -68,9 +68,12 @@ func VariantSections(c *model.Comparison, sys units.System, caution bool) plots.
 			sec := plots.PlanSection{Group: f.Material(), Title: title, WidthMM: o.WidthMM, DepthMM: o.DepthMM, ProtectionMM: o.ProtectionMM}
 			full := PlanSection(o, f.Material(), r.Static, sys)
 			sec.Parts = full.Parts
-			sec.Lines = []string{col.Name, units.PlanSize(r.Static.FootprintMM, sys)}
+			sec.Lines = []string{units.PlanSize(r.Static.FootprintMM, sys)}
 			sh.Sections = append(sh.Sections, sec)
 			n++
+		}
+		if n > 0 {
+			sh.RowLabels = append(sh.RowLabels, col.Name)
 		}
 		switch {
 		case n == 0:
@@ -84,7 +87,7 @@ func VariantSections(c *model.Comparison, sys units.System, caution bool) plots.
 			first = false
 		}
 	}
-	sh.Note = "One row per variant (the base first): the best working size of each material, every row at one scale."
+	sh.Note = "One row per variant, named at its left (the base first): the best working size of each material, every row at one scale."
 	if len(skipped) > 0 {
 		sh.Note += " Nothing works or could be drawn in: " + strings.Join(skipped, ", ") + "."
 	}

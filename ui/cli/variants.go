@@ -201,7 +201,11 @@ func printVariants(w io.Writer, c *model.Comparison, sys units.System) {
 	cols := c.Columns()
 	fmt.Fprintln(w, "Variants (each is the scheme with the inputs listed changed, checked at its own length and load):")
 	for _, col := range cols[1:] {
-		fmt.Fprintf(w, "  %s: %s", col.Name, model.ChangesText(col.Changes))
+		if t := model.ChangesText(col.Changes); t != col.Name {
+			fmt.Fprintf(w, "  %s: %s", col.Name, t)
+		} else {
+			fmt.Fprintf(w, "  %s", t)
+		}
 		if col.Model != nil {
 			fmt.Fprintf(w, " (length %s, demand %s)", units.Length(col.Result.Setting.LengthMM, sys), units.Force(col.Model.Loads.DemandN, sys))
 		}

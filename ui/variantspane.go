@@ -242,7 +242,11 @@ func (p *variantsPane) Show(s *Snapshot) {
 	}
 	sc := s.Model.Scheme
 	sc.Setting = s.Result.Setting
+	had := len(p.scheme.Variants) > 0
 	p.scheme = sc
+	if len(sc.Variants) == 0 && !had && p.comp == nil && p.status.Text != "" {
+		return // nothing to compare, and nothing shown to clear
+	}
 	p.showRows()
 	p.evalGen++
 	gen := p.evalGen

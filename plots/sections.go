@@ -75,6 +75,14 @@ type PlanSheet struct {
 	Caution string
 	// Empty is shown instead of the sections when there are none.
 	Empty string
+	// Rows, when set, fixes the rows: how many slots each row holds, in
+	// order (the reference square, when drawn, is the first slot), all at
+	// the one scale. Nil, or counts that do not add up to the slots, lets
+	// the layout choose.
+	Rows []int
+	// RowLabels, with Rows, names each row; they are drawn at the left of
+	// the rows, which move right to make room.
+	RowLabels []string
 }
 
 // Validate checks the sheet's numbers: every size positive and finite,

@@ -70,6 +70,9 @@ type planDrawer struct {
 	nameH, lineH     vg.Length
 	// noteLines and cautionLines are the footer texts wrapped to the width.
 	noteLines, cautionLines []string
+	// rowLabelX is where the row labels start; rowLabels says they are drawn.
+	rowLabelX vg.Length
+	rowLabels bool
 }
 
 // lineHeight is the spacing of text lines of a size in points.
@@ -173,6 +176,24 @@ func (p *planDrawer) draw(c draw.Canvas, fill bool) {
 	p.drawScaleBar(c, foot.X, foot.Y+vg.Points(3))
 	for k := range p.slots {
 		p.drawSlot(c, &p.slots[k])
+	}
+	p.drawRowLabels(c)
+}
+
+// drawRowLabels writes each row's label at its left, level with the
+// middle of the row's drawings.
+func (p *planDrawer) drawRowLabels(c draw.Canvas) {
+	if !p.rowLabels {
+		return
+	}
+	st := aligned(p.sty.footBold, draw.XLeft, draw.YCenter)
+	lo := 0
+	for r, n := range p.sheet.Rows {
+		if lo < len(p.slots) {
+			sl := &p.slots[lo]
+			c.FillText(st, vg.Point{X: p.rowLabelX, Y: (sl.top + sl.bottom) / 2}, p.sheet.RowLabels[r])
+		}
+		lo += n
 	}
 }
 

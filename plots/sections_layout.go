@@ -83,6 +83,34 @@ func rowsOf(n, r int) [][2]int {
 	return out
 }
 
+// rowChoices lists the row splits the layout tries: the sheet's own Rows
+// when they add up to the n slots, else 1 to planMaxRows rows of nearly
+// equal count.
+func (p *planDrawer) rowChoices(n int) [][][2]int {
+	total := 0
+	for _, k := range p.sheet.Rows {
+		if k <= 0 {
+			total = -1
+			break
+		}
+		total += k
+	}
+	if total == n && n > 0 {
+		rows := make([][2]int, 0, len(p.sheet.Rows))
+		lo := 0
+		for _, k := range p.sheet.Rows {
+			rows = append(rows, [2]int{lo, lo + k})
+			lo += k
+		}
+		return [][][2]int{rows}
+	}
+	var out [][][2]int
+	for r := 1; r <= min(n, planMaxRows); r++ {
+		out = append(out, rowsOf(n, r))
+	}
+	return out
+}
+
 // fits reports whether the slots fit the area at scale s (points per mm) in the given rows.
 func (p *planDrawer) fits(rows [][2]int, s float64, w, h vg.Length, labels bool) bool {
 	total := vg.Length(0)
@@ -149,8 +177,7 @@ func (p *planDrawer) layout(area vg.Rectangle) {
 		p.setLevel(k)
 		var rows [][2]int
 		s := 0.0
-		for r := 1; r <= min(n, planMaxRows); r++ {
-			rr := rowsOf(n, r)
+		for _, rr := range p.rowChoices(n) {
 			if v := p.bestScale(rr, w, h, true); v > s*1.03 {
 				rows, s = rr, v
 			}
@@ -164,8 +191,7 @@ func (p *planDrawer) layout(area vg.Rectangle) {
 	}
 	if bestS == 0 {
 		// Even the smallest labels overflow: fit the sections alone.
-		for r := 1; r <= min(n, planMaxRows); r++ {
-			rr := rowsOf(n, r)
+		for _, rr := range p.rowChoices(n) {
 			if v := p.bestScale(rr, w, h, false); v > bestS*1.03 {
 				best, bestS = rr, v
 			}
@@ -173,7 +199,7 @@ func (p *planDrawer) layout(area vg.Rectangle) {
 		bestLevel = len(planLevels) - 1
 	}
 	if bestS == 0 {
-		best, bestS = rowsOf(n, 1), 1e-3
+		best, bestS = p.rowChoices(n)[0], 1e-3
 	}
 	p.setLevel(bestLevel)
 	p.scale = vg.Length(bestS)
@@ -237,6 +263,16 @@ func (p *planDrawer) place(r vg.Rectangle) (foot vg.Point, area vg.Rectangle) {
 	area.Min.Y += p.footerHeight() + vg.Points(6)
 	p.prepare()
 	p.scale = 0
+	p.rowLabels = len(s.RowLabels) > 0 && len(s.RowLabels) == len(s.Rows) && len(p.rowChoices(len(p.slots))) == 1 && len(s.Rows) > 0
+	if p.rowLabels {
+		lw := vg.Length(0)
+		for _, l := range s.RowLabels {
+			lw = max(lw, p.sty.footBold.Width(l))
+		}
+		lw = min(lw, (area.Max.X-area.Min.X)/4)
+		p.rowLabelX = area.Min.X
+		area.Min.X += lw + vg.Points(planGap)
+	}
 	if len(s.Sections) > 0 {
 		p.layout(area)
 	}

@@ -140,7 +140,8 @@ type Window struct {
 
 	files fileState // the scheme's file, unsaved changes, recent files, autosave
 
-	mapv *mapView // the Map view beside the chart
+	mapv     *mapView      // the Map view beside the chart
+	variants *variantsPane // the Variants view beside the chart
 }
 
 // processStart is when the package was initialised, close to the start of the process.
@@ -201,6 +202,7 @@ func (w *Window) build() fyne.CanvasObject {
 	inputs := w.buildInputs()
 	chartArea, xsPanel := w.buildChartArea()
 	chartArea = w.withMapView(chartArea)
+	chartArea = w.withVariantsView(chartArea)
 	results := w.buildResults()
 	calc := w.buildCalc()
 
@@ -323,6 +325,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	w.snap = s
 	w.refreshRows()
 	w.sections.show(s)
+	w.showVariants(s)
 	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()

@@ -25,6 +25,7 @@ func init() {
 		{"crossovers", "[flags]", "lengths where the answer changes", runCrossovers},
 		{"curve", "--designation NAME --from 1m --to 10m [flags]", "strength of one candidate against length", runCurve},
 		{"map", "--length-range 1m..12m --load-range 500kN..5000kN [--steps 100x60] [flags] --out map.png (or --json)", "the winning family over length and load (or tributary area)", runMap},
+		{"variants", "[flags] --vary [NAME:]FLAG=VALUE[,FLAG=VALUE…] … [--json]", "each family's best size in up to four variants of the scheme, side by side", runVariants},
 		{"sections", "[flags] --out FILE.png|.svg|.pdf (or --json)", "the best size of each family drawn in plan to one scale", runSections},
 		{"report", "[flags] --out report.pdf", "the client report as PDF", runReport},
 		{"table", "[flags] [--csv table.csv]", "the candidate table as CSV", runTable},

@@ -44,6 +44,9 @@ type Scheme struct {
 	// Tie is the near-tie tolerance, a fraction of the ranking metric: the
 	// best family changes only when another beats it by more than this.
 	Tie float64
+	// Variants are the scheme with a few inputs changed, compared side by
+	// side (at most MaxVariants; see variants.go).
+	Variants []Variant
 }
 
 // CarbonFactors are cradle-to-gate (A1–A3) embodied-carbon factors per kind
@@ -141,6 +144,9 @@ func (sc *Scheme) Validate() error {
 		return err
 	}
 	if err := sc.Fire.validate(); err != nil {
+		return err
+	}
+	if err := validateVariants(sc.Variants); err != nil {
 		return err
 	}
 	if !finite(sc.Tie) || sc.Tie < 0 || sc.Tie > MaxTie {

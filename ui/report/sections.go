@@ -42,6 +42,7 @@ func compose(f *facts) *doc {
 	inputs(d, f)
 	chartSection(d, f)
 	mapSection(d, f)
+	variantsSection(d, f)
 	workingSizes(d, f)
 	fireSection(d, f)
 	checksSection(d, f)

@@ -40,23 +40,24 @@ var (
 )
 
 type wFile struct {
-	Format     string    `json:"format"`
-	Version    int       `json:"version"`
-	Name       string    `json:"name"`
-	Units      string    `json:"units"`
-	Rank       string    `json:"rank"`
-	Setting    wSetting  `json:"setting"`
-	Load       wLoad     `json:"load"`
-	SelfWeight bool      `json:"self_weight"`
-	Materials  []string  `json:"materials"`
-	Steel      wSteel    `json:"steel"`
-	Concrete   wConcrete `json:"concrete"`
-	Timber     wTimber   `json:"timber"`
-	Composite  wFilled   `json:"composite"`
-	Fire       wFire     `json:"fire"`
-	Carbon     wCarbon   `json:"carbon"`
-	ReportMap  bool      `json:"report_map"`
-	Tie        float64   `json:"tie"`
+	Format     string     `json:"format"`
+	Version    int        `json:"version"`
+	Name       string     `json:"name"`
+	Units      string     `json:"units"`
+	Rank       string     `json:"rank"`
+	Setting    wSetting   `json:"setting"`
+	Load       wLoad      `json:"load"`
+	SelfWeight bool       `json:"self_weight"`
+	Materials  []string   `json:"materials"`
+	Steel      wSteel     `json:"steel"`
+	Concrete   wConcrete  `json:"concrete"`
+	Timber     wTimber    `json:"timber"`
+	Composite  wFilled    `json:"composite"`
+	Fire       wFire      `json:"fire"`
+	Carbon     wCarbon    `json:"carbon"`
+	ReportMap  bool       `json:"report_map"`
+	Tie        float64    `json:"tie"`
+	Variants   []wVariant `json:"variants,omitempty"`
 }
 
 type wFire struct {
@@ -213,6 +214,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 	}
 	w.Composite = marshalComposite(sc.Composite, sys)
 	w.ReportMap = sc.ReportMap
+	w.Variants = marshalVariants(sc.Variants)
 	defaults := model.DefaultCarbon()
 	for _, ck := range model.CarbonKinds {
 		v, ok := sc.Carbon[ck.Key]
@@ -600,6 +602,9 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 		return sc, e
 	}
 	if e := r.reportMap(root, &sc); e != nil {
+		return sc, e
+	}
+	if e := r.variants(root, &sc); e != nil {
 		return sc, e
 	}
 	return sc, r.tie(root, &sc)

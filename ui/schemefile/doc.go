@@ -131,6 +131,13 @@
 //	                                   the ranking metric; may be absent (0.05)
 //	}
 //
+// A top-level "variants" array may follow: up to four variants of the
+// scheme, each {"name": "…", "changes": {"length": "5.5m", …}} with the
+// inputs changed named as the compare flags without dashes and each value
+// as that flag reads it (see variants.go). It is optional: absent means no
+// variants, Marshal writes it only when there are some, and it needs no
+// new format version.
+//
 // The "composite" object and each of its fields may be left out: a file
 // written before the composite material existed reads unchanged, with every
 // filled family on and the fill at the concrete f'c. Marshal always writes

@@ -1,0 +1,56 @@
+package ui
+
+import (
+	"fyne.io/fyne/v2/container"
+
+	"upright/ui/model"
+
+	"fyne.io/fyne/v2"
+)
+
+// windowEditor lets a pane change the current window's scheme: each edit
+// goes through the window's own input path (one revalidation, one
+// evaluation).
+type windowEditor struct{ w *Window }
+
+// Edit applies one change to the scheme being edited.
+func (e windowEditor) Edit(what string, change func(sc *model.Scheme)) {
+	e.w.after(e.w.st.Update(change))
+}
+
+// withVariantsView adds the Variants view as a tab beside Chart, Sections
+// and Map.
+func (w *Window) withVariantsView(chartArea fyne.CanvasObject) fyne.CanvasObject {
+	w.variants = newVariantsPane(windowEditor{w}, w.do)
+	if tabs := w.sectionsTabs; tabs != nil {
+		tabs.Append(container.NewTabItem("Variants", w.variants.Object()))
+	}
+	return chartArea
+}
+
+// showVariants feeds the Variants view the snapshot the window shows.
+func (w *Window) showVariants(s *Snapshot) {
+	if w.variants != nil {
+		w.variants.Show(s)
+	}
+}
+
+// showVariantsDemo is the Variants screenshot: the scheme shown with four
+// variants (as testdata/schemes/demo-variants.upright.json has them), on the
+// Variants tab; it returns what undoes both.
+func showVariantsDemo(w *Window) func() {
+	was := append([]model.Variant(nil), w.st.Draft.Variants...)
+	windowEditor{w}.Edit("variants for the screenshot", func(sc *model.Scheme) {
+		sc.Variants = []model.Variant{
+			{Name: "22 ft ground floor", Changes: []model.Change{{Name: "length", Value: "22ft"}}},
+			{Name: "2 h rating", Changes: []model.Change{{Name: "fire", Value: "2h"}}},
+			{Name: "fixed bases", Changes: []model.Change{{Name: "ends", Value: "fixed-pinned"}}},
+			{Name: "bigger bays", Changes: []model.Change{{Name: "tributary", Value: "1200ft2"}}},
+		}
+	})
+	undoTab := showTab("Variants")(w)
+	return func() {
+		undoTab()
+		windowEditor{w}.Edit("variants back", func(sc *model.Scheme) { sc.Variants = was })
+	}
+}

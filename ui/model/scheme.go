@@ -44,6 +44,9 @@ type Scheme struct {
 	// Tie is the near-tie tolerance, a fraction of the ranking metric: the
 	// best family changes only when another beats it by more than this.
 	Tie float64
+	// Building is a whole building to take down and size column by column
+	// (NewSchedule); nil for a scheme without one.
+	Building *Building
 }
 
 // CarbonFactors are cradle-to-gate (A1–A3) embodied-carbon factors per kind
@@ -145,6 +148,11 @@ func (sc *Scheme) Validate() error {
 	}
 	if !finite(sc.Tie) || sc.Tie < 0 || sc.Tie > MaxTie {
 		return bad("tie", sc.Tie, TieAccepted)
+	}
+	if sc.Building != nil {
+		if err := sc.Building.Validate(); err != nil {
+			return err
+		}
 	}
 	for k, v := range sc.Carbon {
 		if !finite(v) || v < 0 || v > 10000 {

@@ -329,7 +329,7 @@ func (e *Elevation) draw(c draw.Canvas, fill bool) {
 		base[k+1] = base[k] + h
 	}
 	for si, s := range e.Stacks {
-		cx := left + slot*vg.Length(si) + slot*0.3
+		cx := left + slot*vg.Length(si) + slot*0.18
 		c.FillText(nameSty, vg.Point{X: cx, Y: top}, s.Name)
 		fillC, _ := bodyColours(s.Group)
 		for _, p := range s.Pieces {
@@ -353,7 +353,8 @@ func (e *Elevation) draw(c draw.Canvas, fill bool) {
 					c.StrokeLine2(draw.LineStyle{Color: inkText, Width: vg.Points(1.2)}, cx-hw-vg.Points(3), yb, cx+hw+vg.Points(3), yb)
 				}
 			}
-			c.FillText(labSty, vg.Point{X: cx + vg.Length(widest*ws/2) + vg.Points(4), Y: (ya + yb) / 2}, p.Label)
+			// The size just under the piece's top (clear of the level lines).
+			c.FillText(labSty, vg.Point{X: cx + vg.Length(widest*ws/2) + vg.Points(4), Y: yb - vg.Points(bldSmall*1.4)}, p.Label)
 		}
 	}
 }

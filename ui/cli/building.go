@@ -181,8 +181,8 @@ func buildingScheme(f *schemeFlags, bf *buildingFlags, args []string) (model.Sch
 		base.Setting = base.Setting.AtLength(b.StoreysMM[0])
 	}
 	if f.set("facade") {
-		v, err := parseLineLoad(bf.facade)
-		if err != nil {
+		v, err := units.ParseLineLoad(bf.facade)
+		if err != nil || v < 0 || v > model.MaxFacadeKNM {
 			return base, usagef("--facade %q: not accepted; give a façade dead load per metre of edge from 0 to 100 kN/m (0 to 6.85 kip/ft), e.g. 8kN/m or 0.5kip/ft", bf.facade)
 		}
 		b.FacadeKNPerM = v
@@ -244,32 +244,6 @@ func buildingScheme(f *schemeFlags, bf *buildingFlags, args []string) (model.Sch
 	}
 	sc.Building = &b
 	return sc, nil
-}
-
-// parseLineLoad parses a load per length: kN/m, N/m, kip/ft or lb/ft (plf); kN/m back.
-func parseLineLoad(s string) (float64, error) {
-	t := strings.ToLower(strings.ReplaceAll(strings.TrimSpace(s), " ", ""))
-	table := []struct {
-		unit string
-		f    float64
-	}{{"kn/m", 1}, {"n/m", 1e-3}, {"kip/ft", 14.593903}, {"klf", 14.593903}, {"lb/ft", 0.014593903}, {"plf", 0.014593903}}
-	for _, u := range table {
-		if strings.HasSuffix(t, u.unit) {
-			var v float64
-			if _, err := fmt.Sscanf(strings.TrimSuffix(t, u.unit), "%g", &v); err != nil || strings.TrimSuffix(t, u.unit) == "" {
-				return 0, fmt.Errorf("not a number")
-			}
-			v *= u.f
-			if math.IsNaN(v) || math.IsInf(v, 0) || v < 0 || v > model.MaxFacadeKNM {
-				return 0, fmt.Errorf("out of range")
-			}
-			return v, nil
-		}
-	}
-	if t == "0" {
-		return 0, nil
-	}
-	return 0, fmt.Errorf("no unit")
 }
 
 func runBuilding(args []string, stdout, stderr io.Writer) error {

@@ -40,23 +40,24 @@ var (
 )
 
 type wFile struct {
-	Format     string    `json:"format"`
-	Version    int       `json:"version"`
-	Name       string    `json:"name"`
-	Units      string    `json:"units"`
-	Rank       string    `json:"rank"`
-	Setting    wSetting  `json:"setting"`
-	Load       wLoad     `json:"load"`
-	SelfWeight bool      `json:"self_weight"`
-	Materials  []string  `json:"materials"`
-	Steel      wSteel    `json:"steel"`
-	Concrete   wConcrete `json:"concrete"`
-	Timber     wTimber   `json:"timber"`
-	Composite  wFilled   `json:"composite"`
-	Fire       wFire     `json:"fire"`
-	Carbon     wCarbon   `json:"carbon"`
-	ReportMap  bool      `json:"report_map"`
-	Tie        float64   `json:"tie"`
+	Format     string     `json:"format"`
+	Version    int        `json:"version"`
+	Name       string     `json:"name"`
+	Units      string     `json:"units"`
+	Rank       string     `json:"rank"`
+	Setting    wSetting   `json:"setting"`
+	Load       wLoad      `json:"load"`
+	SelfWeight bool       `json:"self_weight"`
+	Materials  []string   `json:"materials"`
+	Steel      wSteel     `json:"steel"`
+	Concrete   wConcrete  `json:"concrete"`
+	Timber     wTimber    `json:"timber"`
+	Composite  wFilled    `json:"composite"`
+	Fire       wFire      `json:"fire"`
+	Carbon     wCarbon    `json:"carbon"`
+	ReportMap  bool       `json:"report_map"`
+	Tie        float64    `json:"tie"`
+	Building   *wBuilding `json:"building,omitempty"`
 }
 
 type wFire struct {
@@ -212,6 +213,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 	}
 	w.Composite = marshalComposite(sc.Composite, sys)
 	w.ReportMap = sc.ReportMap
+	w.Building = marshalBuilding(sc.Building, sys)
 	defaults := model.DefaultCarbon()
 	for _, ck := range model.CarbonKinds {
 		v, ok := sc.Carbon[ck.Key]
@@ -550,7 +552,7 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 	if err := r.header(root); err != nil {
 		return sc, err
 	}
-	if err := r.object(root, "", topKeys, "a scheme"); err != nil {
+	if err := r.object(root, "", append(append([]string(nil), topKeys...), omittedTopKeys...), "a scheme"); err != nil {
 		return sc, err
 	}
 	name, err := r.str(root, "", "name", "the scheme's name")
@@ -599,6 +601,9 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 		return sc, e
 	}
 	if e := r.reportMap(root, &sc); e != nil {
+		return sc, e
+	}
+	if e := r.building(root, &sc); e != nil {
 		return sc, e
 	}
 	return sc, r.tie(root, &sc)

@@ -334,7 +334,7 @@ func printBuilding(w io.Writer, s *model.Schedule) {
 			missing = append(missing, t.Name)
 			continue
 		}
-		fmt.Fprintf(tw, "%s\t%s\t%d\t%s\t%s\t%s\t%s\t%.0f\t%s\t%.2f%%\n", t.Name, t.Material, t.Columns, units.Length(t.LengthM*1000, sys),
+		fmt.Fprintf(tw, "%s\t%s\t%d\t%s\t%s\t%s\t%s\t%.0f\t%s\t%.2f%%\n", t.Name, t.Material, t.Columns, totalLength(t.LengthM, sys),
 			orDash(t.SteelKg, units.Mass(t.SteelKg, sys)), volume(t.ConcreteM3, sys), volume(t.TimberM3, sys), t.CarbonKg, units.Area(t.ColumnAreaTotal, sys), 100*t.Share())
 	}
 	tw.Flush()
@@ -396,4 +396,12 @@ func StackText(stack []model.StackEntry) string {
 		k = j + 1
 	}
 	return "storeys " + strings.Join(parts, "; ")
+}
+
+// totalLength formats a total column length, whole feet or metres to 0.1 m.
+func totalLength(m float64, sys units.System) string {
+	if sys == units.US {
+		return fmt.Sprintf("%.0f ft", m*1000/units.MMPerFoot)
+	}
+	return fmt.Sprintf("%.1f m", m)
 }

@@ -73,10 +73,11 @@ type facts struct {
 	sys, other units.System
 	res        *model.Result
 	crossovers []model.Crossover
-	chartPNG   []byte // nil when there is no chart
-	chartNote  string // why there is no chart
-	mapPNG     []byte // the map figure; nil when not asked for or not drawn
-	mapNote    string // why an asked-for map is missing
+	chartPNG   []byte         // nil when there is no chart
+	chartNote  string         // why there is no chart
+	mapPNG     []byte         // the map figure; nil when not asked for or not drawn
+	mapNote    string         // why an asked-for map is missing
+	building   *buildingFacts // the building page; nil when the scheme has no building
 }
 
 // gather evaluates the model at its setting, finds the crossovers over the
@@ -136,6 +137,9 @@ func Write(w io.Writer, m *model.Model, opt Options) error {
 		return err
 	}
 	if err := gatherMap(context.Background(), f); err != nil {
+		return err
+	}
+	if err := gatherBuilding(f); err != nil {
 		return err
 	}
 	d := compose(f)

@@ -33,6 +33,7 @@ var shotViews = []shotView{
 	{"load-takedown", showTab("Load takedown")},
 	{"plan-sections", showTab("Sections")},
 	{"map", showTab("Map")},
+	{"building", showBuilding},
 	{"file-menu", showFileMenu},
 	{"inputs-folded", func(w *Window) func() { w.FoldInputs(true); return func() { w.FoldInputs(false) } }},
 	{"sections-folded", func(w *Window) func() {

@@ -107,6 +107,7 @@ type Window struct {
 
 	sections     *sectionsView      // the Sections tab beside the chart
 	sectionsTabs *container.AppTabs // the chart and Sections tabs
+	buildingView pane               // the Building tab (buildingpane_hook.go)
 
 	// results
 	table         *liveTable
@@ -201,6 +202,7 @@ func (w *Window) build() fyne.CanvasObject {
 	inputs := w.buildInputs()
 	chartArea, xsPanel := w.buildChartArea()
 	chartArea = w.withMapView(chartArea)
+	w.buildingView = w.withBuildingView()
 	results := w.buildResults()
 	calc := w.buildCalc()
 
@@ -323,6 +325,9 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	w.snap = s
 	w.refreshRows()
 	w.sections.show(s)
+	if w.buildingView != nil {
+		w.buildingView.Show(s)
+	}
 	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()

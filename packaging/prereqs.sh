@@ -6,7 +6,7 @@ set -euo pipefail
 want_go="1.26"
 need=()
 have() { dpkg-query -W -f='${Status}' "$1" 2>/dev/null | grep -q "install ok installed"; }
-for p in ca-certificates curl gcc pkg-config libgl1-mesa-dev xorg-dev xvfb poppler-utils xz-utils; do
+for p in ca-certificates curl gcc pkg-config libgl1-mesa-dev xorg-dev xvfb poppler-utils xz-utils python3-ezdxf; do
 	have "$p" || need+=("$p")
 done
 if [ "${#need[@]}" -gt 0 ]; then

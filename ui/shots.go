@@ -34,6 +34,7 @@ var shotViews = []shotView{
 	{"plan-sections", showTab("Sections")},
 	{"map", showTab("Map")},
 	{"variants", showVariantsDemo},
+	{"building", showBuilding},
 	{"file-menu", showFileMenu},
 	{"inputs-folded", func(w *Window) func() { w.FoldInputs(true); return func() { w.FoldInputs(false) } }},
 	{"sections-folded", func(w *Window) func() {

@@ -2,21 +2,10 @@ package ui
 
 import (
 	"fyne.io/fyne/v2/container"
-
 	"upright/ui/model"
 
 	"fyne.io/fyne/v2"
 )
-
-// windowEditor lets a pane change the current window's scheme: each edit
-// goes through the window's own input path (one revalidation, one
-// evaluation).
-type windowEditor struct{ w *Window }
-
-// Edit applies one change to the scheme being edited.
-func (e windowEditor) Edit(what string, change func(sc *model.Scheme)) {
-	e.w.after(e.w.st.Update(change))
-}
 
 // withVariantsView adds the Variants view as a tab beside Chart, Sections
 // and Map.

@@ -107,6 +107,7 @@ type Window struct {
 
 	sections     *sectionsView      // the Sections tab beside the chart
 	sectionsTabs *container.AppTabs // the chart and Sections tabs
+	buildingView pane               // the Building tab (buildingpane_hook.go)
 
 	// results
 	table         *liveTable
@@ -203,6 +204,7 @@ func (w *Window) build() fyne.CanvasObject {
 	chartArea, xsPanel := w.buildChartArea()
 	chartArea = w.withMapView(chartArea)
 	chartArea = w.withVariantsView(chartArea)
+	w.buildingView = w.withBuildingView()
 	results := w.buildResults()
 	calc := w.buildCalc()
 
@@ -326,6 +328,9 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	w.refreshRows()
 	w.sections.show(s)
 	w.showVariants(s)
+	if w.buildingView != nil {
+		w.buildingView.Show(s)
+	}
 	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()

@@ -27,6 +27,7 @@ func init() {
 		{"map", "--length-range 1m..12m --load-range 500kN..5000kN [--steps 100x60] [flags] --out map.png (or --json)", "the winning family over length and load (or tributary area)", runMap},
 		{"variants", "[flags] --vary [NAME:]FLAG=VALUE[,FLAG=VALUE…] … [--json]", "each family's best size in up to four variants of the scheme, side by side", runVariants},
 		{"sections", "[flags] --out FILE.png|.svg|.pdf (or --json)", "the best size of each family drawn in plan to one scale", runSections},
+		{"building", "--bays-x 9m,9m,9m --bays-y 7.5m,7.5m --storeys 4.2m,3.6m,3.6m [flags] [--json] [--out plan.png] [--dxf plan.dxf]", "every column of a building taken down and sized, with totals per family", runBuilding},
 		{"report", "[flags] --out report.pdf", "the client report as PDF", runReport},
 		{"table", "[flags] [--csv table.csv]", "the candidate table as CSV", runTable},
 		{"scheme", "[flags] --out FILE", "write the scheme built from the flags as a file", runScheme},

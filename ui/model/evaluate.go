@@ -149,6 +149,8 @@ func selfStoreys(sc *Scheme) float64 {
 	switch {
 	case !sc.SelfWeight:
 		return 0
+	case sc.Load.Mode == LoadTakedown && sc.Load.SelfStoreys > 0:
+		return sc.Load.SelfStoreys
 	case sc.Load.Mode == LoadTakedown:
 		return float64(1 + sc.Load.Floors)
 	}

@@ -31,6 +31,13 @@ type Load struct {
 	LiveReduction bool    // apply ASCE 7-22 4.7 live-load reduction
 	KLL           float64 // live load element factor of ASCE 7-22 Table 4.7-1 (4 for interior and exterior columns without cantilever slabs)
 	Occupancy     string  // "general", "assembly" (no reduction, 4.7.5), "storage" (heavy live load > 4.79 kPa, 4.7.3), "garage" (4.7.4)
+
+	// Building takedown additions (zero for a single column).
+	PointDeadN float64 // service dead load applied as point loads (façade, columns above), N
+	// SelfStoreys, when above 0, is how many times its own length of the
+	// column's own size weighs on it (a building stack of equal sizes above
+	// it, in units of its length) instead of 1 + Floors.
+	SelfStoreys float64
 }
 
 // Combo is one load combination evaluated in the takedown.

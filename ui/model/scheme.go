@@ -47,6 +47,9 @@ type Scheme struct {
 	// Variants are the scheme with a few inputs changed, compared side by
 	// side (at most MaxVariants; see variants.go).
 	Variants []Variant
+	// Building is a whole building to take down and size column by column
+	// (NewSchedule); nil for a scheme without one.
+	Building *Building
 }
 
 // CarbonFactors are cradle-to-gate (A1–A3) embodied-carbon factors per kind
@@ -151,6 +154,11 @@ func (sc *Scheme) Validate() error {
 	}
 	if !finite(sc.Tie) || sc.Tie < 0 || sc.Tie > MaxTie {
 		return bad("tie", sc.Tie, TieAccepted)
+	}
+	if sc.Building != nil {
+		if err := sc.Building.Validate(); err != nil {
+			return err
+		}
 	}
 	for k, v := range sc.Carbon {
 		if !finite(v) || v < 0 || v > 10000 {

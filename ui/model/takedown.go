@@ -78,6 +78,12 @@ func (l Load) Validate() error {
 			return bad(q.field, q.v, q.what)
 		}
 	}
+	if !finite(l.PointDeadN) || l.PointDeadN < 0 || l.PointDeadN > maxServiceN {
+		return bad("point dead load", l.PointDeadN, "a point dead load from 0 to 200 MN (45,000 kip)")
+	}
+	if !finite(l.SelfStoreys) || l.SelfStoreys < 0 || l.SelfStoreys > 1000 {
+		return bad("self-weight storeys", l.SelfStoreys, "0 (one per floor carried) or a multiple of the column's length from 0 to 1000")
+	}
 	if !finite(l.KLL) || (l.KLL != 0 && l.KLL != 1 && l.KLL != 2 && l.KLL != 3 && l.KLL != 4) {
 		return bad("kll", l.KLL, "0 for the interior-column default of 4, or a live load element factor 1, 2, 3 or 4 (ASCE 7-22 Table 4.7-1; dimensionless, same in SI and US)")
 	}
@@ -288,13 +294,13 @@ func takedown(l Load, m Method) LoadSummary {
 		kll = DefaultKLL // ASCE 7-22 Table 4.7-1: interior column
 	}
 	ls := LoadSummary{Known: true, Method: m}
-	ls.DeadN = (n*l.FloorDeadKPa + l.RoofDeadKPa) * a * kN
+	ls.DeadN = (n*l.FloorDeadKPa+l.RoofDeadKPa)*a*kN + l.PointDeadN
 	ls.LiveRawN = n * l.FloorLiveKPa * a * kN
 	ls.RoofLiveN = l.RoofLiveKPa * a * kN
 	ls.SnowN = l.SnowKPa * a * kN
 	at := n * a // sum of the tributary areas of the floors carried
 	steps := []Step{
-		{"ASCE 7-22 3.1", "D", "(floors × floor dead + roof dead) × tributary area", ls.DeadN, "N"},
+		{"ASCE 7-22 3.1", "D", "(floors × floor dead + roof dead) × tributary area" + pointWords(l), ls.DeadN, "N"},
 		{"ASCE 7-22 4.3", "Lo", "floors × floor live × tributary area", ls.LiveRawN, "N"},
 		{"ASCE 7-22 4.7.2", "AT", "floors × tributary area (floors carried)", at, "m2"},
 		{"ASCE 7-22 Table 4.7-1", "KLL", "live load element factor (4 for an interior column unless given)", kll, ""},
@@ -362,4 +368,12 @@ func plural(n int, one, many string) string {
 		return one
 	}
 	return many
+}
+
+// pointWords says, after the dead-load formula, that point dead loads are added.
+func pointWords(l Load) string {
+	if l.PointDeadN > 0 {
+		return " + point dead loads (façade, columns above)"
+	}
+	return ""
 }

@@ -78,6 +78,7 @@ type facts struct {
 	mapPNG     []byte            // the map figure; nil when not asked for or not drawn
 	mapNote    string            // why an asked-for map is missing
 	variants   *model.Comparison // the scheme's variants side by side; nil when it has none
+	building   *buildingFacts    // the building page; nil when the scheme has no building
 }
 
 // gather evaluates the model at its setting, finds the crossovers over the
@@ -140,6 +141,9 @@ func Write(w io.Writer, m *model.Model, opt Options) error {
 		return err
 	}
 	if err := gatherVariants(context.Background(), f); err != nil {
+		return err
+	}
+	if err := gatherBuilding(f); err != nil {
 		return err
 	}
 	d := compose(f)

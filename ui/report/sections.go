@@ -48,6 +48,7 @@ func compose(f *facts) *doc {
 	checksSection(d, f)
 	crossoverSection(d, f)
 	takedownSection(d, f)
+	buildingSection(d, f)
 	assumptions(d, f)
 	cautions(d)
 	return d

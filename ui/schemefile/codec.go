@@ -58,6 +58,7 @@ type wFile struct {
 	ReportMap  bool       `json:"report_map"`
 	Tie        float64    `json:"tie"`
 	Variants   []wVariant `json:"variants,omitempty"`
+	Building   *wBuilding `json:"building,omitempty"`
 }
 
 type wFire struct {
@@ -215,6 +216,7 @@ func Marshal(sc model.Scheme) ([]byte, error) {
 	w.Composite = marshalComposite(sc.Composite, sys)
 	w.ReportMap = sc.ReportMap
 	w.Variants = marshalVariants(sc.Variants)
+	w.Building = marshalBuilding(sc.Building, sys)
 	defaults := model.DefaultCarbon()
 	for _, ck := range model.CarbonKinds {
 		v, ok := sc.Carbon[ck.Key]
@@ -553,7 +555,7 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 	if err := r.header(root); err != nil {
 		return sc, err
 	}
-	if err := r.object(root, "", topKeys, "a scheme"); err != nil {
+	if err := r.object(root, "", append(append([]string(nil), topKeys...), omittedTopKeys...), "a scheme"); err != nil {
 		return sc, err
 	}
 	name, err := r.str(root, "", "name", "the scheme's name")
@@ -605,6 +607,9 @@ func (r *reader) scheme(root *node) (model.Scheme, error) {
 		return sc, e
 	}
 	if e := r.variants(root, &sc); e != nil {
+		return sc, e
+	}
+	if e := r.building(root, &sc); e != nil {
 		return sc, e
 	}
 	return sc, r.tie(root, &sc)

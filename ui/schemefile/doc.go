@@ -143,6 +143,25 @@
 // filled family on and the fill at the concrete f'c. Marshal always writes
 // it. It needs no new format version.
 //
+// The optional "building" object (a whole building taken down and sized
+// column by column, `upright building`) is written only for a scheme that has
+// one; a file without it, or with null, has no building and reads as before:
+//
+//	"building": {
+//	  "bays_x": ["9 m", "9 m", "9 m"],   bay spacings along x, 1 to 40, 1 m to 30 m each
+//	  "bays_y": ["7.5 m", "7.5 m"],      bay spacings along y, likewise
+//	  "storeys": ["4.2 m", "3.6 m"],     storey heights from the ground up, 1 to 60, 2 m to 30 m
+//	  "floor_dead": "4 kPa", "floor_live": "2.4 kPa", "roof_dead": "3 kPa",
+//	  "roof_live": "0 kPa", "snow": "1.5 kPa",
+//	  "occupancy": "",                  as load.takedown.occupancy
+//	  "live_reduction": true,
+//	  "facade": "0 kN/m",               façade dead load per metre of edge at every level; absent: 0
+//	  "overhang": "0 m",                slab past the outer grid lines; absent: 0
+//	  "change_every": 2,                storeys a column keeps its size, 1 to 60; absent: 2
+//	  "plan_family": "",                family the plan draws; "" or absent: the best
+//	  "plan_storey": 0                  storey the plan shows, 1 the ground; 0 or absent: the ground
+//	}
+//
 // Marshal writes each quantity in the unit of the scheme's own system (ft,
 // kip, psf, ft2, ksi for US; m, kN, kPa, m2, MPa for SI) when that reads back
 // to exactly the same number, and otherwise in the model's own unit (mm, N,

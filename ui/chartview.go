@@ -4,10 +4,12 @@ import (
 	"fmt"
 	"image"
 	"image/color"
+	"math"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
 	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/driver/desktop"
 	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
@@ -50,7 +52,40 @@ func (s *lengthSlider) TypedKey(k *fyne.KeyEvent) {
 		s.SetValue(s.Min)
 	case fyne.KeyEnd:
 		s.SetValue(s.Max)
+	default:
+		return
 	}
+	if s.OnChangeEnded != nil {
+		s.OnChangeEnded(s.Value)
+	}
+}
+
+// snap rounds a dragged value (ft or m) to a round length of the shown
+// unit, 1 in or 50 mm, unless held (a modifier key) asks for it unrounded;
+// the ends of the range are kept.
+func (s *lengthSlider) snap(v float64, sys units.System, held bool) float64 {
+	if held || v <= s.Min || v >= s.Max {
+		return v
+	}
+	step := 1.0 / 12 // 1 in, in ft
+	if sys == units.SI {
+		step = 0.05 // 50 mm, in m
+	}
+	r := math.Round(v/step) * step
+	return min(max(r, s.Min), s.Max)
+}
+
+// snapHeld reports whether a modifier key (Shift, Ctrl, Alt) is held, which
+// lets the slider move without rounding.
+func snapHeld() bool {
+	a := fyne.CurrentApp()
+	if a == nil {
+		return false
+	}
+	if d, ok := a.Driver().(desktop.Driver); ok {
+		return d.CurrentKeyModifiers()&(fyne.KeyModifierShift|fyne.KeyModifierControl|fyne.KeyModifierAlt) != 0
+	}
+	return false
 }
 
 // toDisplay converts mm to the slider's unit (ft or m).
@@ -99,7 +134,14 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		if w.quiet > 0 {
 			return
 		}
-		w.moveTo(fromDisplay(v, w.sys()), false)
+		w.beginDrag()
+		w.moveTo(fromDisplay(w.slider.snap(v, w.sys(), snapHeld()), w.sys()), true)
+	}
+	w.slider.OnChangeEnded = func(float64) {
+		if w.quiet > 0 {
+			return
+		}
+		w.endDrag()
 	}
 	length := w.newField("length")
 	length.entry.SetPlaceHolder("e.g. 14'-6\" or 4.4 m")
@@ -136,7 +178,8 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		})
 	w.xsList.OnSelected = func(id widget.ListItemID) {
 		if id >= 0 && id < len(w.xs) {
-			w.moveTo(w.xs[id].LengthMM, true)
+			x := w.xs[id]
+			w.step("crossover at "+units.Length(x.LengthMM, w.sys()), func() Outcome { return w.moveTo(x.LengthMM, true) })
 		}
 		w.xsList.UnselectAll()
 	}
@@ -220,7 +263,8 @@ func kindWords(kind string) string {
 }
 
 // moveTo sets the length (slider drag, crossover chosen, typed elsewhere).
-func (w *Window) moveTo(mm float64, moveSlider bool) {
+// It is not itself an undo step: the caller files it (a drag when it ends).
+func (w *Window) moveTo(mm float64, moveSlider bool) Outcome {
 	out := w.st.SetLength(mm)
 	if moveSlider {
 		w.syncSlider()
@@ -228,6 +272,7 @@ func (w *Window) moveTo(mm float64, moveSlider bool) {
 	w.setEntryQuietForce(w.fields["length"], w.st.Text("length"))
 	w.setEntryQuietForce(w.fields["weak-axis length"], w.st.Text("weak-axis length"))
 	w.after(out)
+	return Outcome{}
 }
 
 // configureSlider sets the slider's range and unit from the state.
@@ -240,7 +285,7 @@ func (w *Window) configureSlider() {
 	w.quiet++
 	w.slider.Min, w.slider.Max = toDisplay(r.FromMM, sys), toDisplay(r.ToMM, sys)
 	if sys == units.SI {
-		w.slider.fine, w.slider.coarse = 0.025, 0.25
+		w.slider.fine, w.slider.coarse = 0.05, 0.25
 	} else {
 		w.slider.fine, w.slider.coarse = 1.0/12, 1
 	}

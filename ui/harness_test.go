@@ -147,6 +147,7 @@ func (h *harness) typeInto(id, text string) {
 		e := h.w.fields[id].entry
 		e.SetText("")
 		test.Type(e, text)
+		e.commit()
 	})
 	h.settle()
 }

@@ -8,6 +8,7 @@ import (
 	"math"
 	"os"
 	"reflect"
+	"strings"
 	"sync"
 	"sync/atomic"
 
@@ -134,7 +135,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 		if w.quiet > 0 || on == w.st.Draft.ReportMap {
 			return
 		}
-		w.after(w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }))
+		w.step("map in the report", func() Outcome { return w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }) })
 	})
 	export := widget.NewButton("Export…", w.ExportMap)
 	foot := container.NewBorder(nil, nil, nil, container.NewHBox(mv.inReport, export, fixedWidth(160, mv.progress)), mv.status)
@@ -431,12 +432,18 @@ func (w *Window) moveMapPoint(lengthMM, load float64, axis model.MapAxis) {
 	if axis == model.MapTributary {
 		id = "tributary"
 	}
-	if f := specByID(id); f != nil {
-		out := w.st.SetText(id, f.format(load, w.sys()))
-		if fl := w.fields[id]; fl != nil {
-			w.setEntryQuietForce(fl, w.st.Text(id))
-		}
-		w.after(out)
+	f := specByID(id)
+	if f == nil {
+		return
 	}
+	before := memoOf(w.st)
+	out := w.st.SetText(id, f.format(load, w.sys()))
+	if fl := w.fields[id]; fl != nil {
+		w.setEntryQuietForce(fl, w.st.Text(id))
+	}
+	w.after(out)
 	w.moveTo(lengthMM, true)
+	what := "map point: " + f.label + " " + w.st.Text(id) + ", length " + w.st.Text("length")
+	w.record(what, before)
+	w.notify("Map click set " + strings.TrimPrefix(what, "map point: ") + " (Ctrl+Z undoes it)")
 }

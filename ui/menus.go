@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"strings"
+
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/dialog"
@@ -18,6 +20,9 @@ var (
 	shortcutSaveAs = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
 	shortcutExport = &desktop.CustomShortcut{KeyName: fyne.KeyE, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutLength = &desktop.CustomShortcut{KeyName: fyne.KeyL, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutUndo   = &desktop.CustomShortcut{KeyName: fyne.KeyZ, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutRedo   = &desktop.CustomShortcut{KeyName: fyne.KeyZ, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
+	shortcutRedoY  = &desktop.CustomShortcut{KeyName: fyne.KeyY, Modifier: fyne.KeyModifierShortcutDefault}
 )
 
 // fileItem makes a file menu item that runs its hook, or says it is not available.
@@ -55,7 +60,10 @@ func (w *Window) mainMenu() *fyne.MainMenu {
 		fyne.NewMenuItem("Keyboard", w.showKeys),
 		fyne.NewMenuItem("About Upright", w.ShowAbout),
 	)
-	return fyne.NewMainMenu(file, help)
+	edit := w.newEditMenu()
+	w.ed.undoItem.Shortcut = shortcutUndo
+	w.ed.redoItem.Shortcut = shortcutRedo
+	return fyne.NewMainMenu(file, edit, help)
 }
 
 // addShortcuts registers the shortcuts on the canvas too, for drivers without a main menu.
@@ -66,6 +74,9 @@ func (w *Window) addShortcuts() {
 	c.AddShortcut(shortcutSaveAs, func(fyne.Shortcut) { w.SaveAs() })
 	c.AddShortcut(shortcutExport, func(fyne.Shortcut) { w.Export() })
 	c.AddShortcut(shortcutLength, func(fyne.Shortcut) { c.Focus(w.slider) })
+	c.AddShortcut(shortcutUndo, func(fyne.Shortcut) { w.Undo() })
+	c.AddShortcut(shortcutRedo, func(fyne.Shortcut) { w.Redo() })
+	c.AddShortcut(shortcutRedoY, func(fyne.Shortcut) { w.Redo() })
 }
 
 // notAvailable tells the user a file action is not in this build.
@@ -110,7 +121,9 @@ func (w *Window) Export() {
 // LoadScheme replaces the inputs with a scheme (a file opened, the demo);
 // the scheme has no file until OpenFile or SaveFile gives it one.
 func (w *Window) LoadScheme(sc model.Scheme) {
+	before := memoOf(w.st)
 	out := w.st.Load(sc)
+	w.record("load the scheme “"+strings.TrimSpace(sc.Name)+"”", before)
 	w.pinned, w.selected = nil, ""
 	w.syncInputs()
 	w.setPath("")

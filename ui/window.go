@@ -69,7 +69,7 @@ type Window struct {
 	sketches    map[model.EndCondition]*widgets.EndSketch
 	weakCheck   *widget.Check
 	twistCheck  *widget.Check  // the weak-axis braces also restrain twisting (steel Lcz)
-	nameEntry   *widget.Entry  // the scheme's name
+	nameEntry   *commitEntry   // the scheme's name
 	tieSelect   *widget.Select // the near-tie tolerance
 	loadMode    *widget.RadioGroup
 	directBox   *fyne.Container
@@ -139,6 +139,7 @@ type Window struct {
 	status     *widget.Label
 
 	files fileState // the scheme's file, unsaved changes, recent files, autosave
+	ed    edits     // the undo history and the Edit menu
 
 	mapv *mapView // the Map view beside the chart
 }
@@ -152,7 +153,7 @@ var traceOn = os.Getenv("UPRIGHT_TRACE") != ""
 // field is one text input with its error line.
 type field struct {
 	spec  *fieldSpec
-	entry *widget.Entry
+	entry *commitEntry
 	err   *widget.Label
 	box   *fyne.Container
 }

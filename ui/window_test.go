@@ -191,7 +191,7 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 	}
 	for _, c := range cases {
 		// Pasted in one go, so no half-typed text makes a valid scheme on the way.
-		h.ui(func() { h.w.fields[c.field].entry.SetText(c.typed) })
+		h.ui(func() { e := h.w.fields[c.field].entry; e.SetText(c.typed); e.commit() })
 		h.settle()
 		h.ui(func() {
 			f := h.w.fields[c.field]
@@ -225,14 +225,16 @@ func TestTypingKeepsTheLastValidStateOnScreen(t *testing.T) {
 	sc := DemoScheme()
 	h := newHarness(t, sc)
 	// Typed key by key, "12 furlongs" passes through valid lengths (1 ft,
-	// 12 ft) before it stops parsing: the result on screen is the last valid one.
+	// 12 ft) before it stops parsing; nothing is applied until the field is
+	// committed, and then it does not parse: the result on screen stays the
+	// scheme's own.
 	h.typeInto("length", "12 furlongs")
-	want := expectedBest(t, sc, 12*units.MMPerFoot)
+	want := expectedBest(t, sc, sc.Setting.LengthMM)
 	for fam, des := range want {
 		assert.Equal(t, des, h.sizeOf(fam), fam)
 	}
 	h.ui(func() {
-		assert.InDelta(t, 12*units.MMPerFoot, h.w.snap.Result.Setting.LengthMM, 1e-6)
+		assert.InDelta(t, sc.Setting.LengthMM, h.w.snap.Result.Setting.LengthMM, 1e-6)
 		assert.Contains(t, h.w.BannerText(), "Showing the last valid result: fix Unbraced length")
 	})
 }

@@ -52,11 +52,6 @@ func (s *lengthSlider) TypedKey(k *fyne.KeyEvent) {
 		s.SetValue(s.Min)
 	case fyne.KeyEnd:
 		s.SetValue(s.Max)
-	default:
-		return
-	}
-	if s.OnChangeEnded != nil {
-		s.OnChangeEnded(s.Value)
 	}
 }
 

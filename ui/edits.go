@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"reflect"
+
 	"fyne.io/fyne/v2"
 
 	"upright/ui/model"
@@ -40,6 +42,7 @@ func (w *Window) step(what string, apply func() Outcome) Outcome {
 
 // record files the step from before to the state as it now stands.
 func (w *Window) record(what string, before memo) {
+	w.dropDemoName(before)
 	after := memoOf(w.st)
 	if what == "" {
 		what = describeChange(before, after)
@@ -121,4 +124,27 @@ func (w *Window) updateEditMenu() {
 	w.ed.redoItem.Label = w.ed.hist.RedoLabel()
 	w.ed.redoItem.Disabled = len(w.ed.hist.redo) == 0
 	w.ed.editMenu.Refresh()
+}
+
+// dropDemoName takes the demo's name off a scheme once it is edited into
+// something else, in the same step, so the demo's project name never reaches
+// a save or a client report unless the user types it again.
+func (w *Window) dropDemoName(before memo) {
+	demo := DemoScheme()
+	if w.st.Draft.Name != demo.Name || before.scheme.Name != demo.Name || sameButName(w.st.Draft, demo) {
+		return
+	}
+	w.st.Draft.Name = ""
+	if w.st.Valid.Name == demo.Name {
+		w.st.Valid.Name = ""
+	}
+	w.syncName()
+	w.updateTitle()
+	w.notify("The scheme no longer matches the demo, so it no longer carries the demo's name: give it a name under Scheme name")
+}
+
+// sameButName reports whether two schemes differ at most in their name.
+func sameButName(a, b model.Scheme) bool {
+	a.Name, b.Name = "", ""
+	return reflect.DeepEqual(a, b)
 }

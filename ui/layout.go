@@ -60,7 +60,9 @@ func (w *Window) buildPanes(inputs, chartArea, results, xsPanel, calc, banner fy
 	unfold.Importance = widget.LowImportance
 	p.rail = container.NewVBox(unfold)
 
-	p.side = container.NewHSplit(p.inputs, container.NewBorder(banner, nil, nil, nil, p.main))
+	// The banner floats over the top of the chart: showing or clearing it
+	// moves nothing else and leaves no band behind.
+	p.side = container.NewHSplit(p.inputs, container.NewStack(p.main, container.NewVBox(banner)))
 	w.restoreLayout(w.app.Preferences())
 	return container.New(&widthWatch{onChange: w.autoSplits}, p.side)
 }

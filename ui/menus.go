@@ -43,6 +43,7 @@ func (w *Window) mainMenu() *fyne.MainMenu {
 	saveAs := fyne.NewMenuItem("Save scheme as…", w.SaveAs)
 	saveAs.Shortcut = shortcutSaveAs
 	file := fyne.NewMenu("File",
+		fyne.NewMenuItem("New scheme", w.NewScheme),
 		fileItem("Open scheme…", shortcutOpen, OpenHook != nil, w.Open),
 		recent,
 		fileItem("Save scheme", shortcutSave, SaveHook != nil, w.Save),
@@ -131,6 +132,15 @@ func (w *Window) LoadScheme(sc model.Scheme) {
 	if out.Submit {
 		w.xsStatus.SetText("Finding crossovers…")
 	}
+}
+
+// NewScheme starts a blank scheme with every option at its default and no
+// name; it is one undoable step.
+func (w *Window) NewScheme() {
+	sc := model.DefaultScheme()
+	sc.Name = ""
+	w.LoadScheme(sc)
+	w.notify("New scheme: every input at its default")
 }
 
 // ShowCautions shows the full caution text.

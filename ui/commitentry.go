@@ -7,8 +7,11 @@ import (
 )
 
 // typingPause is how long typing must rest before the text is taken: long
-// enough that a prefix ("5" of "50m") is not evaluated between two keys.
-const typingPause = 1500 * time.Millisecond
+// enough that a prefix ("5" of "50m") is not evaluated between two keys
+// (common practice for search-as-you-type is 300–500 ms; a length or load
+// is taken only after a clearly finished pause). Tests that type set it
+// longer so a slow machine never commits between two keys.
+var typingPause = 1500 * time.Millisecond
 
 // commitEntry is a one-line entry whose text is applied only when committed:
 // Enter, leaving the field (Tab or a click elsewhere), or a pause in typing
@@ -19,13 +22,14 @@ type commitEntry struct {
 	pending  bool              // typed text not yet committed
 	timer    *time.Timer
 	do       func(func())
-	gen      int // bumped on every key, so a stale timer does nothing
+	gen      int           // bumped on every key, so a stale timer does nothing
+	pause    time.Duration // typingPause when the entry was made
 }
 
 // newCommitEntry makes an entry calling commit with its text when committed;
 // do runs a function on the UI goroutine (for the pause timer).
 func newCommitEntry(do func(func()), commit func(string)) *commitEntry {
-	e := &commitEntry{onCommit: commit, do: do}
+	e := &commitEntry{onCommit: commit, do: do, pause: typingPause}
 	e.ExtendBaseWidget(e)
 	e.OnSubmitted = func(string) { e.commit() }
 	return e
@@ -39,7 +43,7 @@ func (e *commitEntry) typed() {
 	if e.timer != nil {
 		e.timer.Stop()
 	}
-	e.timer = time.AfterFunc(typingPause, func() {
+	e.timer = time.AfterFunc(e.pause, func() {
 		e.do(func() {
 			if gen == e.gen {
 				e.commit()

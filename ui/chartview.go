@@ -10,10 +10,8 @@ import (
 	"fyne.io/fyne/v2/canvas"
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/driver/desktop"
-	"fyne.io/fyne/v2/theme"
 	"fyne.io/fyne/v2/widget"
 
-	"upright/ui/cli"
 	"upright/ui/model"
 	"upright/ui/units"
 )
@@ -111,7 +109,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		}
 		return w.front
 	})
-	w.chartRaster.SetMinSize(fyne.NewSize(420, 240))
+	w.chartRaster.SetMinSize(fyne.NewSize(420, plotMinHeight))
 	w.markerLine = canvas.NewLine(markerInk)
 	w.markerLine.StrokeWidth = 1.6
 	w.markerBox = canvas.NewRectangle(color.NRGBA{R: 255, G: 255, B: 255, A: 0xE6})
@@ -146,42 +144,8 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 	entryBox := container.NewGridWrap(fyne.NewSize(150, length.entry.MinSize().Height), length.entry)
 	sliderRow := container.NewBorder(nil, length.err, w.sliderUnit, container.NewHBox(entryBox, w.rangeLabel, w.newRangeButton()), w.slider)
 
-	w.xsStatus = widget.NewLabel("Finding crossovers…")
-	w.xsStatus.Wrapping = fyne.TextWrapWord
-	w.xsStatus.SizeName = theme.SizeNameCaptionText
-	w.xsAllCheck = widget.NewCheck("List every size step", func(on bool) {
-		w.allSteps = on
-		w.filterCrossovers()
-	})
-	w.xsList = widget.NewList(
-		func() int { return len(w.xs) },
-		func() fyne.CanvasObject {
-			top := widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-			desc := widget.NewLabel("")
-			desc.Wrapping = fyne.TextWrapWord
-			desc.SizeName = theme.SizeNameCaptionText
-			return container.NewBorder(top, nil, nil, nil, desc)
-		},
-		func(id widget.ListItemID, o fyne.CanvasObject) {
-			if id < 0 || id >= len(w.xs) {
-				return
-			}
-			x := w.xs[id]
-			box := o.(*fyne.Container)
-			box.Objects[1].(*widget.Label).SetText(units.Length(x.LengthMM, w.sys()) + "  ·  " + kindWords(x.Kind))
-			box.Objects[0].(*widget.Label).SetText(cli.DescribeCrossover(x))
-		})
-	w.xsList.OnSelected = func(id widget.ListItemID) {
-		if id >= 0 && id < len(w.xs) {
-			x := w.xs[id]
-			w.step("crossover at "+units.Length(x.LengthMM, w.sys()), func() Outcome { return w.moveTo(x.LengthMM, true) })
-		}
-		w.xsList.UnselectAll()
-	}
-	xsHead := container.NewVBox(
-		widget.NewLabelWithStyle("Crossovers", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
-		w.xsStatus, w.xsAllCheck)
-	xsPanel := container.NewBorder(xsHead, nil, nil, nil, container.New(&widthWatch{onChange: func(float32) { w.fitCrossoverHeights() }}, w.xsList))
+	w.xsp = newCrossoversPane(w, w.sys, func() model.Range { return w.st.Range })
+	xsPanel := w.xsp.Object()
 	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, w.plotViews(chartStack)), xsPanel
 }
 
@@ -296,37 +260,6 @@ func (w *Window) syncSlider() {
 	w.slider.Value = min(max(v, w.slider.Min), w.slider.Max)
 	w.slider.Refresh()
 	w.quiet--
-}
-
-// filterCrossovers picks the crossovers the list shows.
-func (w *Window) filterCrossovers() {
-	w.xs = w.xs[:0]
-	for _, x := range w.xsAll {
-		if x.Kind == model.KindSize && !w.allSteps {
-			continue
-		}
-		w.xs = append(w.xs, x)
-	}
-	steps := 0
-	for _, x := range w.xsAll {
-		if x.Kind == model.KindSize {
-			steps++
-		}
-	}
-	r := w.st.Range
-	sys := w.sys()
-	switch {
-	case w.xsErr != nil:
-		w.xsStatus.SetText("Crossovers not found: " + w.xsErr.Error())
-	case len(w.xs) == 0 && steps > 0 && !w.allSteps:
-		w.xsStatus.SetText(fmt.Sprintf("The best family holds from %s to %s; %d size steps within families.", units.Length(r.FromMM, sys), units.Length(r.ToMM, sys), steps))
-	case len(w.xs) == 0:
-		w.xsStatus.SetText(fmt.Sprintf("No crossovers from %s to %s: every answer holds throughout.", units.Length(r.FromMM, sys), units.Length(r.ToMM, sys)))
-	default:
-		w.xsStatus.SetText(fmt.Sprintf("%d lengths where the answer changes (each the last length at which the first answer holds). Choose one to move there.", len(w.xs)))
-	}
-	w.fitCrossoverHeights()
-	w.xsList.Refresh()
 }
 
 // fixedWidth holds an object at a width, stretching it vertically.

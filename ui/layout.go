@@ -38,7 +38,7 @@ const inputsWidth = 310
 
 // splitDefaults are the dividers of a first start.
 var splitDefaults = map[string]float64{
-	prefSplitSide: 0.24, prefSplitMain: 0.70, prefSplitCentre: 0.55, prefSplitRight: 0.46,
+	prefSplitSide: 0.24, prefSplitMain: 0.70, prefSplitCentre: 0.42, prefSplitRight: 0.46,
 }
 
 // buildPanes arranges the window: the inputs (foldable) left of the chart
@@ -159,3 +159,8 @@ func (w *Window) storeLayout(pr fyne.Preferences) {
 	pr.SetFloat(prefSplitRight, p.right.Offset)
 	pr.SetBool(prefInputsShut, p.folded)
 }
+
+// plotMinHeight is the least height of the chart, sections and map images:
+// small enough that the chart–table divider can be dragged down to give the
+// table its rows on a laptop screen.
+const plotMinHeight = 120

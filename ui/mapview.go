@@ -125,7 +125,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 		}
 		return mv.front
 	})
-	mv.raster.SetMinSize(fyne.NewSize(420, 240))
+	mv.raster.SetMinSize(fyne.NewSize(420, plotMinHeight))
 	mv.surface = newMapSurface(mv.raster, mv.tapped)
 	mv.status = widget.NewLabel("")
 	mv.status.Truncation = fyne.TextTruncateEllipsis
@@ -167,6 +167,11 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 			tabs.Select(item)
 		}
 		out = tabs
+	}
+	if w.sectionsTabs != nil {
+		w.addViews(w.sectionsTabs)
+	} else if tabs, ok := out.(*container.AppTabs); ok {
+		w.addViews(tabs)
 	}
 	mv.visible = show
 	go mv.loop()

@@ -113,8 +113,8 @@ func (w *Window) Export() {
 	if w.snap != nil {
 		ex.Model, ex.Result = w.snap.Model, w.snap.Result
 	}
-	if w.xsGen == w.st.SchemeGen {
-		ex.Crossovers = append([]model.Crossover(nil), w.xsAll...)
+	if w.xsp.gen == w.st.SchemeGen {
+		ex.Crossovers = append([]model.Crossover(nil), w.xsp.all...)
 	}
 	ExportHook(w.win, ex)
 }
@@ -130,7 +130,7 @@ func (w *Window) LoadScheme(sc model.Scheme) {
 	w.setPath("")
 	w.after(out)
 	if out.Submit {
-		w.xsStatus.SetText("Finding crossovers…")
+		w.xsp.searching()
 	}
 }
 

@@ -34,11 +34,6 @@ type Window struct {
 	appliedGen uint64 // the last snapshot shown
 	snap       *Snapshot
 	evalErr    error
-	xsAll      []model.Crossover
-	xs         []model.Crossover // the crossovers listed (filtered)
-	xsGen      uint64            // scheme generation xsAll belongs to
-	xsErr      error
-	allSteps   bool // list every size step among the crossovers
 
 	rows     []model.Row
 	sortCol  int
@@ -101,9 +96,7 @@ type Window struct {
 	slider      *lengthSlider
 	sliderUnit  *widget.Label
 	rangeLabel  *widget.Label
-	xsList      *widget.List
-	xsStatus    *widget.Label
-	xsAllCheck  *widget.Check
+	xsp         *crossoversPane // the crossovers beside the chart
 
 	sections     *sectionsView      // the Sections tab beside the chart
 	sectionsTabs *container.AppTabs // the chart and Sections tabs
@@ -142,6 +135,7 @@ type Window struct {
 	ed    edits     // the undo history and the Edit menu
 
 	mapv *mapView // the Map view beside the chart
+	fed  []pane   // the panes fed each snapshot shown (see views.go)
 }
 
 // processStart is when the package was initialised, close to the start of the process.
@@ -251,7 +245,7 @@ func (w *Window) after(out Outcome) {
 	w.showFieldErrors()
 	w.updateBanner()
 	if out.Rebuild {
-		w.xsStatus.SetText("Finding crossovers…")
+		w.xsp.searching()
 		w.configureSlider()
 	}
 	if out.Submit {
@@ -323,7 +317,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	newScheme := w.snap == nil || w.snap.SchemeGen != s.SchemeGen
 	w.snap = s
 	w.refreshRows()
-	w.sections.show(s)
+	w.feed(s)
 	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()
@@ -357,8 +351,7 @@ func (w *Window) applyCrossovers(x *Crossovers) {
 	if x.SchemeGen != w.st.SchemeGen {
 		return
 	}
-	w.xsGen, w.xsAll, w.xsErr = x.SchemeGen, x.List, x.Err
-	w.filterCrossovers()
+	w.xsp.setList(x.SchemeGen, x.List, x.Err)
 }
 
 // takeFrame copies a rendered chart into the window's image and shows it.

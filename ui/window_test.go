@@ -9,6 +9,7 @@ import (
 	"time"
 
 	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/test"
 	"fyne.io/fyne/v2/widget"
 	"github.com/stretchr/testify/assert"
@@ -107,8 +108,8 @@ func TestSliderAcrossACrossoverChangesTheAnswer(t *testing.T) {
 	// The window found the same crossover and choosing it moves the slider there.
 	var listed []model.Crossover
 	h.ui(func() {
-		h.w.xsAllCheck.SetChecked(true)
-		listed = append(listed, h.w.xs...)
+		h.w.xsp.allCheck.SetChecked(true)
+		listed = append(listed, h.w.xsp.list...)
 	})
 	k := -1
 	for i, y := range listed {
@@ -117,7 +118,7 @@ func TestSliderAcrossACrossoverChangesTheAnswer(t *testing.T) {
 		}
 	}
 	require.GreaterOrEqual(t, k, 0, "the list holds the crossover")
-	h.ui(func() { h.w.xsList.Select(k) })
+	h.ui(func() { h.w.xsp.view.Select(k) })
 	h.settle()
 	h.ui(func() {
 		assert.InDelta(t, x.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6)
@@ -285,7 +286,7 @@ func (h *harness) shownTexts() []string {
 			note = note[:i] // the rest names a candidate
 		}
 		out = append(out, note)
-		for _, x := range w.xs {
+		for _, x := range w.xsp.list {
 			out = append(out, units.Length(x.LengthMM, w.sys()))
 		}
 		for _, s := range w.stepRows {
@@ -350,7 +351,7 @@ func TestSortingByAColumn(t *testing.T) {
 		// Clicking the header sorts too.
 		hdr := h.w.table.CreateHeader()
 		h.w.table.UpdateHeader(widget.TableCellID{Row: -1, Col: h.w.tableColOf("util")}, hdr)
-		test.Tap(hdr.(*widget.Button))
+		test.Tap(hdr.(*container.ThemeOverride).Content.(*widget.Button))
 		assert.Equal(t, columnIndex("util"), h.w.sortCol)
 		for i := 1; i < len(h.w.rows); i++ {
 			assert.LessOrEqual(t, h.w.rows[i-1].Util, h.w.rows[i].Util)

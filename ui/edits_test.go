@@ -172,3 +172,17 @@ func TestBannerLeavesNoBand(t *testing.T) {
 		assert.Equal(t, size, h.w.panes.main.Size(), "no band is left")
 	})
 }
+
+// An SI force in the load takedown reads in kN (common practice).
+func TestSIForcesReadInKilonewtons(t *testing.T) {
+	s := model.Step{Quantity: "P", Value: 1013000, Unit: "N"}
+	assert.Equal(t, "kN", stepText(s, 2, units.SI))
+	assert.Equal(t, "1013", stepText(s, 1, units.SI), "1,013,000 N is 1,013 kN")
+}
+
+// The keyboard help gives the length steps in the shown unit.
+func TestKeyHelpSaysTheShownUnit(t *testing.T) {
+	assert.Contains(t, keyHelp(units.SI), "by 50 mm")
+	assert.Contains(t, keyHelp(units.US), "by 1 in")
+	assert.Contains(t, keyHelp(units.US), "Ctrl+Z")
+}

@@ -11,6 +11,7 @@ import (
 
 	"upright/ui/cli"
 	"upright/ui/model"
+	"upright/ui/units"
 )
 
 // Keyboard shortcuts of the file actions.
@@ -161,13 +162,24 @@ func (w *Window) ShowAbout() {
 }
 
 func (w *Window) showKeys() {
-	l := widget.NewLabel("Tab / Shift+Tab   move between inputs\n" +
+	dialog.ShowCustom("Keyboard", "Close", widget.NewLabel(keyHelp(w.sys())), w.win)
+}
+
+// keyHelp says what each key does, with the length steps in the shown unit.
+func keyHelp(sys units.System) string {
+	fine, coarse := "1 in", "1 ft"
+	if sys == units.SI {
+		fine, coarse = "50 mm", "250 mm"
+	}
+	return "Tab / Shift+Tab   move between inputs (leaving a field applies it)\n" +
+		"Enter   apply the field being typed\n" +
 		"Ctrl+L   go to the length slider\n" +
-		"← →   move the length by 1 in (25 mm)\n" +
-		"Page Up / Page Down   by 1 ft (250 mm)\n" +
+		"← →   move the length by " + fine + "\n" +
+		"Page Up / Page Down   move the length by " + coarse + "\n" +
 		"Home / End   to the ends of the range\n" +
+		"Dragging the slider snaps to " + fine + "; hold Shift, Ctrl or Alt to move it freely\n" +
 		"Space   choose the focused end condition\n" +
+		"Ctrl+Z   undo the last change; Ctrl+Shift+Z or Ctrl+Y   redo it\n" +
 		"Ctrl+O / Ctrl+S / Ctrl+E   open, save, export the report\n" +
-		"Ctrl+Shift+S   save as")
-	dialog.ShowCustom("Keyboard", "Close", l, w.win)
+		"Ctrl+Shift+S   save as"
 }

@@ -31,6 +31,10 @@ type panes struct {
 	auto     bool
 	autoSide float64 // the side divider auto last set
 	autoMain float64 // the main divider auto last set
+	// mapRoom is set while the Map view has taken the centre's height;
+	// beforeMap is the chart–table divider it will give back.
+	mapRoom   bool
+	beforeMap float64
 }
 
 // inputsWidth is the inputs pane's width on a first start.
@@ -155,7 +159,11 @@ func (w *Window) storeLayout(pr fyne.Preferences) {
 		pr.SetFloat(prefSplitSide, side)
 		pr.SetFloat(prefSplitMain, p.main.Offset)
 	}
-	pr.SetFloat(prefSplitCentre, p.centre.Offset)
+	centre := p.centre.Offset
+	if p.mapRoom && centre == mapShare {
+		centre = p.beforeMap // the map's share is not the user's divider
+	}
+	pr.SetFloat(prefSplitCentre, centre)
 	pr.SetFloat(prefSplitRight, p.right.Offset)
 	pr.SetBool(prefInputsShut, p.folded)
 }

@@ -152,6 +152,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 				prev(t)
 			}
 			mv.visible = t == item
+			w.roomForMap(mv.visible)
 			mv.submit()
 		}
 		if show {
@@ -451,4 +452,31 @@ func (w *Window) moveMapPoint(lengthMM, load float64, axis model.MapAxis) {
 	what := "map point: " + f.label + " " + w.st.Text(id) + ", length " + w.st.Text("length")
 	w.record(what, before)
 	w.notify("Map click set " + strings.TrimPrefix(what, "map point: ") + " (Ctrl+Z undoes it)")
+}
+
+// mapShare is the share of the centre column the Map view takes while it
+// shows: the map needs height to be read, the table folds to a few rows
+// below it (and comes back when another view is chosen).
+const mapShare = 0.74
+
+// roomForMap gives the Map view the centre's height while it shows and
+// gives the table its rows back after; a divider the user dragged while
+// the map showed is kept.
+func (w *Window) roomForMap(on bool) {
+	c := w.panes.centre
+	if c == nil {
+		return
+	}
+	switch {
+	case on && !w.panes.mapRoom:
+		w.panes.beforeMap, w.panes.mapRoom = c.Offset, true
+		if c.Offset < mapShare {
+			c.SetOffset(mapShare)
+		}
+	case !on && w.panes.mapRoom:
+		w.panes.mapRoom = false
+		if c.Offset == mapShare {
+			c.SetOffset(w.panes.beforeMap)
+		}
+	}
 }

@@ -60,3 +60,17 @@ func TestWheelScrollsTheTable(t *testing.T) {
 		assert.Greater(t, lastRow(), before, "the wheel scrolled the table to later rows")
 	})
 }
+
+// The Map view takes the centre's height while it shows and gives the
+// table its rows back when the chart is chosen again.
+func TestMapViewTakesTheRoomItNeeds(t *testing.T) {
+	h := newHarnessAt(t, DemoScheme(), fyne.NewSize(1366, 768))
+	h.layOut()
+	h.ui(func() {
+		before := h.w.panes.centre.Offset
+		h.w.sectionsTabs.SelectIndex(2) // Chart, Sections, Map
+		assert.GreaterOrEqual(t, h.w.panes.centre.Offset, mapShare)
+		h.w.sectionsTabs.SelectIndex(0)
+		assert.Equal(t, before, h.w.panes.centre.Offset)
+	})
+}

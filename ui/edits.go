@@ -140,7 +140,7 @@ func (w *Window) dropDemoName(before memo) {
 	}
 	w.syncName()
 	w.updateTitle()
-	w.notify("The scheme no longer matches the demo, so it no longer carries the demo's name: give it a name under Scheme name")
+	w.notify("Edited, so the demo's name is removed: name the scheme under Scheme name")
 }
 
 // sameButName reports whether two schemes differ at most in their name.

@@ -212,7 +212,10 @@ func (w *Window) build() fyne.CanvasObject {
 	w.status = widget.NewLabel("")
 	w.status.Wrapping = fyne.TextWrapWord
 	w.status.Alignment = fyne.TextAlignTrailing
-	statusBar := container.NewBorder(nil, nil, nil, fixedWidth(300, w.status), w.buildCaution())
+	// The status line always holds two lines, so a message that wraps (at a
+	// word) or clears moves nothing above it.
+	twoLines := widget.NewLabel("X\nX").MinSize().Height
+	statusBar := container.NewBorder(nil, nil, nil, container.New(&fixedLayout{size: fyne.NewSize(300, twoLines)}, w.status), w.buildCaution())
 	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), statusBar), nil, nil, split)
 }
 
@@ -431,3 +434,17 @@ func (w *Window) BannerText() string {
 	}
 	return w.bannerText.Text
 }
+
+// fixedLayout holds its objects at one size whatever they hold.
+type fixedLayout struct{ size fyne.Size }
+
+// Layout gives each object the fixed size.
+func (l *fixedLayout) Layout(objs []fyne.CanvasObject, _ fyne.Size) {
+	for _, o := range objs {
+		o.Move(fyne.NewPos(0, 0))
+		o.Resize(l.size)
+	}
+}
+
+// MinSize is the fixed size.
+func (l *fixedLayout) MinSize([]fyne.CanvasObject) fyne.Size { return l.size }

@@ -23,6 +23,9 @@ func Run(args []string) int {
 		fmt.Fprintf(os.Stderr, "upright: unexpected argument %q; run \"upright help\" for the commands\n", args[0])
 		return 2
 	}
+	if displayMissing() {
+		return 1
+	}
 	if path := os.Getenv("UPRIGHT_CPUPROFILE"); path != "" {
 		if f, err := os.Create(path); err == nil {
 			if pprof.StartCPUProfile(f) == nil {

@@ -4,14 +4,14 @@ import (
 	"fmt"
 	"image"
 	"image/color"
+	"math"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
 	"fyne.io/fyne/v2/container"
-	"fyne.io/fyne/v2/theme"
+	"fyne.io/fyne/v2/driver/desktop"
 	"fyne.io/fyne/v2/widget"
 
-	"upright/ui/cli"
 	"upright/ui/model"
 	"upright/ui/units"
 )
@@ -53,6 +53,34 @@ func (s *lengthSlider) TypedKey(k *fyne.KeyEvent) {
 	}
 }
 
+// snap rounds a dragged value (ft or m) to a round length of the shown
+// unit, 1 in or 50 mm, unless held (a modifier key) asks for it unrounded;
+// the ends of the range are kept.
+func (s *lengthSlider) snap(v float64, sys units.System, held bool) float64 {
+	if held || v <= s.Min || v >= s.Max {
+		return v
+	}
+	step := 1.0 / 12 // 1 in, in ft
+	if sys == units.SI {
+		step = 0.05 // 50 mm, in m
+	}
+	r := math.Round(v/step) * step
+	return min(max(r, s.Min), s.Max)
+}
+
+// snapHeld reports whether a modifier key (Shift, Ctrl, Alt) is held, which
+// lets the slider move without rounding.
+func snapHeld() bool {
+	a := fyne.CurrentApp()
+	if a == nil {
+		return false
+	}
+	if d, ok := a.Driver().(desktop.Driver); ok {
+		return d.CurrentKeyModifiers()&(fyne.KeyModifierShift|fyne.KeyModifierControl|fyne.KeyModifierAlt) != 0
+	}
+	return false
+}
+
 // toDisplay converts mm to the slider's unit (ft or m).
 func toDisplay(mm float64, sys units.System) float64 {
 	v, _ := units.LengthValue(mm, sys)
@@ -81,7 +109,7 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		}
 		return w.front
 	})
-	w.chartRaster.SetMinSize(fyne.NewSize(420, 240))
+	w.chartRaster.SetMinSize(fyne.NewSize(420, plotMinHeight))
 	w.markerLine = canvas.NewLine(markerInk)
 	w.markerLine.StrokeWidth = 1.6
 	w.markerBox = canvas.NewRectangle(color.NRGBA{R: 255, G: 255, B: 255, A: 0xE6})
@@ -99,7 +127,14 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 		if w.quiet > 0 {
 			return
 		}
-		w.moveTo(fromDisplay(v, w.sys()), false)
+		w.beginDrag()
+		w.moveTo(fromDisplay(w.slider.snap(v, w.sys(), snapHeld()), w.sys()), true)
+	}
+	w.slider.OnChangeEnded = func(float64) {
+		if w.quiet > 0 {
+			return
+		}
+		w.endDrag()
 	}
 	length := w.newField("length")
 	length.entry.SetPlaceHolder("e.g. 14'-6\" or 4.4 m")
@@ -109,41 +144,8 @@ func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
 	entryBox := container.NewGridWrap(fyne.NewSize(150, length.entry.MinSize().Height), length.entry)
 	sliderRow := container.NewBorder(nil, length.err, w.sliderUnit, container.NewHBox(entryBox, w.rangeLabel, w.newRangeButton()), w.slider)
 
-	w.xsStatus = widget.NewLabel("Finding crossovers…")
-	w.xsStatus.Wrapping = fyne.TextWrapWord
-	w.xsStatus.SizeName = theme.SizeNameCaptionText
-	w.xsAllCheck = widget.NewCheck("List every size step", func(on bool) {
-		w.allSteps = on
-		w.filterCrossovers()
-	})
-	w.xsList = widget.NewList(
-		func() int { return len(w.xs) },
-		func() fyne.CanvasObject {
-			top := widget.NewLabelWithStyle("", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-			desc := widget.NewLabel("")
-			desc.Wrapping = fyne.TextWrapWord
-			desc.SizeName = theme.SizeNameCaptionText
-			return container.NewBorder(top, nil, nil, nil, desc)
-		},
-		func(id widget.ListItemID, o fyne.CanvasObject) {
-			if id < 0 || id >= len(w.xs) {
-				return
-			}
-			x := w.xs[id]
-			box := o.(*fyne.Container)
-			box.Objects[1].(*widget.Label).SetText(units.Length(x.LengthMM, w.sys()) + "  ·  " + kindWords(x.Kind))
-			box.Objects[0].(*widget.Label).SetText(cli.DescribeCrossover(x))
-		})
-	w.xsList.OnSelected = func(id widget.ListItemID) {
-		if id >= 0 && id < len(w.xs) {
-			w.moveTo(w.xs[id].LengthMM, true)
-		}
-		w.xsList.UnselectAll()
-	}
-	xsHead := container.NewVBox(
-		widget.NewLabelWithStyle("Crossovers", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
-		w.xsStatus, w.xsAllCheck)
-	xsPanel := container.NewBorder(xsHead, nil, nil, nil, container.New(&widthWatch{onChange: func(float32) { w.fitCrossoverHeights() }}, w.xsList))
+	w.xsp = newCrossoversPane(w, w.sys, func() model.Range { return w.st.Range })
+	xsPanel := w.xsp.Object()
 	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, w.plotViews(chartStack)), xsPanel
 }
 
@@ -220,7 +222,8 @@ func kindWords(kind string) string {
 }
 
 // moveTo sets the length (slider drag, crossover chosen, typed elsewhere).
-func (w *Window) moveTo(mm float64, moveSlider bool) {
+// It is not itself an undo step: the caller files it (a drag when it ends).
+func (w *Window) moveTo(mm float64, moveSlider bool) Outcome {
 	out := w.st.SetLength(mm)
 	if moveSlider {
 		w.syncSlider()
@@ -228,6 +231,7 @@ func (w *Window) moveTo(mm float64, moveSlider bool) {
 	w.setEntryQuietForce(w.fields["length"], w.st.Text("length"))
 	w.setEntryQuietForce(w.fields["weak-axis length"], w.st.Text("weak-axis length"))
 	w.after(out)
+	return Outcome{}
 }
 
 // configureSlider sets the slider's range and unit from the state.
@@ -240,7 +244,7 @@ func (w *Window) configureSlider() {
 	w.quiet++
 	w.slider.Min, w.slider.Max = toDisplay(r.FromMM, sys), toDisplay(r.ToMM, sys)
 	if sys == units.SI {
-		w.slider.fine, w.slider.coarse = 0.025, 0.25
+		w.slider.fine, w.slider.coarse = 0.05, 0.25
 	} else {
 		w.slider.fine, w.slider.coarse = 1.0/12, 1
 	}
@@ -256,37 +260,6 @@ func (w *Window) syncSlider() {
 	w.slider.Value = min(max(v, w.slider.Min), w.slider.Max)
 	w.slider.Refresh()
 	w.quiet--
-}
-
-// filterCrossovers picks the crossovers the list shows.
-func (w *Window) filterCrossovers() {
-	w.xs = w.xs[:0]
-	for _, x := range w.xsAll {
-		if x.Kind == model.KindSize && !w.allSteps {
-			continue
-		}
-		w.xs = append(w.xs, x)
-	}
-	steps := 0
-	for _, x := range w.xsAll {
-		if x.Kind == model.KindSize {
-			steps++
-		}
-	}
-	r := w.st.Range
-	sys := w.sys()
-	switch {
-	case w.xsErr != nil:
-		w.xsStatus.SetText("Crossovers not found: " + w.xsErr.Error())
-	case len(w.xs) == 0 && steps > 0 && !w.allSteps:
-		w.xsStatus.SetText(fmt.Sprintf("The best family holds from %s to %s; %d size steps within families.", units.Length(r.FromMM, sys), units.Length(r.ToMM, sys), steps))
-	case len(w.xs) == 0:
-		w.xsStatus.SetText(fmt.Sprintf("No crossovers from %s to %s: every answer holds throughout.", units.Length(r.FromMM, sys), units.Length(r.ToMM, sys)))
-	default:
-		w.xsStatus.SetText(fmt.Sprintf("%d lengths where the answer changes (each the last length at which the first answer holds). Choose one to move there.", len(w.xs)))
-	}
-	w.fitCrossoverHeights()
-	w.xsList.Refresh()
 }
 
 // fixedWidth holds an object at a width, stretching it vertically.

@@ -28,7 +28,9 @@ func checkSteps(cs []model.Check, sys units.System) []model.Step {
 		if c.Governing {
 			b.WriteString(" (governs)")
 		}
-		out = append(out, model.Step{Clause: c.Clause, Quantity: "utilization", Formula: b.String(), Value: c.Util})
+		// The row names its combination in the first column, which is never
+		// scrolled away: three rows of "utilization" alone cannot be told apart.
+		out = append(out, model.Step{Clause: c.Clause, Quantity: "utilization, " + c.Combination, Formula: b.String(), Value: c.Util})
 	}
 	return out
 }

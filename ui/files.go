@@ -341,8 +341,8 @@ func (w *Window) exportInputs() (exportInputs, error) {
 		return exportInputs{}, errors.New("the inputs do not make a valid scheme yet; fix the fields named in the banner first")
 	}
 	in := exportInputs{sc: w.st.Valid, rng: w.st.Range, pinned: append([]string(nil), w.pinned...), all: true}
-	if w.xsGen == w.st.SchemeGen {
-		in.xs = familyChanges(w.xsAll)
+	if w.xsp.gen == w.st.SchemeGen {
+		in.xs = familyChanges(w.xsp.all)
 	}
 	return in, nil
 }

@@ -130,7 +130,9 @@ func TestSaveThenOpenGivesBackTheScheme(t *testing.T) {
 		assert.Equal(t, "Opened gallery"+schemefile.Extension, h.w.Notice())
 	})
 	// Ctrl+S now saves to the known file without asking: a length change reaches it.
-	h.setSlider(5000)
+	// 16 ft 6 in, a round inch the slider snaps to (common practice: the
+	// slider rounds to 1 in in a US scheme).
+	h.setSlider(16.5 * units.MMPerFoot)
 	h.ui(func() {
 		assert.True(t, h.w.Dirty())
 		h.w.win.Canvas().(interface{ TypedShortcut(fyne.Shortcut) }).TypedShortcut(shortcutSave)
@@ -139,7 +141,7 @@ func TestSaveThenOpenGivesBackTheScheme(t *testing.T) {
 	})
 	back, err := schemefile.Load(path)
 	require.NoError(t, err)
-	assert.InDelta(t, 5000, back.Setting.LengthMM, 1e-9)
+	assert.InDelta(t, 16.5*units.MMPerFoot, back.Setting.LengthMM, 1e-9)
 }
 
 func TestOpeningABadFileKeepsTheScheme(t *testing.T) {

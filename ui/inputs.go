@@ -105,7 +105,8 @@ const labelWidth = 132
 // the entry to the right, and its problem (when there is one) below.
 func (w *Window) newField(id string) *field {
 	spec := specByID(id)
-	f := &field{spec: spec, entry: widget.NewEntry()}
+	f := &field{spec: spec}
+	f.entry = newCommitEntry(w.do, func(text string) { w.commitField(id, text) })
 	// No Validator: the state holds each field's problem and
 	// showFieldErrors marks the entry (red border and icon) with it.
 	f.entry.AlwaysShowValidationError = true
@@ -117,19 +118,11 @@ func (w *Window) newField(id string) *field {
 	f.err.Importance = widget.DangerImportance
 	f.err.SizeName = theme.SizeNameCaptionText
 	f.err.Hide()
-	f.entry.OnChanged = func(s string) {
+	f.entry.OnChanged = func(string) {
 		if w.quiet > 0 {
 			return
 		}
-		out := w.st.SetText(id, s)
-		if id == "length" {
-			w.syncSlider()
-		}
-		if id == "length" || id == "weak-axis length" {
-			w.setEntryQuiet(w.fields["weak-axis length"], w.st.Text("weak-axis length"))
-			w.setEntryQuiet(w.fields["length"], w.st.Text("length"))
-		}
-		w.after(out)
+		f.entry.typed()
 	}
 	lbl := widget.NewLabel(spec.label)
 	lbl.Wrapping = fyne.TextWrapWord
@@ -139,6 +132,20 @@ func (w *Window) newField(id string) *field {
 	}
 	w.fields[id] = f
 	return f
+}
+
+// commitField applies a field's committed text as one undoable step and
+// shows the field as the state now reads it (a bare number with its unit).
+func (w *Window) commitField(id, text string) {
+	w.step("", func() Outcome { return w.st.Commit(id, text) })
+	if id == "length" {
+		w.syncSlider()
+	}
+	w.setEntryQuietForce(w.fields[id], w.st.Text(id))
+	if id == "length" || id == "weak-axis length" {
+		w.setEntryQuiet(w.fields["weak-axis length"], w.st.Text("weak-axis length"))
+		w.setEntryQuiet(w.fields["length"], w.st.Text("length"))
+	}
 }
 
 // setEntryQuiet sets an entry's text without treating it as typing; it
@@ -182,7 +189,7 @@ func (w *Window) change(fn func(sc *model.Scheme)) {
 	if w.quiet > 0 {
 		return
 	}
-	w.after(w.st.Update(fn))
+	w.step("", func() Outcome { return w.st.Update(fn) })
 }
 
 // buildInputs makes the inputs panel: column, load, design, materials.
@@ -205,9 +212,8 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		if w.quiet > 0 {
 			return
 		}
-		out := w.st.SetWeakBraced(on)
+		w.step("", func() Outcome { return w.st.SetWeakBraced(on) })
 		w.syncWeak()
-		w.after(out)
 	})
 	weak := w.newField("weak-axis length")
 	w.twistCheck = widget.NewCheck("Braces also restrain twisting (steel Lcz = weak-axis length)", func(on bool) {
@@ -282,16 +288,17 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		if w.quiet > 0 {
 			return
 		}
-		out := w.st.Update(func(sc *model.Scheme) {
-			if s == "SI" {
-				sc.Units = model.SI
-			} else {
-				sc.Units = model.US
-			}
+		w.step("", func() Outcome {
+			return w.st.Update(func(sc *model.Scheme) {
+				if s == "SI" {
+					sc.Units = model.SI
+				} else {
+					sc.Units = model.US
+				}
+			})
 		})
 		w.syncTexts()
 		w.configureSlider()
-		w.after(out)
 	})
 	w.unitsRadio.Horizontal = true
 	w.unitsRadio.Required = true
@@ -317,7 +324,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 			if w.quiet > 0 {
 				return
 			}
-			w.after(w.st.SetMaterial(m, on))
+			w.step("", func() Outcome { return w.st.SetMaterial(m, on) })
 			w.opts.enable(w)
 		})
 		w.matChecks[m] = c

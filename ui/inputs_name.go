@@ -6,7 +6,6 @@ import (
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
-	"fyne.io/fyne/v2/widget"
 
 	"upright/ui/model"
 	"upright/ui/schemefile"
@@ -15,11 +14,16 @@ import (
 // buildNameField makes the scheme's name editable: it names the window, the
 // suggested file name, the report and exported charts.
 func (w *Window) buildNameField() fyne.CanvasObject {
-	w.nameEntry = widget.NewEntry()
-	w.nameEntry.SetPlaceHolder("Untitled scheme")
-	w.nameEntry.OnChanged = func(s string) {
+	w.nameEntry = newCommitEntry(w.do, func(s string) {
 		name := cleanName(s)
 		w.change(func(sc *model.Scheme) { sc.Name = name })
+		w.syncName()
+	})
+	w.nameEntry.SetPlaceHolder("Untitled scheme")
+	w.nameEntry.OnChanged = func(string) {
+		if w.quiet == 0 {
+			w.nameEntry.typed()
+		}
 	}
 	return container.NewVBox(row("Scheme name", w.nameEntry))
 }

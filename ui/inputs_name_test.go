@@ -22,6 +22,7 @@ func TestSchemeNameIsEditable(t *testing.T) {
 		gen = h.w.st.SchemeGen
 		h.w.nameEntry.SetText("")
 		test.Type(h.w.nameEntry, "Quarry Lane depot, bay column")
+		h.w.nameEntry.commit()
 	})
 	h.settle()
 	path := filepath.Join(dir, "depot.upright.json")
@@ -36,7 +37,7 @@ func TestSchemeNameIsEditable(t *testing.T) {
 	assert.Equal(t, "Quarry Lane depot, bay column", sc.Name)
 
 	// A pasted line break does not reach the file, and loading a scheme shows its name.
-	h.ui(func() { h.w.nameEntry.SetText("two\nlines") })
+	h.ui(func() { h.w.nameEntry.SetText("two\nlines"); h.w.nameEntry.commit() })
 	h.settle()
 	h.ui(func() {
 		assert.Equal(t, "two lines", h.w.st.Valid.Name)

@@ -125,9 +125,11 @@ func TestLaptopScreenShowsTheComparison(t *testing.T) {
 		}
 		assert.Equal(t, -1, w.tableCol(0), "the key is the table's first column")
 
-		// The table shows size, weight, plan, utilization and capacity without scrolling sideways.
+		// The table shows size, status (works or not, in words), weight,
+		// plan and utilization without scrolling sideways; the capacity
+		// follows when the width holds it.
 		shown := w.ShownColumns()
-		for _, id := range []string{"size", "weight", "plan", "util", "capacity"} {
+		for _, id := range []string{"size", "status", "weight", "plan", "util"} {
 			assert.Contains(t, shown, id)
 		}
 		total := float32(keyColumnWidth) + theme.Padding()
@@ -140,9 +142,9 @@ func TestLaptopScreenShowsTheComparison(t *testing.T) {
 		// The caution and the crossover list are visible.
 		assert.True(t, onScreen(c, w.caution), "the caution is inside the window")
 		assert.GreaterOrEqual(t, w.caution.Size().Height, w.caution.MinSize().Height-1, "the caution has the height its lines need")
-		assert.True(t, onScreen(c, w.xsList), "the crossover list is inside the window")
-		require.NotEmpty(t, w.xs)
-		assert.GreaterOrEqual(t, w.xsList.Size().Height, float32(60), "the list shows at least its first crossover")
+		assert.True(t, onScreen(c, w.xsp.view), "the crossover list is inside the window")
+		require.NotEmpty(t, w.xsp.list)
+		assert.GreaterOrEqual(t, w.xsp.view.Size().Height, float32(60), "the list shows at least its first crossover")
 
 		// No label is cut off.
 		cut, checked := checkTexts(c)

@@ -31,6 +31,10 @@ type panes struct {
 	auto     bool
 	autoSide float64 // the side divider auto last set
 	autoMain float64 // the main divider auto last set
+	// mapRoom is set while the Map view has taken the centre's height;
+	// beforeMap is the chart–table divider it will give back.
+	mapRoom   bool
+	beforeMap float64
 }
 
 // inputsWidth is the inputs pane's width on a first start.
@@ -38,7 +42,7 @@ const inputsWidth = 310
 
 // splitDefaults are the dividers of a first start.
 var splitDefaults = map[string]float64{
-	prefSplitSide: 0.24, prefSplitMain: 0.70, prefSplitCentre: 0.55, prefSplitRight: 0.46,
+	prefSplitSide: 0.24, prefSplitMain: 0.70, prefSplitCentre: 0.42, prefSplitRight: 0.46,
 }
 
 // buildPanes arranges the window: the inputs (foldable) left of the chart
@@ -60,7 +64,9 @@ func (w *Window) buildPanes(inputs, chartArea, results, xsPanel, calc, banner fy
 	unfold.Importance = widget.LowImportance
 	p.rail = container.NewVBox(unfold)
 
-	p.side = container.NewHSplit(p.inputs, container.NewBorder(banner, nil, nil, nil, p.main))
+	// The banner floats over the top of the chart: showing or clearing it
+	// moves nothing else and leaves no band behind.
+	p.side = container.NewHSplit(p.inputs, container.NewStack(p.main, container.NewVBox(banner)))
 	w.restoreLayout(w.app.Preferences())
 	return container.New(&widthWatch{onChange: w.autoSplits}, p.side)
 }
@@ -153,7 +159,16 @@ func (w *Window) storeLayout(pr fyne.Preferences) {
 		pr.SetFloat(prefSplitSide, side)
 		pr.SetFloat(prefSplitMain, p.main.Offset)
 	}
-	pr.SetFloat(prefSplitCentre, p.centre.Offset)
+	centre := p.centre.Offset
+	if p.mapRoom && centre == mapShare {
+		centre = p.beforeMap // the map's share is not the user's divider
+	}
+	pr.SetFloat(prefSplitCentre, centre)
 	pr.SetFloat(prefSplitRight, p.right.Offset)
 	pr.SetBool(prefInputsShut, p.folded)
 }
+
+// plotMinHeight is the least height of the chart, sections and map images:
+// small enough that the chart–table divider can be dragged down to give the
+// table its rows on a laptop screen.
+const plotMinHeight = 120

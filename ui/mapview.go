@@ -8,6 +8,7 @@ import (
 	"math"
 	"os"
 	"reflect"
+	"strings"
 	"sync"
 	"sync/atomic"
 
@@ -124,7 +125,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 		}
 		return mv.front
 	})
-	mv.raster.SetMinSize(fyne.NewSize(420, 240))
+	mv.raster.SetMinSize(fyne.NewSize(420, plotMinHeight))
 	mv.surface = newMapSurface(mv.raster, mv.tapped)
 	mv.status = widget.NewLabel("")
 	mv.status.Truncation = fyne.TextTruncateEllipsis
@@ -134,7 +135,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 		if w.quiet > 0 || on == w.st.Draft.ReportMap {
 			return
 		}
-		w.after(w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }))
+		w.step("map in the report", func() Outcome { return w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }) })
 	})
 	export := widget.NewButton("Export…", w.ExportMap)
 	foot := container.NewBorder(nil, nil, nil, container.NewHBox(mv.inReport, export, fixedWidth(160, mv.progress)), mv.status)
@@ -151,6 +152,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 				prev(t)
 			}
 			mv.visible = t == item
+			w.roomForMap(mv.visible)
 			mv.submit()
 		}
 		if show {
@@ -166,6 +168,11 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 			tabs.Select(item)
 		}
 		out = tabs
+	}
+	if w.sectionsTabs != nil {
+		w.addViews(w.sectionsTabs)
+	} else if tabs, ok := out.(*container.AppTabs); ok {
+		w.addViews(tabs)
 	}
 	mv.visible = show
 	go mv.loop()
@@ -431,12 +438,45 @@ func (w *Window) moveMapPoint(lengthMM, load float64, axis model.MapAxis) {
 	if axis == model.MapTributary {
 		id = "tributary"
 	}
-	if f := specByID(id); f != nil {
-		out := w.st.SetText(id, f.format(load, w.sys()))
-		if fl := w.fields[id]; fl != nil {
-			w.setEntryQuietForce(fl, w.st.Text(id))
-		}
-		w.after(out)
+	f := specByID(id)
+	if f == nil {
+		return
 	}
+	before := memoOf(w.st)
+	out := w.st.SetText(id, f.format(load, w.sys()))
+	if fl := w.fields[id]; fl != nil {
+		w.setEntryQuietForce(fl, w.st.Text(id))
+	}
+	w.after(out)
 	w.moveTo(lengthMM, true)
+	what := "map point: " + f.label + " " + w.st.Text(id) + ", length " + w.st.Text("length")
+	w.record(what, before)
+	w.notify("Map click set " + strings.TrimPrefix(what, "map point: ") + " (Ctrl+Z undoes it)")
+}
+
+// mapShare is the share of the centre column the Map view takes while it
+// shows: the map needs height to be read, the table folds to a few rows
+// below it (and comes back when another view is chosen).
+const mapShare = 0.74
+
+// roomForMap gives the Map view the centre's height while it shows and
+// gives the table its rows back after; a divider the user dragged while
+// the map showed is kept.
+func (w *Window) roomForMap(on bool) {
+	c := w.panes.centre
+	if c == nil {
+		return
+	}
+	switch {
+	case on && !w.panes.mapRoom:
+		w.panes.beforeMap, w.panes.mapRoom = c.Offset, true
+		if c.Offset < mapShare {
+			c.SetOffset(mapShare)
+		}
+	case !on && w.panes.mapRoom:
+		w.panes.mapRoom = false
+		if c.Offset == mapShare {
+			c.SetOffset(w.panes.beforeMap)
+		}
+	}
 }

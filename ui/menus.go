@@ -1,6 +1,8 @@
 package ui
 
 import (
+	"strings"
+
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/dialog"
@@ -9,6 +11,7 @@ import (
 
 	"upright/ui/cli"
 	"upright/ui/model"
+	"upright/ui/units"
 )
 
 // Keyboard shortcuts of the file actions.
@@ -18,6 +21,9 @@ var (
 	shortcutSaveAs = &desktop.CustomShortcut{KeyName: fyne.KeyS, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
 	shortcutExport = &desktop.CustomShortcut{KeyName: fyne.KeyE, Modifier: fyne.KeyModifierShortcutDefault}
 	shortcutLength = &desktop.CustomShortcut{KeyName: fyne.KeyL, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutUndo   = &desktop.CustomShortcut{KeyName: fyne.KeyZ, Modifier: fyne.KeyModifierShortcutDefault}
+	shortcutRedo   = &desktop.CustomShortcut{KeyName: fyne.KeyZ, Modifier: fyne.KeyModifierShortcutDefault | fyne.KeyModifierShift}
+	shortcutRedoY  = &desktop.CustomShortcut{KeyName: fyne.KeyY, Modifier: fyne.KeyModifierShortcutDefault}
 )
 
 // fileItem makes a file menu item that runs its hook, or says it is not available.
@@ -38,6 +44,7 @@ func (w *Window) mainMenu() *fyne.MainMenu {
 	saveAs := fyne.NewMenuItem("Save scheme as…", w.SaveAs)
 	saveAs.Shortcut = shortcutSaveAs
 	file := fyne.NewMenu("File",
+		fyne.NewMenuItem("New scheme", w.NewScheme),
 		fileItem("Open scheme…", shortcutOpen, OpenHook != nil, w.Open),
 		recent,
 		fileItem("Save scheme", shortcutSave, SaveHook != nil, w.Save),
@@ -55,7 +62,10 @@ func (w *Window) mainMenu() *fyne.MainMenu {
 		fyne.NewMenuItem("Keyboard", w.showKeys),
 		fyne.NewMenuItem("About Upright", w.ShowAbout),
 	)
-	return fyne.NewMainMenu(file, help)
+	edit := w.newEditMenu()
+	w.ed.undoItem.Shortcut = shortcutUndo
+	w.ed.redoItem.Shortcut = shortcutRedo
+	return fyne.NewMainMenu(file, edit, help)
 }
 
 // addShortcuts registers the shortcuts on the canvas too, for drivers without a main menu.
@@ -66,6 +76,9 @@ func (w *Window) addShortcuts() {
 	c.AddShortcut(shortcutSaveAs, func(fyne.Shortcut) { w.SaveAs() })
 	c.AddShortcut(shortcutExport, func(fyne.Shortcut) { w.Export() })
 	c.AddShortcut(shortcutLength, func(fyne.Shortcut) { c.Focus(w.slider) })
+	c.AddShortcut(shortcutUndo, func(fyne.Shortcut) { w.Undo() })
+	c.AddShortcut(shortcutRedo, func(fyne.Shortcut) { w.Redo() })
+	c.AddShortcut(shortcutRedoY, func(fyne.Shortcut) { w.Redo() })
 }
 
 // notAvailable tells the user a file action is not in this build.
@@ -101,8 +114,8 @@ func (w *Window) Export() {
 	if w.snap != nil {
 		ex.Model, ex.Result = w.snap.Model, w.snap.Result
 	}
-	if w.xsGen == w.st.SchemeGen {
-		ex.Crossovers = append([]model.Crossover(nil), w.xsAll...)
+	if w.xsp.gen == w.st.SchemeGen {
+		ex.Crossovers = append([]model.Crossover(nil), w.xsp.all...)
 	}
 	ExportHook(w.win, ex)
 }
@@ -110,14 +123,25 @@ func (w *Window) Export() {
 // LoadScheme replaces the inputs with a scheme (a file opened, the demo);
 // the scheme has no file until OpenFile or SaveFile gives it one.
 func (w *Window) LoadScheme(sc model.Scheme) {
+	before := memoOf(w.st)
 	out := w.st.Load(sc)
+	w.record("load the scheme “"+strings.TrimSpace(sc.Name)+"”", before)
 	w.pinned, w.selected = nil, ""
 	w.syncInputs()
 	w.setPath("")
 	w.after(out)
 	if out.Submit {
-		w.xsStatus.SetText("Finding crossovers…")
+		w.xsp.searching()
 	}
+}
+
+// NewScheme starts a blank scheme with every option at its default and no
+// name; it is one undoable step.
+func (w *Window) NewScheme() {
+	sc := model.DefaultScheme()
+	sc.Name = ""
+	w.LoadScheme(sc)
+	w.notify("New scheme: every input at its default")
 }
 
 // ShowCautions shows the full caution text.
@@ -138,13 +162,24 @@ func (w *Window) ShowAbout() {
 }
 
 func (w *Window) showKeys() {
-	l := widget.NewLabel("Tab / Shift+Tab   move between inputs\n" +
+	dialog.ShowCustom("Keyboard", "Close", widget.NewLabel(keyHelp(w.sys())), w.win)
+}
+
+// keyHelp says what each key does, with the length steps in the shown unit.
+func keyHelp(sys units.System) string {
+	fine, coarse := "1 in", "1 ft"
+	if sys == units.SI {
+		fine, coarse = "50 mm", "250 mm"
+	}
+	return "Tab / Shift+Tab   move between inputs (leaving a field applies it)\n" +
+		"Enter   apply the field being typed\n" +
 		"Ctrl+L   go to the length slider\n" +
-		"← →   move the length by 1 in (25 mm)\n" +
-		"Page Up / Page Down   by 1 ft (250 mm)\n" +
+		"← →   move the length by " + fine + "\n" +
+		"Page Up / Page Down   move the length by " + coarse + "\n" +
 		"Home / End   to the ends of the range\n" +
+		"Dragging the slider snaps to " + fine + "; hold Shift, Ctrl or Alt to move it freely\n" +
 		"Space   choose the focused end condition\n" +
+		"Ctrl+Z   undo the last change; Ctrl+Shift+Z or Ctrl+Y   redo it\n" +
 		"Ctrl+O / Ctrl+S / Ctrl+E   open, save, export the report\n" +
-		"Ctrl+Shift+S   save as")
-	dialog.ShowCustom("Keyboard", "Close", l, w.win)
+		"Ctrl+Shift+S   save as"
 }

@@ -36,10 +36,10 @@ func (w *Window) buildResults() fyne.CanvasObject {
 		b := widget.NewButton("", nil)
 		b.Importance = widget.LowImportance
 		b.Alignment = widget.ButtonAlignLeading
-		return b
+		return container.NewThemeOverride(b, compactTheme{})
 	}
 	w.table.UpdateHeader = func(id widget.TableCellID, o fyne.CanvasObject) {
-		b := o.(*widget.Button)
+		b := o.(*container.ThemeOverride).Content.(*widget.Button)
 		col := w.tableCol(id.Col)
 		switch {
 		case col < 0:

@@ -70,7 +70,7 @@ func newSectionsView(w *Window) *sectionsView {
 		}
 		return v.front
 	})
-	v.raster.SetMinSize(fyne.NewSize(420, 240))
+	v.raster.SetMinSize(fyne.NewSize(420, plotMinHeight))
 	v.area = newSectionsArea(v)
 	go v.loop()
 	return v
@@ -79,6 +79,7 @@ func newSectionsView(w *Window) *sectionsView {
 // plotViews puts the chart and the Sections view in tabs above the slider.
 func (w *Window) plotViews(chartView fyne.CanvasObject) fyne.CanvasObject {
 	w.sections = newSectionsView(w)
+	w.fed = append(w.fed, w.sections)
 	tabs := container.NewAppTabs(
 		container.NewTabItem("Chart", chartView),
 		container.NewTabItem("Sections", w.sections.area),

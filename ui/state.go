@@ -376,3 +376,24 @@ func (s *State) Problems() []Problem {
 	}
 	return out
 }
+
+// Restore returns the inputs to a scheme from the undo history: every
+// field is rewritten from it and the length range the user chose is kept.
+func (s *State) Restore(sc model.Scheme, weakBraced bool) Outcome {
+	s.Draft = sc
+	s.WeakBraced = weakBraced
+	s.parseErr = map[string]string{}
+	s.reformatAll()
+	return s.revalidate(false)
+}
+
+// Commit takes a field's text as committed (Enter, Tab, leaving the field
+// or a pause in typing) and, when it parses, rewrites it from the value in
+// the field's shown unit, so a bare number then shows the unit it took.
+func (s *State) Commit(id, text string) Outcome {
+	out := s.SetText(id, text)
+	if _, bad := s.parseErr[id]; !bad && specByID(id) != nil {
+		s.reformat(id)
+	}
+	return out
+}

@@ -11,10 +11,10 @@ func stepText(s model.Step, col int, sys units.System) string {
 	case 0:
 		return s.Quantity
 	case 1:
-		v, _ := units.Convert(s.Value, s.Unit, sys)
+		v, _ := stepUnit(s, sys)
 		return stepValue(v)
 	case 2:
-		_, u := units.Convert(s.Value, s.Unit, sys)
+		_, u := stepUnit(s, sys)
 		return u
 	case 3:
 		return s.Clause
@@ -41,4 +41,14 @@ func fitStepColumns(t *liveTable, least []float32, titles []string, rows []model
 			t.SetColumnWidth(c, wd)
 		}
 	}
+}
+
+// stepUnit converts a trace value to the shown system; an SI force is
+// shown in kN, as a designer reads one (1,012.5 kN rather than 1,012,500 N).
+func stepUnit(s model.Step, sys units.System) (float64, string) {
+	v, u := units.Convert(s.Value, s.Unit, sys)
+	if u == "N" {
+		return v / 1000, "kN"
+	}
+	return v, u
 }

@@ -17,7 +17,7 @@ import (
 // architect needs them: the table shows as many as its width holds, in this
 // order, each as wide as its widest text, so nothing is cut; the rest are
 // behind the "All columns" switch (and in the calculation view).
-var columnPriority = []string{"size", "weight", "plan", "util", "capacity", "status", "family", "governs", "column-weight", "demand", "area", "carbon", "slenderness"}
+var columnPriority = []string{"size", "status", "weight", "plan", "util", "capacity", "family", "governs", "column-weight", "demand", "area", "carbon", "slenderness"}
 
 // tableFit is the results table's choice of columns.
 type tableFit struct {
@@ -66,12 +66,14 @@ func newKeyCell() fyne.CanvasObject {
 	img.Hide()
 	l := widget.NewLabel("")
 	l.Truncation = fyne.TextTruncateClip
-	return container.NewStack(container.NewPadded(img), l)
+	// Each cell carries the compact theme itself: the table sizes its rows
+	// from a template cell that is in no other container.
+	return container.NewThemeOverride(container.NewStack(container.NewPadded(img), l), compactTheme{})
 }
 
 // fillTableCell fills a cell of the results table.
 func (w *Window) fillTableCell(id widget.TableCellID, o fyne.CanvasObject) {
-	box := o.(*fyne.Container)
+	box := o.(*container.ThemeOverride).Content.(*fyne.Container)
 	img := box.Objects[0].(*fyne.Container).Objects[0].(*canvas.Image)
 	l := box.Objects[1].(*widget.Label)
 	col := w.tableCol(id.Col)
@@ -201,7 +203,9 @@ func (f *tableFit) choose() []int {
 			continue
 		}
 		need := f.natural[c] + pad
-		if need > room && len(out) > 0 {
+		// The size and its status (works or not, in words, readable without
+		// colour) are never dropped.
+		if need > room && len(out) > 1 {
 			continue // a narrower column further down may still fit
 		}
 		room -= need

@@ -33,3 +33,20 @@ func (lightTheme) Size(n fyne.ThemeSizeName) float32 {
 	}
 	return theme.DefaultTheme().Size(n)
 }
+
+// compactTheme is lightTheme with tight padding and slightly smaller text,
+// for the results table: a laptop screen then shows eight rows or more.
+type compactTheme struct{ lightTheme }
+
+// Size tightens the padding and the text of the table's cells.
+func (compactTheme) Size(n fyne.ThemeSizeName) float32 {
+	switch n {
+	case theme.SizeNamePadding:
+		return 1
+	case theme.SizeNameInnerPadding:
+		return 3
+	case theme.SizeNameText:
+		return 13
+	}
+	return lightTheme{}.Size(n)
+}

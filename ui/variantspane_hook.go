@@ -1,35 +1,15 @@
 package ui
 
 import (
-	"fyne.io/fyne/v2/container"
 	"upright/ui/model"
-
-	"fyne.io/fyne/v2"
 )
-
-// withVariantsView adds the Variants view as a tab beside Chart, Sections
-// and Map.
-func (w *Window) withVariantsView(chartArea fyne.CanvasObject) fyne.CanvasObject {
-	w.variants = newVariantsPane(windowEditor{w}, w.do)
-	if tabs := w.sectionsTabs; tabs != nil {
-		tabs.Append(container.NewTabItem("Variants", w.variants.Object()))
-	}
-	return chartArea
-}
-
-// showVariants feeds the Variants view the snapshot the window shows.
-func (w *Window) showVariants(s *Snapshot) {
-	if w.variants != nil {
-		w.variants.Show(s)
-	}
-}
 
 // showVariantsDemo is the Variants screenshot: the scheme shown with four
 // variants (as testdata/schemes/demo-variants.upright.json has them), on the
 // Variants tab; it returns what undoes both.
 func showVariantsDemo(w *Window) func() {
 	was := append([]model.Variant(nil), w.st.Draft.Variants...)
-	windowEditor{w}.Edit("variants for the screenshot", func(sc *model.Scheme) {
+	w.Edit("variants for the screenshot", func(sc *model.Scheme) {
 		sc.Variants = []model.Variant{
 			{Name: "22 ft ground floor", Changes: []model.Change{{Name: "length", Value: "22ft"}}},
 			{Name: "2 h rating", Changes: []model.Change{{Name: "fire", Value: "2h"}}},
@@ -40,6 +20,6 @@ func showVariantsDemo(w *Window) func() {
 	undoTab := showTab("Variants")(w)
 	return func() {
 		undoTab()
-		windowEditor{w}.Edit("variants back", func(sc *model.Scheme) { sc.Variants = was })
+		w.Edit("variants back", func(sc *model.Scheme) { sc.Variants = was })
 	}
 }

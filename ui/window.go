@@ -34,11 +34,6 @@ type Window struct {
 	appliedGen uint64 // the last snapshot shown
 	snap       *Snapshot
 	evalErr    error
-	xsAll      []model.Crossover
-	xs         []model.Crossover // the crossovers listed (filtered)
-	xsGen      uint64            // scheme generation xsAll belongs to
-	xsErr      error
-	allSteps   bool // list every size step among the crossovers
 
 	rows     []model.Row
 	sortCol  int
@@ -69,7 +64,7 @@ type Window struct {
 	sketches    map[model.EndCondition]*widgets.EndSketch
 	weakCheck   *widget.Check
 	twistCheck  *widget.Check  // the weak-axis braces also restrain twisting (steel Lcz)
-	nameEntry   *widget.Entry  // the scheme's name
+	nameEntry   *commitEntry   // the scheme's name
 	tieSelect   *widget.Select // the near-tie tolerance
 	loadMode    *widget.RadioGroup
 	directBox   *fyne.Container
@@ -101,13 +96,10 @@ type Window struct {
 	slider      *lengthSlider
 	sliderUnit  *widget.Label
 	rangeLabel  *widget.Label
-	xsList      *widget.List
-	xsStatus    *widget.Label
-	xsAllCheck  *widget.Check
+	xsp         *crossoversPane // the crossovers beside the chart
 
 	sections     *sectionsView      // the Sections tab beside the chart
 	sectionsTabs *container.AppTabs // the chart and Sections tabs
-	buildingView pane               // the Building tab (buildingpane_hook.go)
 
 	// results
 	table         *liveTable
@@ -140,9 +132,10 @@ type Window struct {
 	status     *widget.Label
 
 	files fileState // the scheme's file, unsaved changes, recent files, autosave
+	ed    edits     // the undo history and the Edit menu
 
-	mapv     *mapView      // the Map view beside the chart
-	variants *variantsPane // the Variants view beside the chart
+	mapv *mapView // the Map view beside the chart
+	fed  []pane   // the panes fed each snapshot shown (see views.go)
 }
 
 // processStart is when the package was initialised, close to the start of the process.
@@ -154,7 +147,7 @@ var traceOn = os.Getenv("UPRIGHT_TRACE") != ""
 // field is one text input with its error line.
 type field struct {
 	spec  *fieldSpec
-	entry *widget.Entry
+	entry *commitEntry
 	err   *widget.Label
 	box   *fyne.Container
 }
@@ -203,8 +196,6 @@ func (w *Window) build() fyne.CanvasObject {
 	inputs := w.buildInputs()
 	chartArea, xsPanel := w.buildChartArea()
 	chartArea = w.withMapView(chartArea)
-	chartArea = w.withVariantsView(chartArea)
-	w.buildingView = w.withBuildingView()
 	results := w.buildResults()
 	calc := w.buildCalc()
 
@@ -221,7 +212,10 @@ func (w *Window) build() fyne.CanvasObject {
 	w.status = widget.NewLabel("")
 	w.status.Wrapping = fyne.TextWrapWord
 	w.status.Alignment = fyne.TextAlignTrailing
-	statusBar := container.NewBorder(nil, nil, nil, fixedWidth(300, w.status), w.buildCaution())
+	// The status line always holds two lines, so a message that wraps (at a
+	// word) or clears moves nothing above it.
+	twoLines := widget.NewLabel("X\nX").MinSize().Height
+	statusBar := container.NewBorder(nil, nil, nil, container.New(&fixedLayout{size: fyne.NewSize(300, twoLines)}, w.status), w.buildCaution())
 	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), statusBar), nil, nil, split)
 }
 
@@ -254,7 +248,7 @@ func (w *Window) after(out Outcome) {
 	w.showFieldErrors()
 	w.updateBanner()
 	if out.Rebuild {
-		w.xsStatus.SetText("Finding crossovers…")
+		w.xsp.searching()
 		w.configureSlider()
 	}
 	if out.Submit {
@@ -326,11 +320,7 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	newScheme := w.snap == nil || w.snap.SchemeGen != s.SchemeGen
 	w.snap = s
 	w.refreshRows()
-	w.sections.show(s)
-	w.showVariants(s)
-	if w.buildingView != nil {
-		w.buildingView.Show(s)
-	}
+	w.feed(s)
 	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()
@@ -364,8 +354,7 @@ func (w *Window) applyCrossovers(x *Crossovers) {
 	if x.SchemeGen != w.st.SchemeGen {
 		return
 	}
-	w.xsGen, w.xsAll, w.xsErr = x.SchemeGen, x.List, x.Err
-	w.filterCrossovers()
+	w.xsp.setList(x.SchemeGen, x.List, x.Err)
 }
 
 // takeFrame copies a rendered chart into the window's image and shows it.
@@ -445,3 +434,17 @@ func (w *Window) BannerText() string {
 	}
 	return w.bannerText.Text
 }
+
+// fixedLayout holds its objects at one size whatever they hold.
+type fixedLayout struct{ size fyne.Size }
+
+// Layout gives each object the fixed size.
+func (l *fixedLayout) Layout(objs []fyne.CanvasObject, _ fyne.Size) {
+	for _, o := range objs {
+		o.Move(fyne.NewPos(0, 0))
+		o.Resize(l.size)
+	}
+}
+
+// MinSize is the fixed size.
+func (l *fixedLayout) MinSize([]fyne.CanvasObject) fyne.Size { return l.size }

@@ -9,6 +9,7 @@ import (
 	"time"
 
 	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/test"
 	"fyne.io/fyne/v2/widget"
 	"github.com/stretchr/testify/assert"
@@ -107,8 +108,8 @@ func TestSliderAcrossACrossoverChangesTheAnswer(t *testing.T) {
 	// The window found the same crossover and choosing it moves the slider there.
 	var listed []model.Crossover
 	h.ui(func() {
-		h.w.xsAllCheck.SetChecked(true)
-		listed = append(listed, h.w.xs...)
+		h.w.xsp.allCheck.SetChecked(true)
+		listed = append(listed, h.w.xsp.list...)
 	})
 	k := -1
 	for i, y := range listed {
@@ -117,7 +118,7 @@ func TestSliderAcrossACrossoverChangesTheAnswer(t *testing.T) {
 		}
 	}
 	require.GreaterOrEqual(t, k, 0, "the list holds the crossover")
-	h.ui(func() { h.w.xsList.Select(k) })
+	h.ui(func() { h.w.xsp.view.Select(k) })
 	h.settle()
 	h.ui(func() {
 		assert.InDelta(t, x.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6)
@@ -191,7 +192,7 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 	}
 	for _, c := range cases {
 		// Pasted in one go, so no half-typed text makes a valid scheme on the way.
-		h.ui(func() { h.w.fields[c.field].entry.SetText(c.typed) })
+		h.ui(func() { e := h.w.fields[c.field].entry; e.SetText(c.typed); e.commit() })
 		h.settle()
 		h.ui(func() {
 			f := h.w.fields[c.field]
@@ -225,14 +226,16 @@ func TestTypingKeepsTheLastValidStateOnScreen(t *testing.T) {
 	sc := DemoScheme()
 	h := newHarness(t, sc)
 	// Typed key by key, "12 furlongs" passes through valid lengths (1 ft,
-	// 12 ft) before it stops parsing: the result on screen is the last valid one.
+	// 12 ft) before it stops parsing; nothing is applied until the field is
+	// committed, and then it does not parse: the result on screen stays the
+	// scheme's own.
 	h.typeInto("length", "12 furlongs")
-	want := expectedBest(t, sc, 12*units.MMPerFoot)
+	want := expectedBest(t, sc, sc.Setting.LengthMM)
 	for fam, des := range want {
 		assert.Equal(t, des, h.sizeOf(fam), fam)
 	}
 	h.ui(func() {
-		assert.InDelta(t, 12*units.MMPerFoot, h.w.snap.Result.Setting.LengthMM, 1e-6)
+		assert.InDelta(t, sc.Setting.LengthMM, h.w.snap.Result.Setting.LengthMM, 1e-6)
 		assert.Contains(t, h.w.BannerText(), "Showing the last valid result: fix Unbraced length")
 	})
 }
@@ -283,7 +286,7 @@ func (h *harness) shownTexts() []string {
 			note = note[:i] // the rest names a candidate
 		}
 		out = append(out, note)
-		for _, x := range w.xs {
+		for _, x := range w.xsp.list {
 			out = append(out, units.Length(x.LengthMM, w.sys()))
 		}
 		for _, s := range w.stepRows {
@@ -348,7 +351,7 @@ func TestSortingByAColumn(t *testing.T) {
 		// Clicking the header sorts too.
 		hdr := h.w.table.CreateHeader()
 		h.w.table.UpdateHeader(widget.TableCellID{Row: -1, Col: h.w.tableColOf("util")}, hdr)
-		test.Tap(hdr.(*widget.Button))
+		test.Tap(hdr.(*container.ThemeOverride).Content.(*widget.Button))
 		assert.Equal(t, columnIndex("util"), h.w.sortCol)
 		for i := 1; i < len(h.w.rows); i++ {
 			assert.LessOrEqual(t, h.w.rows[i-1].Util, h.w.rows[i].Util)

@@ -1,0 +1,84 @@
+package ui
+
+import (
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+)
+
+// shownSetter is a pane that is told when its tab is selected or left, so a
+// hidden view does no work. A view pane implements it when it draws.
+type shownSetter interface {
+	SetShown(on bool)
+}
+
+// view is one tab of the view tabs above the slider, after Chart, Sections
+// and Map.
+type view struct {
+	title string
+	// make builds the view's pane; the window is its editor (w satisfies
+	// editor) and w.do runs a function on the UI goroutine.
+	make func(w *Window) pane
+}
+
+// extraViews are the views added as tabs after Chart, Sections and Map, in
+// tab order. Adding a view is one line here, e.g.
+//
+//	{"Variants", func(w *Window) pane { return newVariantsPane(w) }},
+//
+// plus one line in shotViews (ui/shots.go) for its screenshot.
+var extraViews = []view{
+	{"Variants", func(w *Window) pane { return newVariantsPane(w, w.do) }},
+	{"Building", func(w *Window) pane { return newBuildingPane(w) }},
+}
+
+// addViews appends the extra views to the view tabs and feeds them the
+// snapshots; selecting a tab tells each view whether it shows.
+func (w *Window) addViews(tabs *container.AppTabs) {
+	type shown struct {
+		item *container.TabItem
+		p    pane
+	}
+	var views []shown
+	for _, v := range extraViews {
+		p := v.make(w)
+		item := container.NewTabItem(v.title, p.Object())
+		tabs.Append(item)
+		w.fed = append(w.fed, p)
+		views = append(views, shown{item, p})
+	}
+	if len(views) == 0 {
+		return
+	}
+	prev := tabs.OnSelected
+	tabs.OnSelected = func(t *container.TabItem) {
+		if prev != nil {
+			prev(t)
+		}
+		for _, v := range views {
+			if s, ok := v.p.(shownSetter); ok {
+				s.SetShown(t == v.item)
+			}
+		}
+	}
+}
+
+// feed hands a snapshot to every pane that follows the snapshots.
+func (w *Window) feed(s *Snapshot) {
+	for _, p := range w.fed {
+		p.Show(s)
+	}
+}
+
+// Object returns the Sections view's content.
+func (v *sectionsView) Object() fyne.CanvasObject { return v.area }
+
+// Show hands the Sections view a snapshot.
+func (v *sectionsView) Show(s *Snapshot) { v.show(s) }
+
+// SetShown starts or stops the Sections view following the snapshots.
+func (v *sectionsView) SetShown(on bool) { v.setVisible(on) }
+
+var (
+	_ pane        = (*sectionsView)(nil)
+	_ shownSetter = (*sectionsView)(nil)
+)

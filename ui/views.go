@@ -41,7 +41,9 @@ func (w *Window) addViews(tabs *container.AppTabs) {
 	var views []shown
 	for _, v := range extraViews {
 		p := v.make(w)
-		item := container.NewTabItem(v.title, p.Object())
+		// A view scrolls inside its tab rather than widen the window: the
+		// window's smallest size stays that of the chart and the table.
+		item := container.NewTabItem(v.title, container.NewScroll(p.Object()))
 		tabs.Append(item)
 		w.fed = append(w.fed, p)
 		views = append(views, shown{item, p})

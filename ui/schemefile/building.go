@@ -3,6 +3,7 @@ package schemefile
 import (
 	"errors"
 	"fmt"
+	"strconv"
 
 	"upright/ui/model"
 	"upright/ui/units"
@@ -52,7 +53,7 @@ func marshalBuilding(b *model.Building, sys model.Units) *wBuilding {
 		}
 		return out
 	}
-	facade := number(b.FacadeKNPerM) + " kN/m"
+	facade := lineLoadText(b.FacadeKNPerM, sys)
 	return &wBuilding{
 		BaysX: list(b.BaysXMM), BaysY: list(b.BaysYMM), Storeys: list(b.StoreysMM),
 		FloorDead: pressureKind.format(b.FloorDeadKPa, sys), FloorLive: pressureKind.format(b.FloorLiveKPa, sys),
@@ -166,4 +167,23 @@ var buildingFields = map[string]string{
 	"bays-x": "bays_x", "bays-y": "bays_y", "storeys": "storeys", "facade": "facade", "overhang": "overhang",
 	"change-every": "change_every", "plan-storey": "plan_storey", "dead": "floor_dead", "live": "floor_live",
 	"roof-dead": "roof_dead", "roof-live": "roof_live", "snow": "snow", "occupancy": "occupancy",
+}
+
+// lineLoadText writes a load per length in kip/ft for a US scheme when some
+// decimal reads back to exactly the same value, else in kN/m (always exact).
+func lineLoadText(knm float64, sys model.Units) string {
+	if sys == model.US {
+		x := knm / units.KNPerMPerKlf
+		for prec := 1; prec <= 17; prec++ {
+			y, err := strconv.ParseFloat(strconv.FormatFloat(x, 'g', prec, 64), 64)
+			if err != nil {
+				break
+			}
+			t := number(y) + " kip/ft"
+			if got, err := units.ParseLineLoad(t); err == nil && got == knm {
+				return t
+			}
+		}
+	}
+	return number(knm) + " kN/m"
 }

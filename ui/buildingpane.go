@@ -67,9 +67,11 @@ func newBuildingPane(ed editor) *buildingPane {
 	p.status = widget.NewLabel("")
 	p.status.Wrapping = fyne.TextWrapWord
 	add := widget.NewButton("Add a building", func() { p.ed.Edit("add a building", addBuilding) })
+	about := widget.NewLabel("A building takes down and sizes every column of a grid, storey by storey, in every family switched on, and totals each family's steel, concrete, timber, carbon and floor area.")
+	about.Wrapping = fyne.TextWrapWord
 	p.none = container.NewVBox(
 		widget.NewLabelWithStyle("This scheme has no building.", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
-		widget.NewLabel("A building takes down and sizes every column of a grid, storey by storey, in every family switched on,\nand totals each family's steel, concrete, timber, carbon and floor area."),
+		about,
 		container.NewHBox(add),
 	)
 	entry := func(place string, apply func(s string) (string, func(b *model.Building), error)) *widget.Entry {
@@ -162,11 +164,22 @@ func newBuildingPane(ed editor) *buildingPane {
 	p.stacks = widget.NewLabel("")
 	p.stacks.TextStyle = fyne.TextStyle{Monospace: true}
 	left := container.NewVScroll(container.NewVBox(form, p.status, container.NewHBox(remove), widget.NewSeparator(), p.stacks))
-	drawings := container.NewAppTabs(
-		container.NewTabItem("Plan", p.plan),
-		container.NewTabItem("Stacks", p.elev),
-		container.NewTabItem("Totals", container.NewScroll(p.totals)),
-	)
+	// A choice, not tabs: the window's tab rows stay its own.
+	totals := container.NewScroll(p.totals)
+	views := map[string]fyne.CanvasObject{"Plan": p.plan, "Stacks": p.elev, "Totals": totals}
+	choice := widget.NewRadioGroup([]string{"Plan", "Stacks", "Totals"}, func(v string) {
+		for k, o := range views {
+			if k == v {
+				o.Show()
+			} else {
+				o.Hide()
+			}
+		}
+	})
+	choice.Horizontal = true
+	choice.Required = true
+	choice.SetSelected("Plan")
+	drawings := container.NewBorder(choice, nil, nil, nil, container.NewStack(p.plan, p.elev, totals))
 	split := container.NewHSplit(left, drawings)
 	split.Offset = 0.34
 	p.body = split

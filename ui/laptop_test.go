@@ -321,21 +321,20 @@ func TestScreenshotViewsFindTheirTabs(t *testing.T) {
 		eachTabs(h.w.win.Content(), func(tb tabber) {
 			titles = append(titles, tb.Selected().Text)
 		})
-		// The Building view's own Plan tabs come between the view tabs and the calculation's.
-		require.Equal(t, []string{"Chart", "Plan", "Calculation"}, titles)
+		require.Equal(t, []string{"Chart", "Calculation"}, titles)
 		selected := func() []string {
 			var out []string
 			eachTabs(h.w.win.Content(), func(tb tabber) { out = append(out, tb.Selected().Text) })
 			return out
 		}
 		undo := showTab("Load takedown")(h.w)
-		assert.Equal(t, []string{"Chart", "Plan", "Load takedown"}, selected())
+		assert.Equal(t, []string{"Chart", "Load takedown"}, selected())
 		undo()
-		assert.Equal(t, []string{"Chart", "Plan", "Calculation"}, selected())
+		assert.Equal(t, []string{"Chart", "Calculation"}, selected())
 		undo = showTab("Map")(h.w)
-		assert.Equal(t, []string{"Map", "Plan", "Calculation"}, selected())
+		assert.Equal(t, []string{"Map", "Calculation"}, selected())
 		undo()
-		assert.Equal(t, []string{"Chart", "Plan", "Calculation"}, selected())
+		assert.Equal(t, []string{"Chart", "Calculation"}, selected())
 		names := map[string]bool{}
 		for _, v := range shotViews {
 			assert.False(t, names[v.name], "view names are file names: %s twice", v.name)

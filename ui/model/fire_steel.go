@@ -97,14 +97,7 @@ func ProtectSteel(st Static, o BoardOutline, steelKgPerM, hours float64) (Static
 			Step{Clause: "board dead load (from memory: 50 lb/ft³)", Quantity: "board mass", Formula: "(protected box − bare box) × 801 kg/m³", Value: boardKg, Unit: "kg/m"},
 		)
 	}
-	out := st
-	out.FootprintMM = fc.FootprintMM
-	out.PlanAreaMM2 = pw * pd
-	out.MassKgPerM = st.MassKgPerM + boardKg
-	out.Constituents = append(append(make([]Constituent, 0, len(st.Constituents)+1), st.Constituents...),
-		Constituent{Kind: CarbonGypsum, Amount: boardKg})
-	out.Fire = fc
-	return out, nil
+	return protected(st, fc, CarbonGypsum, boardKg), nil
 }
 
 // fireSteelStep converts one enclosure trace line to SI.
@@ -173,14 +166,20 @@ func ProtectSteelSpray(st Static, o BoardOutline, steelKgPerM, hours float64) (S
 			Step{Clause: "sprayed material dead load (from memory: 15 lb/ft³)", Quantity: "sprayed mass", Formula: "contour perimeter × h × 240 kg/m³", Value: sprayKg, Unit: "kg/m"},
 		)
 	}
+	return protected(st, fc, CarbonSFRM, sprayKg), nil
+}
+
+// protected returns st with a protection of kg per metre of the carbon kind
+// added: the plan fc gives, the mass, the carbon and the check itself.
+func protected(st Static, fc *FireCheck, kind string, kg float64) Static {
 	out := st
 	out.FootprintMM = fc.FootprintMM
-	out.PlanAreaMM2 = pw * pd
-	out.MassKgPerM = st.MassKgPerM + sprayKg
+	out.PlanAreaMM2 = fc.FootprintMM[0] * fc.FootprintMM[1]
+	out.MassKgPerM = st.MassKgPerM + kg
 	out.Constituents = append(append(make([]Constituent, 0, len(st.Constituents)+1), st.Constituents...),
-		Constituent{Kind: CarbonSFRM, Amount: sprayKg})
+		Constituent{Kind: kind, Amount: kg})
 	out.Fire = fc
-	return out, nil
+	return out
 }
 
 // fireInches writes a thickness in inches as whole sixteenths, e.g. 1-3/8.

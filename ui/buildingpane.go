@@ -445,21 +445,10 @@ func totalsText(s *model.Schedule, sys units.System) string {
 		if t.SteelKg > 0 {
 			steel = units.Mass(t.SteelKg, sys)
 		}
-		fmt.Fprintf(&b, "%-24s %10s %10s %12s %10.0f %9s %6.2f%%\n", t.Name, steel, volumeWords(t.ConcreteM3, sys), volumeWords(t.TimberM3, sys),
+		fmt.Fprintf(&b, "%-24s %10s %10s %12s %10.0f %9s %6.2f%%\n", t.Name, steel, units.Volume(t.ConcreteM3, sys, 1), units.Volume(t.TimberM3, sys, 1),
 			t.CarbonKg, units.Area(t.ColumnAreaTotal, sys), 100*t.Share())
 	}
 	return b.String()
-}
-
-// volumeWords formats a volume, a dash for none.
-func volumeWords(m3 float64, sys units.System) string {
-	if m3 == 0 {
-		return "—"
-	}
-	if sys == units.US {
-		return fmt.Sprintf("%.1f yd³", m3/0.764554857984)
-	}
-	return fmt.Sprintf("%.1f m³", m3)
 }
 
 // stacksText lists the drawn family's sizes per position from the ground up.

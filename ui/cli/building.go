@@ -335,7 +335,7 @@ func printBuilding(w io.Writer, s *model.Schedule) {
 			continue
 		}
 		fmt.Fprintf(tw, "%s\t%s\t%d\t%s\t%s\t%s\t%s\t%.0f\t%s\t%.2f%%\n", t.Name, t.Material, t.Columns, totalLength(t.LengthM, sys),
-			orDash(t.SteelKg, units.Mass(t.SteelKg, sys)), volume(t.ConcreteM3, sys), volume(t.TimberM3, sys), t.CarbonKg, units.Area(t.ColumnAreaTotal, sys), 100*t.Share())
+			orDash(t.SteelKg, units.Mass(t.SteelKg, sys)), units.Volume(t.ConcreteM3, sys, 2), units.Volume(t.TimberM3, sys, 2), t.CarbonKg, units.Area(t.ColumnAreaTotal, sys), 100*t.Share())
 	}
 	tw.Flush()
 	if len(missing) > 0 {
@@ -345,17 +345,6 @@ func printBuilding(w io.Writer, s *model.Schedule) {
 		fmt.Fprintf(w, "\nBest over the whole building by %s: %s\n", sc.Metric, s.Totals[bi].Name)
 	}
 	fmt.Fprintf(w, "\n%s\n", model.Caution)
-}
-
-// volume formats a volume, m³ or yd³.
-func volume(m3 float64, sys units.System) string {
-	if m3 == 0 {
-		return "—"
-	}
-	if sys == units.US {
-		return fmt.Sprintf("%.2f yd³", m3/0.764554857984)
-	}
-	return fmt.Sprintf("%.2f m³", m3)
 }
 
 // plural picks the singular or plural noun for a count.

@@ -85,17 +85,6 @@ func stackWords(stack []model.StackEntry) string {
 	return strings.Join(parts, "; ")
 }
 
-// volumeText formats a volume in m³ or yd³, a dash for none.
-func volumeText(m3 float64, sys units.System) string {
-	if m3 == 0 {
-		return "—"
-	}
-	if sys == units.US {
-		return fmt.Sprintf("%.1f yd³", m3/0.764554857984)
-	}
-	return fmt.Sprintf("%.1f m³", m3)
-}
-
 // buildingSection is the building page: what was taken down, each family's
 // totals, the schedule of sizes per position and storey, the plan and the
 // elevation.
@@ -165,7 +154,7 @@ func buildingSection(d *doc, f *facts) {
 		if t.SteelKg > 0 {
 			steel = units.Mass(t.SteelKg, sys)
 		}
-		r := row{cells: []string{t.Name, totalLength(t.LengthM, sys), steel, volumeText(t.ConcreteM3, sys), volumeText(t.TimberM3, sys),
+		r := row{cells: []string{t.Name, totalLength(t.LengthM, sys), steel, units.Volume(t.ConcreteM3, sys, 1), units.Volume(t.TimberM3, sys, 1),
 			fmt.Sprintf("%.0f", t.CarbonKg), units.Area(t.ColumnAreaTotal, sys), fmt.Sprintf("%.2f%%", 100*t.Share())}}
 		if fi == best {
 			r.style = rowBest

@@ -1,13 +1,10 @@
 package report
 
 import (
-	"bytes"
 	"context"
 	"fmt"
 	"math"
 	"strings"
-
-	"codeberg.org/go-pdf/fpdf"
 
 	"upright/plots"
 	"upright/ui/chart"
@@ -102,27 +99,10 @@ func variantsSection(d *doc, f *facts) {
 // one row per variant, all at one scale.
 func variantsFigure(d *doc, f *facts) {
 	sheet := chart.VariantSections(f.variants, f.sys, true)
-	size := variantsFigureSize
-	size.DPI = f.opt.ChartDPI
-	var buf bytes.Buffer
-	layout, err := plots.WritePlan(&buf, plots.PNG, &sheet, size)
-	p := d.pdf
-	imgW := d.width
-	imgH := imgW * size.Height / size.Width
-	d.heading("The variants in plan", imgH+14)
-	if err != nil {
-		d.para("The plan sections could not be drawn: "+err.Error(), "I", sizeBody)
+	printedPerMM, ok := planFigure(d, &sheet, variantsFigureSize, f.opt.ChartDPI, "variants", "The variants in plan", 14)
+	if !ok {
 		return
 	}
-	info := p.RegisterImageOptionsReader("variants", fpdf.ImageOptions{ImageType: "PNG", ReadDpi: false}, bytes.NewReader(buf.Bytes()))
-	if info == nil || p.Error() != nil {
-		d.para("The plan sections could not be embedded.", "I", sizeBody)
-		return
-	}
-	y := p.GetY()
-	p.ImageOptions("variants", d.left, y, imgW, imgH, false, fpdf.ImageOptions{ImageType: "PNG"}, 0, "")
-	p.SetY(y + imgH + 1.5)
-	printedPerMM := layout.PxPerMM * 72 / float64(size.DPI) * d.width / size.Width
 	var names []string
 	for _, col := range f.variants.Columns() {
 		names = append(names, col.Name)
@@ -133,6 +113,6 @@ func variantsFigure(d *doc, f *facts) {
 	}
 	d.font("I", sizeSmall)
 	d.ink(inkMuted)
-	p.SetX(d.left)
-	p.MultiCell(d.width, lineH(sizeSmall), printable(strings.TrimSpace(caption)), "", "L", false)
+	d.pdf.SetX(d.left)
+	d.pdf.MultiCell(d.width, lineH(sizeSmall), printable(strings.TrimSpace(caption)), "", "L", false)
 }

@@ -245,6 +245,20 @@ func Area(m2 float64, sys System) string {
 	return fmt.Sprintf("%.0f ft²", m2/M2PerFt2)
 }
 
+// M3PerYd3 is one cubic yard in cubic metres.
+const M3PerYd3 = 0.764554857984
+
+// Volume formats m³ as yd³ (US) or m³ (SI) to prec decimals, a dash for none.
+func Volume(m3 float64, sys System, prec int) string {
+	if m3 == 0 {
+		return "—"
+	}
+	if sys == US {
+		return fmt.Sprintf("%.*f yd³", prec, m3/M3PerYd3)
+	}
+	return fmt.Sprintf("%.*f m³", prec, m3)
+}
+
 // Stress formats MPa as ksi or MPa.
 func Stress(mpa float64, sys System) string {
 	if sys == SI {

@@ -26,7 +26,7 @@ func TestCompositeSwitchAndOptions(t *testing.T) {
 	h.ui(func() {
 		require.NotNil(t, h.w.matChecks["composite"])
 		found := false
-		for _, r := range h.w.rows {
+		for _, r := range h.w.results.rows {
 			found = found || h.w.snap.Model.Families[r.Family].Material() == "composite"
 		}
 		assert.True(t, found, "the demo shows the filled families")
@@ -35,7 +35,7 @@ func TestCompositeSwitchAndOptions(t *testing.T) {
 	h.settle()
 	h.ui(func() {
 		assert.InDelta(t, 41.37, h.w.st.Valid.Composite.FillFcMPa, 0.01)
-		for _, r := range h.w.rows {
+		for _, r := range h.w.results.rows {
 			if h.w.snap.Model.Families[r.Family].Material() == "composite" {
 				assert.Contains(t, r.Static.Designation, "filled, 6 ksi")
 			}
@@ -54,11 +54,11 @@ func TestCompositeSwitchAndOptions(t *testing.T) {
 		h.w.opts.composite.families.SetSelected(nil)
 		assert.True(t, h.w.opts.composite.problem.Visible())
 		h.w.matChecks["composite"].SetChecked(false)
-		assert.Equal(t, "", h.w.BannerText())
+		assert.Equal(t, "", h.w.status.BannerText())
 	})
 	h.settle()
 	h.ui(func() {
-		for _, r := range h.w.rows {
+		for _, r := range h.w.results.rows {
 			assert.NotEqual(t, "composite", h.w.snap.Model.Families[r.Family].Material())
 		}
 	})
@@ -74,10 +74,10 @@ func TestCompositeRowShowsItsCalculation(t *testing.T) {
 	h.settle()
 	var des string
 	h.ui(func() {
-		for i, r := range h.w.rows {
+		for i, r := range h.w.results.rows {
 			if h.w.snap.Model.Families[r.Family].Material() == "composite" {
 				des = r.Static.Designation
-				h.w.table.Select(widget.TableCellID{Row: i, Col: 2})
+				h.w.results.table.Select(widget.TableCellID{Row: i, Col: 2})
 				break
 			}
 		}
@@ -85,10 +85,10 @@ func TestCompositeRowShowsItsCalculation(t *testing.T) {
 	require.NotEmpty(t, des)
 	h.settle()
 	h.ui(func() {
-		assert.Contains(t, h.w.calcTitle.Text, des)
-		assert.Contains(t, h.w.calcPlain.Text, "filled with 5 ksi concrete")
+		assert.Contains(t, h.w.calc.title.Text, des)
+		assert.Contains(t, h.w.calc.plain.Text, "filled with 5 ksi concrete")
 		cites := false
-		for _, s := range h.w.stepRows {
+		for _, s := range h.w.calc.stepRows {
 			_, u := units.Convert(s.Value, s.Unit, units.US)
 			assert.NotContains(t, []string{"mm", "MPa", "kN", "N", "mm2", "kN·m²", "kg/m³"}, u, "step %s left in SI", s.Quantity)
 			cites = cites || strings.HasPrefix(s.Clause, "AISC 360-22 Eq. I2-")

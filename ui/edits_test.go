@@ -116,12 +116,12 @@ func TestUndoOfAMapClick(t *testing.T) {
 	h.ui(func() {
 		h.w.moveMapPoint(6000, 1500e3, model.MapLoad)
 		assert.InDelta(t, 6000, h.w.st.Valid.Setting.LengthMM, 1e-6)
-		assert.Contains(t, h.w.Notice(), "Map click set", "the status bar says what the click changed")
+		assert.Contains(t, h.w.status.Notice(), "Map click set", "the status bar says what the click changed")
 		assert.Contains(t, h.w.UndoLabel(), "map point")
 		h.w.Undo()
 		assert.InDelta(t, sc.Setting.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6)
 		assert.InDelta(t, sc.Load.DirectN, h.w.st.Valid.Load.DirectN, 1e-6)
-		assert.Contains(t, h.w.Notice(), "Undone: map point")
+		assert.Contains(t, h.w.status.Notice(), "Undone: map point")
 	})
 	h.settle()
 }
@@ -160,13 +160,13 @@ func TestBannerLeavesNoBand(t *testing.T) {
 	})
 	h.typeInto("K", "abc")
 	h.ui(func() {
-		require.NotEmpty(t, h.w.BannerText())
+		require.NotEmpty(t, h.w.status.BannerText())
 		h.w.win.Content().Refresh()
 		assert.Equal(t, before, fyne.CurrentApp().Driver().AbsolutePositionForObject(h.w.panes.main), "the banner moves nothing")
 	})
 	h.typeInto("K", "")
 	h.ui(func() {
-		require.Empty(t, h.w.BannerText())
+		require.Empty(t, h.w.status.BannerText())
 		h.w.win.Content().Refresh()
 		assert.Equal(t, before, fyne.CurrentApp().Driver().AbsolutePositionForObject(h.w.panes.main))
 		assert.Equal(t, size, h.w.panes.main.Size(), "no band is left")

@@ -48,28 +48,11 @@ type fileState struct {
 	recent    schemefile.Recent
 	auto      *schemefile.Autosaver
 	lastTitle string
-
-	notice      string    // a file action's message, kept in the status bar for a while
-	noticeUntil time.Time // when the evaluation summary may take the status bar back
 }
 
-// noticeFor is how long a file action's message stays in the status bar.
-const noticeFor = 12 * time.Second
-
-// notify shows a file action's message in the status bar and keeps it there
-// for noticeFor, over the evaluation summary.
-func (w *Window) notify(msg string) {
-	w.files.notice, w.files.noticeUntil = msg, time.Now().Add(noticeFor)
-	setWrappedText(w.status, msg)
-}
-
-// Notice returns the file action's message the status bar keeps, or "" when none.
-func (w *Window) Notice() string {
-	if time.Now().After(w.files.noticeUntil) {
-		return ""
-	}
-	return w.files.notice
-}
+// notify shows a file action's message in the status line and keeps it
+// there for a while, over the evaluation summary.
+func (w *Window) notify(msg string) { w.status.say(msg) }
 
 // windows maps each open fyne.Window to its Window, so the hooks (which are
 // handed the fyne.Window) reach the window's file state.
@@ -340,7 +323,7 @@ func (w *Window) exportInputs() (exportInputs, error) {
 	if !w.st.HaveValid {
 		return exportInputs{}, errors.New("the inputs do not make a valid scheme yet; fix the fields named in the banner first")
 	}
-	in := exportInputs{sc: w.st.Valid, rng: w.st.Range, pinned: append([]string(nil), w.pinned...), all: true}
+	in := exportInputs{sc: w.st.Valid, rng: w.st.Range, pinned: append([]string(nil), w.picks.pinned...), all: true}
 	if w.xsp.gen == w.st.SchemeGen {
 		in.xs = familyChanges(w.xsp.all)
 	}

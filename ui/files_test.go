@@ -127,7 +127,7 @@ func TestSaveThenOpenGivesBackTheScheme(t *testing.T) {
 		assert.Equal(t, `21'-4.0"`, h.w.fields["length"].entry.Text)
 		assert.InDelta(t, 21*units.MMPerFoot+4*units.MMPerInch, h.w.snap.Result.Setting.LengthMM, 1e-9)
 		assert.False(t, h.w.Dirty())
-		assert.Equal(t, "Opened gallery"+schemefile.Extension, h.w.Notice())
+		assert.Equal(t, "Opened gallery"+schemefile.Extension, h.w.status.Notice())
 	})
 	// Ctrl+S now saves to the known file without asking: a length change reaches it.
 	// 16 ft 6 in, a round inch the slider snaps to (common practice: the
@@ -197,7 +197,7 @@ func TestExportsWriteAPDFACSVAndACharts(t *testing.T) {
 	svg := filepath.Join(dir, "chart.svg")
 	h.ui(func() {
 		require.NoError(t, h.w.ExportReportFile(pdf))
-		assert.Equal(t, "Wrote report.pdf", h.w.Notice())
+		assert.Equal(t, "Wrote report.pdf", h.w.status.Notice())
 		require.NoError(t, h.w.ExportCSVFile(csv))
 		require.NoError(t, h.w.ExportChartFile(png))
 		require.NoError(t, h.w.ExportChartFile(svg))

@@ -160,7 +160,7 @@ func (h *harness) cell(row int, col string) string {
 	var s string
 	h.ui(func() {
 		l := widget.NewLabel("")
-		h.w.updateCell(widget.TableCellID{Row: row, Col: columnIndex(col)}, l)
+		h.w.results.updateCell(widget.TableCellID{Row: row, Col: columnIndex(col)}, l)
 		s = l.Text
 	})
 	return s
@@ -170,8 +170,8 @@ func (h *harness) cell(row int, col string) string {
 func (h *harness) rowOf(family string) int {
 	r := -1
 	h.ui(func() {
-		for i := range h.w.rows {
-			if h.w.ctx.m.Families[h.w.rows[i].Family].Name() == family {
+		for i := range h.w.results.rows {
+			if h.w.results.ctx.m.Families[h.w.results.rows[i].Family].Name() == family {
 				r = i
 				return
 			}

@@ -22,7 +22,7 @@ func TestFireSelectorProtectsThePlan(t *testing.T) {
 		require.NotNil(t, h.w.fire.rating)
 		assert.Equal(t, "None", h.w.fire.rating.Selected)
 		assert.Equal(t, "Siliceous", h.w.fire.aggregate.Selected)
-		bare = h.w.rows[0].Static
+		bare = h.w.results.rows[0].Static
 	})
 	barePlan := plan(bare.FootprintMM)
 	assert.Equal(t, barePlan, h.cell(0, "plan"))
@@ -35,10 +35,10 @@ func TestFireSelectorProtectsThePlan(t *testing.T) {
 	h.ui(func() {
 		assert.Equal(t, "2h", h.w.st.Draft.Fire.Rating)
 		assert.Equal(t, "carbonate", h.w.st.Draft.Fire.Aggregate)
-		st = h.w.rows[0].Static
+		st = h.w.results.rows[0].Static
 	})
 	require.NotNil(t, st.Fire)
-	h.ui(func() { assert.Contains(t, h.w.tableFireNote.Text, "2 h fire rating") })
+	h.ui(func() { assert.Contains(t, h.w.results.tableFireNote.Text, "2 h fire rating") })
 	assert.Equal(t, plan(st.Fire.FootprintMM), h.cell(0, "plan"))
 	assert.Greater(t, st.Fire.FootprintMM[0], st.Fire.BareFootprintMM[0]+2*15.875-1e-6, "at least one 5/8 in layer each side")
 

@@ -18,14 +18,14 @@ func TestNearTieToleranceSetting(t *testing.T) {
 	h.settle()
 	h.ui(func() {
 		assert.Equal(t, 0.20, h.w.st.Valid.Tie)
-		note := h.w.tableNote.Text
+		note := h.w.results.tableNote.Text
 		assert.True(t, strings.Contains(note, "within 20%: "), note)
 		h.w.tieSelect.SetSelected("none")
 	})
 	h.settle()
 	h.ui(func() {
 		assert.Equal(t, 0.0, h.w.st.Valid.Tie)
-		assert.NotContains(t, h.w.tableNote.Text, "within")
+		assert.NotContains(t, h.w.results.tableNote.Text, "within")
 	})
 	// A scheme with another tolerance shows it.
 	sc := DemoScheme()

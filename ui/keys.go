@@ -57,14 +57,14 @@ func (s *swatchSet) render(ch *plots.Chart, dpi int) []Swatch {
 // takeKeys copies the engine's curve keys into new images of the window's
 // own (a chart is redrawn only when the curves shown change, so this is
 // rare) and shows them in the table. UI goroutine.
-func (w *Window) takeKeys(keys []Swatch) {
-	w.keys = make(map[string]*image.RGBA, len(keys))
+func (p *resultsPane) takeKeys(keys []Swatch) {
+	p.keys = make(map[string]*image.RGBA, len(keys))
 	for _, k := range keys {
 		dst := image.NewRGBA(k.Img.Bounds())
 		copy(dst.Pix, k.Img.Pix)
-		w.keys[k.Designation] = dst
+		p.keys[k.Designation] = dst
 	}
-	if w.table != nil {
-		w.table.update(false)
+	if p.table != nil {
+		p.table.update(false)
 	}
 }

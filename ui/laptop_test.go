@@ -100,7 +100,7 @@ func TestLaptopScreenShowsTheComparison(t *testing.T) {
 	h := newHarnessAt(t, DemoScheme(), laptop)
 	h.layOut()
 	// Choose a row so the calculation view shows a trace too.
-	h.ui(func() { h.w.Select(h.w.rows[0].Static.Designation) })
+	h.ui(func() { h.w.Select(h.w.results.rows[0].Static.Designation) })
 	h.layOut()
 	h.ui(func() {
 		w := h.w
@@ -110,38 +110,38 @@ func TestLaptopScreenShowsTheComparison(t *testing.T) {
 		// Every shown curve can be identified: each has a key, beside its
 		// row in the table (a pinned curve not in the table is listed in the
 		// chart's own legend, see plots TestKeyNoteListsPinnedSeriesInsteadOfHiding).
-		require.NotEmpty(t, w.keys, "the chart's curves have keys")
+		require.NotEmpty(t, w.results.keys, "the chart's curves have keys")
 		inTable := map[string]bool{}
-		for _, r := range w.rows {
+		for _, r := range w.results.rows {
 			inTable[r.Static.Designation] = true
 		}
-		for des := range w.keys {
-			assert.True(t, inTable[des] || contains(w.pinned, des), "curve %s is keyed beside its table row", des)
+		for des := range w.results.keys {
+			assert.True(t, inTable[des] || contains(w.picks.pinned, des), "curve %s is keyed beside its table row", des)
 		}
-		for i, r := range w.rows {
+		for i, r := range w.results.rows {
 			if w.snap.Result.Families[r.Family].Best() != nil && w.snap.Result.Families[r.Family].Best().Index == r.Index {
-				assert.NotNil(t, w.keys[r.Static.Designation], "row %d (%s) carries its curve's key", i, r.Static.Designation)
+				assert.NotNil(t, w.results.keys[r.Static.Designation], "row %d (%s) carries its curve's key", i, r.Static.Designation)
 			}
 		}
-		assert.Equal(t, -1, w.tableCol(0), "the key is the table's first column")
+		assert.Equal(t, -1, w.results.tableCol(0), "the key is the table's first column")
 
 		// The table shows size, status (works or not, in words), weight,
 		// plan and utilization without scrolling sideways; the capacity
 		// follows when the width holds it.
-		shown := w.ShownColumns()
+		shown := w.results.ShownColumns()
 		for _, id := range []string{"size", "status", "weight", "plan", "util"} {
 			assert.Contains(t, shown, id)
 		}
 		total := float32(keyColumnWidth) + theme.Padding()
-		for _, col := range w.fit.shown {
-			total += w.fit.natural[col] + theme.Padding()
+		for _, col := range w.results.fit.shown {
+			total += w.results.fit.natural[col] + theme.Padding()
 		}
-		assert.LessOrEqual(t, total, w.table.Size().Width, "the shown columns fit the table's width (%v)", shown)
-		assert.True(t, onScreen(c, w.table))
+		assert.LessOrEqual(t, total, w.results.table.Size().Width, "the shown columns fit the table's width (%v)", shown)
+		assert.True(t, onScreen(c, w.results.table))
 
 		// The caution and the crossover list are visible.
-		assert.True(t, onScreen(c, w.caution), "the caution is inside the window")
-		assert.GreaterOrEqual(t, w.caution.Size().Height, w.caution.MinSize().Height-1, "the caution has the height its lines need")
+		assert.True(t, onScreen(c, w.status.caution), "the caution is inside the window")
+		assert.GreaterOrEqual(t, w.status.caution.Size().Height, w.status.caution.MinSize().Height-1, "the caution has the height its lines need")
 		assert.True(t, onScreen(c, w.xsp.view), "the crossover list is inside the window")
 		require.NotEmpty(t, w.xsp.list)
 		assert.GreaterOrEqual(t, w.xsp.view.Size().Height, float32(60), "the list shows at least its first crossover")
@@ -169,7 +169,7 @@ func TestWiderScreensShowMore(t *testing.T) {
 		h := newHarnessAt(t, DemoScheme(), size)
 		h.layOut()
 		h.ui(func() {
-			counts = append(counts, len(h.w.ShownColumns()))
+			counts = append(counts, len(h.w.results.ShownColumns()))
 			assert.Empty(t, cutLabels(h.w.win.Canvas()), "at %v", size)
 		})
 	}
@@ -182,7 +182,7 @@ func TestTheCautionKeepsItsKeyWordsInANarrowWindow(t *testing.T) {
 	h := newHarnessAt(t, DemoScheme(), minWindowSize)
 	h.layOut()
 	h.ui(func() {
-		cw := h.w.caution
+		cw := h.w.status.caution
 		for _, must := range []string{"licensed structural engineer", "local code"} {
 			assert.Contains(t, cw.Text, must)
 		}
@@ -202,18 +202,18 @@ func TestFoldingTheInputsGivesTheTableTheRoom(t *testing.T) {
 	var before float32
 	var cols int
 	h.ui(func() {
-		before, cols = h.w.table.Size().Width, len(h.w.ShownColumns())
+		before, cols = h.w.results.table.Size().Width, len(h.w.results.ShownColumns())
 		h.w.FoldInputs(true)
 	})
 	h.layOut()
 	h.ui(func() {
 		assert.True(t, h.w.InputsFolded())
-		assert.Greater(t, h.w.table.Size().Width, before+200, "the table takes the inputs' width")
-		assert.Greater(t, len(h.w.ShownColumns()), cols, "and shows more columns")
+		assert.Greater(t, h.w.results.table.Size().Width, before+200, "the table takes the inputs' width")
+		assert.Greater(t, len(h.w.results.ShownColumns()), cols, "and shows more columns")
 		h.w.FoldInputs(false)
 	})
 	h.layOut()
-	h.ui(func() { assert.InDelta(t, before, h.w.table.Size().Width, 2, "unfolding gives the width back") })
+	h.ui(func() { assert.InDelta(t, before, h.w.results.table.Size().Width, 2, "unfolding gives the width back") })
 }
 
 func TestDividersAndFoldComeBackThroughPreferences(t *testing.T) {

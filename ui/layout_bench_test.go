@@ -12,6 +12,6 @@ func BenchmarkTableRefresh(b *testing.B) {
 	h.layOut()
 	b.ResetTimer()
 	for i := 0; i < b.N; i++ {
-		h.ui(func() { h.w.refreshRows() })
+		h.ui(func() { h.w.results.refreshRows() })
 	}
 }

@@ -110,7 +110,7 @@ func (w *Window) Export() {
 		w.notAvailable("Exporting a report")
 		return
 	}
-	ex := Export{Scheme: w.st.Valid, Pinned: append([]string(nil), w.pinned...), Selected: w.selected}
+	ex := Export{Scheme: w.st.Valid, Pinned: append([]string(nil), w.picks.pinned...), Selected: w.picks.selected}
 	if w.snap != nil {
 		ex.Model, ex.Result = w.snap.Model, w.snap.Result
 	}
@@ -126,7 +126,7 @@ func (w *Window) LoadScheme(sc model.Scheme) {
 	before := memoOf(w.st)
 	out := w.st.Load(sc)
 	w.record("load the scheme “"+strings.TrimSpace(sc.Name)+"”", before)
-	w.pinned, w.selected = nil, ""
+	w.picks = picks{}
 	w.syncInputs()
 	w.setPath("")
 	w.after(out)

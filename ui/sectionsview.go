@@ -131,7 +131,7 @@ func (v *sectionsView) request() {
 		scale = c.Scale()
 	}
 	v.mu.Lock()
-	v.job = &sectionsJob{snap: v.last, selected: v.w.selected, w: v.wantW, h: v.wantH, dpi: chartDPI(scale)}
+	v.job = &sectionsJob{snap: v.last, selected: v.w.picks.selected, w: v.wantW, h: v.wantH, dpi: chartDPI(scale)}
 	v.mu.Unlock()
 	poke(v.wake)
 }

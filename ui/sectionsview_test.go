@@ -89,8 +89,8 @@ func TestSectionsViewTapSelects(t *testing.T) {
 	})
 	h.settle()
 	h.ui(func() {
-		assert.Equal(t, target, h.w.selected)
-		assert.Contains(t, h.w.calcTitle.Text, target)
+		assert.Equal(t, target, h.w.picks.selected)
+		assert.Contains(t, h.w.calc.title.Text, target)
 	})
 	// The highlight follows: the view redraws with the selection.
 	waitSections(t, h, func() bool { return h.w.sections.renders.Load() >= 2 })

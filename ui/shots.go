@@ -67,8 +67,8 @@ func showTab(title string) func(w *Window) func() {
 // showRow returns a view with the table's row i chosen, its calculation shown.
 func showRow(i int) func(w *Window) func() {
 	return func(w *Window) func() {
-		if i < len(w.rows) {
-			w.Select(w.rows[i].Static.Designation)
+		if rows := w.results.rows; i < len(rows) {
+			w.Select(rows[i].Static.Designation)
 		}
 		return func() {}
 	}

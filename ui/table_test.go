@@ -15,11 +15,11 @@ func rowsShown(h *harness) int {
 	var n int
 	h.ui(func() {
 		var row float32
-		for o := range h.w.table.bound {
+		for o := range h.w.results.table.bound {
 			row = max(row, o.Size().Height)
 		}
 		row += compactTheme{}.Size(theme.SizeNamePadding)
-		n = int(h.w.table.Size().Height/row) - 1 // less the header row
+		n = int(h.w.results.table.Size().Height/row) - 1 // less the header row
 	})
 	return n
 }
@@ -32,24 +32,24 @@ func TestTableShowsEightRowsOnALaptop(t *testing.T) {
 		h := newHarnessAt(t, DemoScheme(), size)
 		h.layOut()
 		assert.GreaterOrEqual(t, rowsShown(h), 8, "rows at %v", size)
-		h.ui(func() { assert.Contains(t, h.w.ShownColumns(), "status", "status shown at %v", size) })
+		h.ui(func() { assert.Contains(t, h.w.results.ShownColumns(), "status", "status shown at %v", size) })
 	}
 }
 
 // The mouse wheel over the table scrolls it.
 func TestWheelScrollsTheTable(t *testing.T) {
 	h := newHarnessAt(t, DemoScheme(), fyne.NewSize(1366, 768))
-	h.ui(func() { h.w.showAllChk.SetChecked(true) })
+	h.ui(func() { h.w.results.showAllChk.SetChecked(true) })
 	h.settle()
 	h.layOut()
 	h.ui(func() {
 		c := h.w.win.Canvas()
-		pos := fyne.CurrentApp().Driver().AbsolutePositionForObject(h.w.table)
-		sz := h.w.table.Size()
-		require.Greater(t, len(h.w.rows), 20)
+		pos := fyne.CurrentApp().Driver().AbsolutePositionForObject(h.w.results.table)
+		sz := h.w.results.table.Size()
+		require.Greater(t, len(h.w.results.rows), 20)
 		lastRow := func() int {
 			m := -1
-			for _, id := range h.w.table.bound {
+			for _, id := range h.w.results.table.bound {
 				m = max(m, id.Row)
 			}
 			return m

@@ -38,20 +38,20 @@ const keyColumnWidth = keyWidth + 8
 
 // tableCol maps a table column to the index of the results column it shows,
 // or -1 for the key column.
-func (w *Window) tableCol(c int) int {
+func (p *resultsPane) tableCol(c int) int {
 	if c == 0 {
 		return -1
 	}
-	if c-1 < len(w.fit.shown) {
-		return w.fit.shown[c-1]
+	if c-1 < len(p.fit.shown) {
+		return p.fit.shown[c-1]
 	}
 	return len(columns) // past the end: an empty cell
 }
 
 // ShownColumns returns the ids of the result columns the table shows, in order.
-func (w *Window) ShownColumns() []string {
-	out := make([]string, 0, len(w.fit.shown))
-	for _, c := range w.fit.shown {
+func (p *resultsPane) ShownColumns() []string {
+	out := make([]string, 0, len(p.fit.shown))
+	for _, c := range p.fit.shown {
 		out = append(out, columns[c].id)
 	}
 	return out
@@ -72,24 +72,24 @@ func newKeyCell() fyne.CanvasObject {
 }
 
 // fillTableCell fills a cell of the results table.
-func (w *Window) fillTableCell(id widget.TableCellID, o fyne.CanvasObject) {
+func (p *resultsPane) fillTableCell(id widget.TableCellID, o fyne.CanvasObject) {
 	box := o.(*container.ThemeOverride).Content.(*fyne.Container)
 	img := box.Objects[0].(*fyne.Container).Objects[0].(*canvas.Image)
 	l := box.Objects[1].(*widget.Label)
-	col := w.tableCol(id.Col)
+	col := p.tableCol(id.Col)
 	if col >= 0 {
 		if img.Visible() {
 			img.Hide()
 		}
-		w.updateCell(widget.TableCellID{Row: id.Row, Col: col}, l)
+		p.updateCell(widget.TableCellID{Row: id.Row, Col: col}, l)
 		return
 	}
 	if l.Text != "" {
 		l.SetText("")
 	}
 	var key *image.RGBA
-	if id.Row >= 0 && id.Row < len(w.rows) {
-		key = w.keys[w.rows[id.Row].Static.Designation]
+	if id.Row >= 0 && id.Row < len(p.rows) {
+		key = p.keys[p.rows[id.Row].Static.Designation]
 	}
 	if key == nil {
 		img.Hide()
@@ -126,9 +126,9 @@ func headerWidth(txt string) float32 {
 // fitColumns measures the columns' texts and chooses the columns the
 // table's width holds, redrawing the table when the choice or a width
 // changed; full redraws it anyway.
-func (w *Window) fitColumns(full bool) {
-	f := &w.fit
-	key := fmt.Sprintf("%s|%s|%d", w.ctx.sys, w.ctx.m.Scheme.Setting.Method, w.sortCol)
+func (p *resultsPane) fitColumns(full bool) {
+	f := &p.fit
+	key := fmt.Sprintf("%s|%s|%d", p.ctx.sys, p.ctx.m.Scheme.Setting.Method, p.sortCol)
 	if key != f.key || len(f.natural) != len(columns) {
 		f.key = key
 		f.natural = make([]float32, len(columns))
@@ -139,13 +139,13 @@ func (w *Window) fitColumns(full bool) {
 	for c := range columns {
 		nat := f.natural[c]
 		if nat == 0 {
-			nat = headerWidth(w.headerText(c)) // with its sort arrow
+			nat = headerWidth(p.headerText(c)) // with its sort arrow
 			f.runes[c] = 0
 		}
 		// Only a text longer than any measured so far can need more room:
 		// measuring every cell on every slider step would cost milliseconds.
-		for r := range w.rows {
-			txt := columns[c].cell(&w.ctx, &w.rows[r])
+		for r := range p.rows {
+			txt := columns[c].cell(&p.ctx, &p.rows[r])
 			if n := utf8.RuneCountInString(txt); n > f.runes[c] {
 				f.runes[c] = n
 				nat = max(nat, cellWidth(txt))
@@ -169,9 +169,9 @@ func (w *Window) fitColumns(full bool) {
 	if !changed && !full {
 		return
 	}
-	w.table.SetColumnWidth(0, keyColumnWidth)
+	p.table.SetColumnWidth(0, keyColumnWidth)
 	for i, c := range f.shown {
-		w.table.SetColumnWidth(i+1, f.natural[c])
+		p.table.SetColumnWidth(i+1, f.natural[c])
 	}
 	sticky := 1
 	for _, c := range f.shown {
@@ -180,9 +180,9 @@ func (w *Window) fitColumns(full bool) {
 		}
 		sticky++
 	}
-	w.table.StickyColumnCount = sticky
+	p.table.StickyColumnCount = sticky
 	f.refreshes++
-	w.table.update(true)
+	p.table.update(true)
 }
 
 // choose returns the columns that fit the width, in priority order until
@@ -245,8 +245,8 @@ func (l *widthWatch) MinSize(objs []fyne.CanvasObject) fyne.Size {
 }
 
 // tableColOf returns the table column showing a results column (by id), or -1.
-func (w *Window) tableColOf(id string) int {
-	for i, c := range w.fit.shown {
+func (p *resultsPane) tableColOf(id string) int {
+	for i, c := range p.fit.shown {
 		if columns[c].id == id {
 			return i + 1
 		}

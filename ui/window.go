@@ -1,7 +1,6 @@
 package ui
 
 import (
-	"fmt"
 	"image"
 	"log"
 	"os"
@@ -35,13 +34,7 @@ type Window struct {
 	snap       *Snapshot
 	evalErr    error
 
-	rows     []model.Row
-	sortCol  int
-	sortDesc bool
-	showAll  bool
-	pinned   []string
-	selected string
-	ctx      cellCtx
+	picks picks // the candidate shown in the calculation and those pinned to the chart
 
 	do     func(func()) // runs a function on the UI goroutine (fyne.Do)
 	doWait func(func()) // the same, waiting for it (fyne.DoAndWait)
@@ -101,35 +94,13 @@ type Window struct {
 	sections     *sectionsView      // the Sections tab beside the chart
 	sectionsTabs *container.AppTabs // the chart and Sections tabs
 
-	// results
-	table         *liveTable
-	tableSys      units.System // units of the headers shown
-	tableMethod   model.Method // method of the headers shown
-	tableNote     *widget.Label
-	tableFireNote *widget.Label // the fire rating's line under the table note
-	showAllChk    *widget.Check
-	allColsChk    *widget.Check
-	fit           tableFit               // the columns the table's width holds
-	keys          map[string]*image.RGBA // each drawn curve's key, by designation
-
-	// calculation view
-	calcTitle *widget.Label
-	calcPlain *widget.Label
-	calcWarn  *widget.Label
-	pinButton *widget.Button
-	clearPins *widget.Button
-	steps     *liveTable
-	stepRows  []model.Step
-	loadSteps *liveTable
-	loadRows  []model.Step
+	results *resultsPane // the results table
+	calc    *calcPane    // the calculation view
 
 	// frame
 	panes      panes           // the draggable splits and the folded inputs
 	inSections []*inputSection // the foldable sections of the inputs
-	caution    *widget.Label
-	banner     *fyne.Container
-	bannerText *widget.Label
-	status     *widget.Label
+	status     *statusPane     // the banner, the status line and the caution
 
 	files fileState // the scheme's file, unsaved changes, recent files, autosave
 	ed    edits     // the undo history and the Edit menu
@@ -161,7 +132,7 @@ func NewWindow(a fyne.App, sc model.Scheme) *Window {
 // results onto the UI goroutine (fyne.Do and fyne.DoAndWait, or in tests a
 // lock shared with the test's own actions).
 func newWindow(a fyne.App, sc model.Scheme, do, doWait func(func())) *Window {
-	w := &Window{app: a, st: NewState(sc), sortCol: -1, started: time.Now(), do: do, doWait: doWait}
+	w := &Window{app: a, st: NewState(sc), started: time.Now(), do: do, doWait: doWait}
 	a.Settings().SetTheme(lightTheme{})
 	w.win = a.NewWindow("Upright")
 	registerWindow(w)
@@ -196,27 +167,14 @@ func (w *Window) build() fyne.CanvasObject {
 	inputs := w.buildInputs()
 	chartArea, xsPanel := w.buildChartArea()
 	chartArea = w.withMapView(chartArea)
-	results := w.buildResults()
-	calc := w.buildCalc()
+	w.results = newResultsPane(func() (units.System, model.Method) { return w.sys(), w.st.Valid.Setting.Method }, w.Select)
+	w.calc = newCalcPane(w.TogglePin, w.clearPins)
+	w.status = newStatusPane()
+	w.fed = append(w.fed, w.results, w.calc, w.status)
 
-	w.bannerText = widget.NewLabel("")
-	w.bannerText.Wrapping = fyne.TextWrapWord
-	w.bannerText.Importance = widget.DangerImportance
-	w.bannerText.TextStyle = fyne.TextStyle{Bold: true}
-	bg := canvas.NewRectangle(bannerColor)
-	w.banner = container.NewStack(bg, w.bannerText)
-	w.banner.Hide()
+	split := w.buildPanes(inputs, chartArea, w.results.Object(), xsPanel, w.calc.Object(), w.status.Banner())
 
-	split := w.buildPanes(inputs, chartArea, results, xsPanel, calc, w.banner)
-
-	w.status = widget.NewLabel("")
-	w.status.Wrapping = fyne.TextWrapWord
-	w.status.Alignment = fyne.TextAlignTrailing
-	// The status line always holds two lines, so a message that wraps (at a
-	// word) or clears moves nothing above it.
-	twoLines := widget.NewLabel("X\nX").MinSize().Height
-	statusBar := container.NewBorder(nil, nil, nil, container.New(&fixedLayout{size: fyne.NewSize(300, twoLines)}, w.status), w.buildCaution())
-	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), statusBar), nil, nil, split)
+	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), w.status.Object()), nil, nil, split)
 }
 
 // sys is the display system of the inputs.
@@ -237,7 +195,7 @@ func (w *Window) submit() {
 	}
 	w.eng.Submit(Request{
 		Gen: w.reqGen, SchemeGen: w.st.SchemeGen, Scheme: w.st.Valid, Range: w.st.Range,
-		Pinned: append([]string(nil), w.pinned...), Selected: w.selected,
+		Pinned: append([]string(nil), w.picks.pinned...), Selected: w.picks.selected,
 		Width: w.wantW, Height: w.wantH, DPI: chartDPI(scale),
 	})
 	w.mapv.submit()
@@ -319,22 +277,14 @@ func (w *Window) applySnapshot(s *Snapshot) {
 	w.evalErr = nil
 	newScheme := w.snap == nil || w.snap.SchemeGen != s.SchemeGen
 	w.snap = s
-	w.refreshRows()
 	w.feed(s)
-	w.updateCalc()
 	if newScheme {
 		w.updateLoadSummary()
-		w.updateLoadSteps()
 	}
 	w.updateBanner()
 	n := 0
 	for i := range s.Result.Families {
 		n += len(s.Result.Families[i].Rows)
-	}
-	if msg := w.Notice(); msg != "" {
-		setWrappedText(w.status, msg)
-	} else {
-		setWrappedText(w.status, fmt.Sprintf("%d candidates in %d families · evaluated in %.1f ms", n, len(s.Result.Families), float64(s.Took.Microseconds())/1000))
 	}
 	w.firstLog.Do(func() {
 		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was created (%d candidates)",
@@ -370,7 +320,7 @@ func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
 			w.front = image.NewRGBA(b)
 		}
 		copy(w.front.Pix, img.Pix)
-		w.takeKeys(info.Keys)
+		w.results.takeKeys(info.Keys)
 		w.frame = info
 		w.frames++
 		if w.frames == 1 {
@@ -419,20 +369,7 @@ func (w *Window) updateBanner() {
 	case len(model.Materials()) == 0:
 		msg = "No materials are registered in this build, so there is nothing to compare."
 	}
-	w.bannerText.SetText(msg)
-	if msg == "" {
-		w.banner.Hide()
-	} else {
-		w.banner.Show()
-	}
-}
-
-// BannerText returns the banner's message; empty when hidden.
-func (w *Window) BannerText() string {
-	if !w.banner.Visible() {
-		return ""
-	}
-	return w.bannerText.Text
+	w.status.setBanner(msg)
 }
 
 // fixedLayout holds its objects at one size whatever they hold.

@@ -43,8 +43,8 @@ func TestDemoSchemeOpensAndValidates(t *testing.T) {
 	h := newHarness(t, sc)
 	h.ui(func() {
 		assert.Equal(t, "Upright — "+sc.Name, h.w.win.Title())
-		assert.Equal(t, "", h.w.BannerText())
-		assert.NotEmpty(t, h.w.rows, "the table shows the demo's answers")
+		assert.Equal(t, "", h.w.status.BannerText())
+		assert.NotEmpty(t, h.w.results.rows, "the table shows the demo's answers")
 		assert.NotNil(t, h.w.front, "a chart was drawn")
 	})
 }
@@ -68,15 +68,15 @@ func TestTypingALengthUpdatesTheTable(t *testing.T) {
 		h.ui(func() {
 			assert.InDelta(t, tc.mm, h.w.snap.Result.Setting.LengthMM, 1e-6)
 			assert.InDelta(t, toDisplay(tc.mm, units.US), h.w.slider.Value, 1e-9, "the slider follows the typed length")
-			assert.Contains(t, h.w.tableNote.Text, units.Length(tc.mm, units.US))
+			assert.Contains(t, h.w.results.tableNote.Text, units.Length(tc.mm, units.US))
 		})
 		// The column weight follows the length: weight per foot times the length.
-		r := h.rowOf(h.w.ctx.m.Families[0].Name())
+		r := h.rowOf(h.w.results.ctx.m.Families[0].Name())
 		require.GreaterOrEqual(t, r, 0)
 		var perM float64
-		h.ui(func() { perM = h.w.rows[r].Static.MassKgPerM })
+		h.ui(func() { perM = h.w.results.rows[r].Static.MassKgPerM })
 		var L float64
-		h.ui(func() { L = h.w.ctx.length })
+		h.ui(func() { L = h.w.results.ctx.length })
 		assert.InDelta(t, tc.mm, L, 1e-9)
 		assert.Equal(t, num(perM*L/1000/units.KgPerLb, 0), h.cell(r, "column-weight"), "row %d, %g kg/m", r, perM)
 	}
@@ -175,8 +175,8 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 	var rows []string
 	h.ui(func() {
 		gen = h.w.appliedGen
-		for i := range h.w.rows {
-			rows = append(rows, h.w.rows[i].Static.Designation)
+		for i := range h.w.results.rows {
+			rows = append(rows, h.w.results.rows[i].Static.Designation)
 		}
 	})
 	cases := []struct {
@@ -200,13 +200,13 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 			for _, s := range c.says {
 				assert.Contains(t, f.err.Text, s, "%s %q", c.field, c.typed)
 			}
-			b := h.w.BannerText()
+			b := h.w.status.BannerText()
 			assert.Contains(t, b, "Showing the last valid result: fix "+c.label, "%s %q", c.field, c.typed)
 			// The result on screen is the last valid one.
 			assert.Equal(t, gen, h.w.appliedGen, "no new result while invalid")
 			var now []string
-			for i := range h.w.rows {
-				now = append(now, h.w.rows[i].Static.Designation)
+			for i := range h.w.results.rows {
+				now = append(now, h.w.results.rows[i].Static.Designation)
 			}
 			assert.Equal(t, rows, now)
 		})
@@ -216,7 +216,7 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 		h.typeInto(c.field, good)
 		h.ui(func() {
 			assert.False(t, h.w.fields[c.field].err.Visible(), "%s fixed", c.field)
-			assert.Equal(t, "", h.w.BannerText())
+			assert.Equal(t, "", h.w.status.BannerText())
 			gen = h.w.appliedGen
 		})
 	}
@@ -236,7 +236,7 @@ func TestTypingKeepsTheLastValidStateOnScreen(t *testing.T) {
 	}
 	h.ui(func() {
 		assert.InDelta(t, sc.Setting.LengthMM, h.w.snap.Result.Setting.LengthMM, 1e-6)
-		assert.Contains(t, h.w.BannerText(), "Showing the last valid result: fix Unbraced length")
+		assert.Contains(t, h.w.status.BannerText(), "Showing the last valid result: fix Unbraced length")
 	})
 }
 
@@ -246,7 +246,7 @@ func TestSliderStillWorksWhileAFieldIsInvalid(t *testing.T) {
 	h.setSlider(10 * units.MMPerFoot)
 	h.ui(func() {
 		assert.InDelta(t, 10*units.MMPerFoot, h.w.snap.Result.Setting.LengthMM, 1e-6, "the last valid scheme moves with the slider")
-		assert.Contains(t, h.w.BannerText(), "fix Typed K")
+		assert.Contains(t, h.w.status.BannerText(), "fix Typed K")
 	})
 }
 
@@ -268,20 +268,20 @@ func (h *harness) shownTexts() []string {
 			}
 		}
 		for c := range columns {
-			out = append(out, w.headerText(c))
+			out = append(out, w.results.headerText(c))
 		}
 		l := widget.NewLabel("")
-		for r := range w.rows {
+		for r := range w.results.rows {
 			for c := range columns {
 				if columns[c].id == "family" || columns[c].id == "size" || columns[c].id == "governs" {
 					continue // names, not quantities (designations such as 14x14 in say "in")
 				}
-				w.updateCell(widget.TableCellID{Row: r, Col: c}, l)
+				w.results.updateCell(widget.TableCellID{Row: r, Col: c}, l)
 				out = append(out, l.Text)
 			}
 		}
 		out = append(out, w.rangeLabel.Text, w.loadSummary.Text, w.markerText.Text)
-		note := w.tableNote.Text
+		note := w.results.tableNote.Text
 		if i := strings.Index(note, " · best overall"); i >= 0 {
 			note = note[:i] // the rest names a candidate
 		}
@@ -289,8 +289,8 @@ func (h *harness) shownTexts() []string {
 		for _, x := range w.xsp.list {
 			out = append(out, units.Length(x.LengthMM, w.sys()))
 		}
-		for _, s := range w.stepRows {
-			_, u := units.Convert(s.Value, s.Unit, w.ctx.sys)
+		for _, s := range w.calc.stepRows {
+			_, u := units.Convert(s.Value, s.Unit, w.results.ctx.sys)
 			out = append(out, u)
 		}
 	})
@@ -299,11 +299,11 @@ func (h *harness) shownTexts() []string {
 
 func TestUnitSwitchConvertsEveryShownValue(t *testing.T) {
 	h := newHarness(t, DemoScheme())
-	h.ui(func() { h.w.Select(h.w.rows[0].Static.Designation) })
+	h.ui(func() { h.w.Select(h.w.results.rows[0].Static.Designation) })
 	h.settle()
 	var usCap string
 	var capN float64
-	h.ui(func() { capN = h.w.rows[0].CapacityN })
+	h.ui(func() { capN = h.w.results.rows[0].CapacityN })
 	usCap = h.cell(0, "capacity")
 	assert.Equal(t, num(capN/units.NPerKip, 0), usCap)
 	for _, s := range h.shownTexts() {
@@ -337,24 +337,24 @@ func TestUnitSwitchConvertsEveryShownValue(t *testing.T) {
 func TestSortingByAColumn(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	col := columnIndex("weight")
-	h.ui(func() { h.w.SortBy(col) })
+	h.ui(func() { h.w.results.SortBy(col) })
 	h.ui(func() {
-		for i := 1; i < len(h.w.rows); i++ {
-			assert.LessOrEqual(t, h.w.rows[i-1].Static.MassKgPerM, h.w.rows[i].Static.MassKgPerM)
+		for i := 1; i < len(h.w.results.rows); i++ {
+			assert.LessOrEqual(t, h.w.results.rows[i-1].Static.MassKgPerM, h.w.results.rows[i].Static.MassKgPerM)
 		}
-		assert.True(t, strings.HasSuffix(h.w.headerText(col), "▲"))
-		h.w.SortBy(col)
-		for i := 1; i < len(h.w.rows); i++ {
-			assert.GreaterOrEqual(t, h.w.rows[i-1].Static.MassKgPerM, h.w.rows[i].Static.MassKgPerM)
+		assert.True(t, strings.HasSuffix(h.w.results.headerText(col), "▲"))
+		h.w.results.SortBy(col)
+		for i := 1; i < len(h.w.results.rows); i++ {
+			assert.GreaterOrEqual(t, h.w.results.rows[i-1].Static.MassKgPerM, h.w.results.rows[i].Static.MassKgPerM)
 		}
-		assert.True(t, strings.HasSuffix(h.w.headerText(col), "▼"))
+		assert.True(t, strings.HasSuffix(h.w.results.headerText(col), "▼"))
 		// Clicking the header sorts too.
-		hdr := h.w.table.CreateHeader()
-		h.w.table.UpdateHeader(widget.TableCellID{Row: -1, Col: h.w.tableColOf("util")}, hdr)
+		hdr := h.w.results.table.CreateHeader()
+		h.w.results.table.UpdateHeader(widget.TableCellID{Row: -1, Col: h.w.results.tableColOf("util")}, hdr)
 		test.Tap(hdr.(*container.ThemeOverride).Content.(*widget.Button))
-		assert.Equal(t, columnIndex("util"), h.w.sortCol)
-		for i := 1; i < len(h.w.rows); i++ {
-			assert.LessOrEqual(t, h.w.rows[i-1].Util, h.w.rows[i].Util)
+		assert.Equal(t, columnIndex("util"), h.w.results.sortCol)
+		for i := 1; i < len(h.w.results.rows); i++ {
+			assert.LessOrEqual(t, h.w.results.rows[i-1].Util, h.w.results.rows[i].Util)
 		}
 	})
 }
@@ -363,11 +363,11 @@ func TestShowEveryWorkingSize(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	var best int
 	h.ui(func() {
-		best = len(h.w.rows)
-		h.w.showAllChk.SetChecked(true)
-		assert.Greater(t, len(h.w.rows), best)
+		best = len(h.w.results.rows)
+		h.w.results.showAllChk.SetChecked(true)
+		assert.Greater(t, len(h.w.results.rows), best)
 		fams := map[int]bool{}
-		for _, r := range h.w.rows {
+		for _, r := range h.w.results.rows {
 			fams[r.Family] = true
 			if h.w.snap.Result.Families[r.Family].Working > 0 {
 				assert.True(t, r.OK, "%s listed as working", r.Static.Designation)
@@ -382,9 +382,9 @@ func TestFailingRowsReadAsFailingWithoutColour(t *testing.T) {
 	h.setSlider(h.w.st.Range.ToMM)
 	found := false
 	h.ui(func() {
-		for i, r := range h.w.rows {
+		for i, r := range h.w.results.rows {
 			l := widget.NewLabel("")
-			h.w.updateCell(widget.TableCellID{Row: i, Col: columnIndex("status")}, l)
+			h.w.results.updateCell(widget.TableCellID{Row: i, Col: columnIndex("status")}, l)
 			if r.OK {
 				assert.Equal(t, StatusWorks, l.Text)
 				continue
@@ -403,36 +403,36 @@ func TestSelectingARowShowsItsTraceAndPinAddsItsCurve(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	var des string
 	h.ui(func() {
-		des = h.w.rows[1].Static.Designation
-		h.w.table.Select(widget.TableCellID{Row: 1, Col: 2})
+		des = h.w.results.rows[1].Static.Designation
+		h.w.results.table.Select(widget.TableCellID{Row: 1, Col: 2})
 	})
 	h.settle()
 	h.ui(func() {
-		assert.Equal(t, des, h.w.selected)
-		assert.Contains(t, h.w.calcTitle.Text, des)
-		assert.NotEmpty(t, h.w.calcPlain.Text, "the plain sentence")
-		assert.NotEmpty(t, h.w.stepRows, "the trace")
-		assert.True(t, h.w.pinButton.Visible() && !h.w.pinButton.Disabled())
+		assert.Equal(t, des, h.w.picks.selected)
+		assert.Contains(t, h.w.calc.title.Text, des)
+		assert.NotEmpty(t, h.w.calc.plain.Text, "the plain sentence")
+		assert.NotEmpty(t, h.w.calc.stepRows, "the trace")
+		assert.True(t, h.w.calc.pinButton.Visible() && !h.w.calc.pinButton.Disabled())
 	})
 	// The trace's values are converted for US display.
 	h.ui(func() {
-		for _, s := range h.w.stepRows {
+		for _, s := range h.w.calc.stepRows {
 			_, u := units.Convert(s.Value, s.Unit, units.US)
 			assert.NotContains(t, []string{"mm", "MPa", "kN", "N", "mm2", "mm4"}, u, "step %s left in SI", s.Quantity)
 		}
 	})
 	renders := h.w.eng.Renders()
-	h.ui(func() { test.Tap(h.w.pinButton) })
+	h.ui(func() { test.Tap(h.w.calc.pinButton) })
 	h.settle()
 	h.ui(func() {
-		assert.Equal(t, []string{des}, h.w.pinned)
-		assert.Equal(t, "Unpin from chart", h.w.pinButton.Text)
+		assert.Equal(t, []string{des}, h.w.picks.pinned)
+		assert.Equal(t, "Unpin from chart", h.w.calc.pinButton.Text)
 	})
 	assert.Greater(t, h.w.eng.Renders(), renders, "pinning redraws the chart")
 	r := -1
 	h.ui(func() {
-		for i := range h.w.rows {
-			if h.w.rows[i].Static.Designation == des {
+		for i := range h.w.results.rows {
+			if h.w.results.rows[i].Static.Designation == des {
 				r = i
 			}
 		}
@@ -485,16 +485,16 @@ func TestMaterialSwitches(t *testing.T) {
 	h.ui(func() { h.w.matChecks[mats[0]].SetChecked(false) })
 	h.settle()
 	h.ui(func() {
-		for _, r := range h.w.rows {
+		for _, r := range h.w.results.rows {
 			assert.NotEqual(t, mats[0], h.w.snap.Model.Families[r.Family].Material())
 		}
 		for _, m := range mats[1:] {
 			h.w.matChecks[m].SetChecked(false)
 		}
-		assert.Contains(t, h.w.BannerText(), "fix Materials")
+		assert.Contains(t, h.w.status.BannerText(), "fix Materials")
 		assert.True(t, h.w.matProblem.Visible())
 		h.w.matChecks[mats[0]].SetChecked(true)
-		assert.Equal(t, "", h.w.BannerText())
+		assert.Equal(t, "", h.w.status.BannerText())
 	})
 }
 
@@ -693,7 +693,7 @@ func TestTabOrderRunsDownTheInputsThenToTheSlider(t *testing.T) {
 		k := index(h.w.fields["K"].entry)
 		slider := index(h.w.slider)
 		length := index(h.w.fields["length"].entry)
-		table := index(h.w.table)
+		table := index(h.w.results.table)
 		require.True(t, first >= 0 && k >= 0 && slider >= 0 && length >= 0, "all reachable by Tab: %d %d %d %d", first, k, slider, length)
 		assert.Less(t, first, k, "the end conditions come before K")
 		assert.Less(t, k, slider, "the inputs come before the slider")

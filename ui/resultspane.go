@@ -265,4 +265,3 @@ func (p *resultsPane) SortBy(col int) {
 	}
 	p.refreshTable(true)
 }
-

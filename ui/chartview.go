@@ -4,7 +4,9 @@ import (
 	"fmt"
 	"image"
 	"image/color"
+	"log"
 	"math"
+	"time"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/canvas"
@@ -95,58 +97,142 @@ func fromDisplay(v float64, sys units.System) float64 {
 	return v * units.MMPerFoot
 }
 
-// buildChartArea makes the chart with the slider and its entry beneath, and
-// (second) the crossovers panel.
-func (w *Window) buildChartArea() (fyne.CanvasObject, fyne.CanvasObject) {
-	w.chartRaster = canvas.NewRaster(func(pw, ph int) image.Image {
-		if pw != w.wantW || ph != w.wantH {
-			w.wantW, w.wantH = pw, ph
-			w.submit()
-			w.placeMarker()
+// chartPane is the chart of design strength against unbraced length with
+// the current-length marker over it, and under it the length slider with
+// the length field and the range. The engine draws the chart off the UI
+// goroutine; the pane shows each frame and asks for the size it has.
+type chartPane struct {
+	st     *State  // read only: changes go through ed
+	ed     stepper // the one edit path
+	fs     *fieldSet
+	win    fyne.Window  // parent of the range dialog
+	resize func()       // asks for a chart of the new size
+	quiet  int          // >0 while the pane sets the slider itself
+	sys    units.System // the unit the slider was configured in
+
+	raster     *canvas.Raster
+	front      *image.RGBA
+	frame      FrameInfo // where the data area lies in front
+	frames     int       // frames shown
+	markerLine *canvas.Line
+	markerBox  *canvas.Rectangle
+	markerText *canvas.Text
+	wantW      int
+	wantH      int
+	plot       fyne.CanvasObject // the chart with its marker
+	slider     *lengthSlider
+	sliderUnit *widget.Label
+	rangeLabel *widget.Label
+	controls   fyne.CanvasObject // the slider row
+}
+
+// newChartPane builds the chart and its slider reading st and changing it
+// through ed; resize is called when the chart's size changes.
+func newChartPane(st *State, ed stepper, do func(func()), win fyne.Window, resize func()) *chartPane {
+	p := &chartPane{st: st, ed: ed, win: win, resize: resize}
+	var focused func() fyne.Focusable
+	if win != nil {
+		focused = func() fyne.Focusable {
+			if c := win.Canvas(); c != nil {
+				return c.Focused()
+			}
+			return nil
 		}
-		if w.front == nil {
+	}
+	p.fs = newFieldSet(st, ed, do, focused)
+	p.build()
+	return p
+}
+
+// Object returns the chart with its marker.
+func (p *chartPane) Object() fyne.CanvasObject { return p.plot }
+
+// Controls returns the slider row: the slider, the length field and the range.
+func (p *chartPane) Controls() fyne.CanvasObject { return p.controls }
+
+// Show places the marker for a snapshot's length (the engine sends the chart itself).
+func (p *chartPane) Show(*Snapshot) { p.placeMarker() }
+
+// refresh shows the state's length in the field and on the slider after a
+// change made anywhere, and configures the slider again when the units or
+// the range changed (rebuild).
+func (p *chartPane) refresh(rebuild bool) {
+	if rebuild || p.sys != p.st.Sys() {
+		p.configureSlider()
+	}
+	p.fs.refresh()
+	p.fs.showErrors()
+	p.syncSlider()
+}
+
+// size is the chart image size the pane asks the engine for.
+func (p *chartPane) size() (int, int) { return p.wantW, p.wantH }
+
+// build makes the chart with the slider and its entry beneath.
+func (p *chartPane) build() {
+	p.raster = canvas.NewRaster(func(pw, ph int) image.Image {
+		if pw != p.wantW || ph != p.wantH {
+			p.wantW, p.wantH = pw, ph
+			p.resize()
+			p.placeMarker()
+		}
+		if p.front == nil {
 			return blankImage
 		}
-		return w.front
+		return p.front
 	})
-	w.chartRaster.SetMinSize(fyne.NewSize(420, plotMinHeight))
-	w.markerLine = canvas.NewLine(markerInk)
-	w.markerLine.StrokeWidth = 1.6
-	w.markerBox = canvas.NewRectangle(color.NRGBA{R: 255, G: 255, B: 255, A: 0xE6})
-	w.markerText = canvas.NewText("", markerInk)
-	w.markerText.TextStyle = fyne.TextStyle{Bold: true}
-	w.markerText.TextSize = 12
-	overlay := container.NewWithoutLayout(w.markerLine, w.markerBox, w.markerText)
-	w.markerLine.Hide()
-	w.markerBox.Hide()
-	w.markerText.Hide()
-	chartStack := container.NewStack(w.chartRaster, overlay)
+	p.raster.SetMinSize(fyne.NewSize(420, plotMinHeight))
+	p.markerLine = canvas.NewLine(markerInk)
+	p.markerLine.StrokeWidth = 1.6
+	p.markerBox = canvas.NewRectangle(color.NRGBA{R: 255, G: 255, B: 255, A: 0xE6})
+	p.markerText = canvas.NewText("", markerInk)
+	p.markerText.TextStyle = fyne.TextStyle{Bold: true}
+	p.markerText.TextSize = 12
+	overlay := container.NewWithoutLayout(p.markerLine, p.markerBox, p.markerText)
+	p.markerLine.Hide()
+	p.markerBox.Hide()
+	p.markerText.Hide()
+	p.plot = container.NewStack(p.raster, overlay)
 
-	w.slider = newLengthSlider()
-	w.slider.OnChanged = func(v float64) {
-		if w.quiet > 0 {
+	p.slider = newLengthSlider()
+	p.slider.OnChanged = func(v float64) {
+		if p.quiet > 0 {
 			return
 		}
-		w.beginDrag()
-		w.moveTo(fromDisplay(w.slider.snap(v, w.sys(), snapHeld()), w.sys()), true)
+		mm := fromDisplay(p.slider.snap(v, p.st.Sys(), snapHeld()), p.st.Sys())
+		p.ed.Drag(func(st *State) Outcome { return st.SetLength(mm) })
 	}
-	w.slider.OnChangeEnded = func(float64) {
-		if w.quiet > 0 {
+	p.slider.OnChangeEnded = func(float64) {
+		if p.quiet > 0 {
 			return
 		}
-		w.endDrag()
+		p.ed.EndDrag()
 	}
-	length := w.newField("length")
+	length := p.fs.add("length")
 	length.entry.SetPlaceHolder("e.g. 14'-6\" or 4.4 m")
-	w.sliderUnit = widget.NewLabelWithStyle("Unbraced length", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-	w.rangeLabel = widget.NewLabel("")
-	w.rangeLabel.Importance = widget.LowImportance
+	p.sliderUnit = widget.NewLabelWithStyle("Unbraced length", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
+	p.rangeLabel = widget.NewLabel("")
+	p.rangeLabel.Importance = widget.LowImportance
 	entryBox := container.NewGridWrap(fyne.NewSize(150, length.entry.MinSize().Height), length.entry)
-	sliderRow := container.NewBorder(nil, length.err, w.sliderUnit, container.NewHBox(entryBox, w.rangeLabel, w.newRangeButton()), w.slider)
+	sliderRow := container.NewBorder(nil, length.err, p.sliderUnit, container.NewHBox(entryBox, p.rangeLabel, p.newRangeButton()), p.slider)
 
-	w.xsp = newCrossoversPane(w, w.sys, func() model.Range { return w.st.Range })
-	xsPanel := w.xsp.Object()
-	return container.NewBorder(nil, container.NewPadded(sliderRow), nil, nil, w.plotViews(chartStack)), xsPanel
+	p.controls = container.NewPadded(sliderRow)
+}
+
+// takeFrame copies a rendered chart into the pane's image and shows it. UI goroutine.
+func (p *chartPane) takeFrame(img *image.RGBA, info FrameInfo) {
+	b := img.Bounds()
+	if p.front == nil || p.front.Bounds() != b {
+		p.front = image.NewRGBA(b)
+	}
+	copy(p.front.Pix, img.Pix)
+	p.frame = info
+	p.frames++
+	if p.frames == 1 {
+		log.Printf("upright: first chart shown %.0f ms after the process started", float64(time.Since(processStart).Microseconds())/1000)
+	}
+	p.raster.Refresh()
+	p.placeMarker()
 }
 
 // markerInk is the colour of the current-length marker.
@@ -154,26 +240,26 @@ var markerInk = color.NRGBA{R: 0x33, G: 0x33, B: 0x33, A: 0xff}
 
 // placeMarker draws the current-length line over the chart image, at the
 // length on screen, using the data area the engine found in the image.
-func (w *Window) placeMarker() {
+func (p *chartPane) placeMarker() {
 	hide := func() {
-		w.markerLine.Hide()
-		w.markerBox.Hide()
-		w.markerText.Hide()
+		p.markerLine.Hide()
+		p.markerBox.Hide()
+		p.markerText.Hide()
 	}
-	f := w.frame
-	if w.front == nil || f.MarkerDrawn || f.Area.Empty() || !w.st.HaveValid {
+	f := p.frame
+	if p.front == nil || f.MarkerDrawn || f.Area.Empty() || !p.st.HaveValid {
 		hide()
 		return
 	}
-	sz := w.chartRaster.Size()
-	iw := float32(w.front.Bounds().Dx())
+	sz := p.raster.Size()
+	iw := float32(p.front.Bounds().Dx())
 	if sz.Width <= 0 || iw <= 0 {
 		hide()
 		return
 	}
 	k := sz.Width / iw // window units per image pixel
 	sys := units.System(f.Units)
-	L := w.st.Valid.Setting.LengthMM
+	L := p.st.Valid.Setting.LengthMM
 	px := markerPixel(f.Area, f.XMin, f.XMax, toDisplay(L, sys))
 	if px < float64(f.Area.Min.X) || px > float64(f.Area.Max.X) {
 		hide()
@@ -181,24 +267,24 @@ func (w *Window) placeMarker() {
 	}
 	x := float32(px) * k
 	top, bottom := float32(f.Area.Min.Y)*k, float32(f.Area.Max.Y)*k
-	w.markerLine.Position1 = fyne.NewPos(x, top)
-	w.markerLine.Position2 = fyne.NewPos(x, bottom)
-	w.markerText.Text = units.Length(L, sys)
-	ts := w.markerText.MinSize()
+	p.markerLine.Position1 = fyne.NewPos(x, top)
+	p.markerLine.Position2 = fyne.NewPos(x, bottom)
+	p.markerText.Text = units.Length(L, sys)
+	ts := p.markerText.MinSize()
 	tx := x + 5
 	if tx+ts.Width+4 > float32(f.Area.Max.X)*k {
 		tx = x - 5 - ts.Width
 	}
-	w.markerText.Move(fyne.NewPos(tx, top+3))
-	w.markerText.Resize(ts)
-	w.markerBox.Move(fyne.NewPos(tx-2, top+2))
-	w.markerBox.Resize(fyne.NewSize(ts.Width+4, ts.Height+2))
-	w.markerLine.Show()
-	w.markerBox.Show()
-	w.markerText.Show()
-	w.markerLine.Refresh()
-	w.markerBox.Refresh()
-	w.markerText.Refresh()
+	p.markerText.Move(fyne.NewPos(tx, top+3))
+	p.markerText.Resize(ts)
+	p.markerBox.Move(fyne.NewPos(tx-2, top+2))
+	p.markerBox.Resize(fyne.NewSize(ts.Width+4, ts.Height+2))
+	p.markerLine.Show()
+	p.markerBox.Show()
+	p.markerText.Show()
+	p.markerLine.Refresh()
+	p.markerBox.Refresh()
+	p.markerText.Refresh()
 }
 
 // blankImage is shown before the first chart is drawn.
@@ -221,45 +307,38 @@ func kindWords(kind string) string {
 	return kind
 }
 
-// moveTo sets the length (slider drag, crossover chosen, typed elsewhere).
-// It is not itself an undo step: the caller files it (a drag when it ends).
-func (w *Window) moveTo(mm float64, moveSlider bool) Outcome {
-	out := w.st.SetLength(mm)
-	if moveSlider {
-		w.syncSlider()
-	}
-	w.setEntryQuietForce(w.fields["length"], w.st.Text("length"))
-	w.setEntryQuietForce(w.fields["weak-axis length"], w.st.Text("weak-axis length"))
-	w.after(out)
-	return Outcome{}
-}
-
 // configureSlider sets the slider's range and unit from the state.
-func (w *Window) configureSlider() {
-	sys := w.sys()
-	r := w.st.Range
+func (p *chartPane) configureSlider() {
+	sys := p.st.Sys()
+	p.sys = sys
+	r := p.st.Range
 	if r.ToMM <= r.FromMM {
-		r = model.DefaultRange(w.st.Draft.Setting.LengthMM, model.Units(sys))
+		r = model.DefaultRange(p.st.Draft.Setting.LengthMM, model.Units(sys))
 	}
-	w.quiet++
-	w.slider.Min, w.slider.Max = toDisplay(r.FromMM, sys), toDisplay(r.ToMM, sys)
+	p.quiet++
+	p.slider.Min, p.slider.Max = toDisplay(r.FromMM, sys), toDisplay(r.ToMM, sys)
 	if sys == units.SI {
-		w.slider.fine, w.slider.coarse = 0.05, 0.25
+		p.slider.fine, p.slider.coarse = 0.05, 0.25
 	} else {
-		w.slider.fine, w.slider.coarse = 1.0/12, 1
+		p.slider.fine, p.slider.coarse = 1.0/12, 1
 	}
-	w.quiet--
-	w.rangeLabel.SetText(fmt.Sprintf("%s to %s", rangeEnd(r.FromMM, sys), rangeEnd(r.ToMM, sys)))
-	w.syncSlider()
+	p.quiet--
+	p.rangeLabel.SetText(fmt.Sprintf("%s to %s", rangeEnd(r.FromMM, sys), rangeEnd(r.ToMM, sys)))
+	p.syncSlider()
 }
 
 // syncSlider moves the slider to the draft's length without firing it.
-func (w *Window) syncSlider() {
-	v := toDisplay(w.st.Draft.Setting.LengthMM, w.sys())
-	w.quiet++
-	w.slider.Value = min(max(v, w.slider.Min), w.slider.Max)
-	w.slider.Refresh()
-	w.quiet--
+func (p *chartPane) syncSlider() {
+	v := toDisplay(p.st.Draft.Setting.LengthMM, p.st.Sys())
+	p.quiet++
+	v = min(max(v, p.slider.Min), p.slider.Max)
+	if v == p.slider.Value {
+		p.quiet--
+		return
+	}
+	p.slider.Value = v
+	p.slider.Refresh()
+	p.quiet--
 }
 
 // fixedWidth holds an object at a width, stretching it vertically.

@@ -10,17 +10,17 @@ import (
 )
 
 // newRangeButton makes the button that lets the user change the slider's range.
-func (w *Window) newRangeButton() *widget.Button {
-	b := widget.NewButtonWithIcon("", theme.SettingsIcon(), w.showRangeDialog)
+func (p *chartPane) newRangeButton() *widget.Button {
+	b := widget.NewButtonWithIcon("", theme.SettingsIcon(), p.showRangeDialog)
 	b.Importance = widget.LowImportance
 	return b
 }
 
 // SetSliderRange sets the slider and chart range from two typed lengths (a
 // bare number is in the unit shown); a bad range is refused with what is accepted.
-func (w *Window) SetSliderRange(from, to string) error {
+func (p *chartPane) SetSliderRange(from, to string) error {
 	spec := specByID("length")
-	sys := w.sys()
+	sys := p.st.Sys()
 	f, err := spec.parse(from, sys)
 	if err != nil {
 		return fmt.Errorf("range start: %w", err)
@@ -29,22 +29,26 @@ func (w *Window) SetSliderRange(from, to string) error {
 	if err != nil {
 		return fmt.Errorf("range end: %w", err)
 	}
-	out, err := w.st.SetRange(f, t)
-	if err != nil {
-		return err
+	var bad error
+	p.ed.Step("length range", func(st *State) Outcome {
+		out, err := st.SetRange(f, t)
+		bad = err
+		return out
+	})
+	if bad != nil {
+		return bad
 	}
-	w.configureSlider()
-	w.after(out)
+	p.configureSlider()
 	return nil
 }
 
 // showRangeDialog asks for the slider's range, in the unit shown.
-func (w *Window) showRangeDialog() {
+func (p *chartPane) showRangeDialog() {
 	spec := specByID("length")
-	sys := w.sys()
+	sys := p.st.Sys()
 	from, to := widget.NewEntry(), widget.NewEntry()
-	from.SetText(spec.format(w.st.Range.FromMM, sys))
-	to.SetText(spec.format(w.st.Range.ToMM, sys))
+	from.SetText(spec.format(p.st.Range.FromMM, sys))
+	to.SetText(spec.format(p.st.Range.ToMM, sys))
 	items := []*widget.FormItem{
 		widget.NewFormItem("From", from),
 		widget.NewFormItem("To", to),
@@ -53,10 +57,10 @@ func (w *Window) showRangeDialog() {
 		if !ok {
 			return
 		}
-		if err := w.SetSliderRange(from.Text, to.Text); err != nil {
-			dialog.ShowError(err, w.win)
+		if err := p.SetSliderRange(from.Text, to.Text); err != nil {
+			dialog.ShowError(err, p.win)
 		}
-	}, w.win)
+	}, p.win)
 	d.Resize(fyne.NewSize(420, 220))
 	d.Show()
 }

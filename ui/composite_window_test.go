@@ -24,7 +24,7 @@ func TestCompositeSwitchAndOptions(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	h.settle()
 	h.ui(func() {
-		require.NotNil(t, h.w.matChecks["composite"])
+		require.NotNil(t, h.w.inputs.matChecks["composite"])
 		found := false
 		for _, r := range h.w.results.rows {
 			found = found || h.w.snap.Model.Families[r.Family].Material() == "composite"
@@ -45,15 +45,15 @@ func TestCompositeSwitchAndOptions(t *testing.T) {
 	h.settle()
 	h.ui(func() {
 		assert.Contains(t, h.w.st.FieldError("fill f'c"), "3,000 to 10,000 psi")
-		h.w.opts.composite.families.SetSelected([]string{"Filled HSS round"})
+		h.w.inputs.opts.composite.families.SetSelected([]string{"Filled HSS round"})
 	})
 	h.typeInto("fill f'c", "")
 	h.settle()
 	h.ui(func() {
 		assert.Equal(t, []string{"Filled HSS round"}, h.w.st.Valid.Composite.Families)
-		h.w.opts.composite.families.SetSelected(nil)
-		assert.True(t, h.w.opts.composite.problem.Visible())
-		h.w.matChecks["composite"].SetChecked(false)
+		h.w.inputs.opts.composite.families.SetSelected(nil)
+		assert.True(t, h.w.inputs.opts.composite.problem.Visible())
+		h.w.inputs.matChecks["composite"].SetChecked(false)
 		assert.Equal(t, "", h.w.status.BannerText())
 	})
 	h.settle()

@@ -19,17 +19,30 @@ type edits struct {
 	editMenu *fyne.Menu
 }
 
-var _ editor = (*Window)(nil)
+var _ stepper = (*Window)(nil)
 
 // Edit changes the scheme as one undoable step described by what (empty:
 // described from the change itself). It is the editor every pane is given.
 func (w *Window) Edit(what string, change func(sc *model.Scheme)) {
-	if w.quiet > 0 {
-		return
-	}
 	w.step(what, func() Outcome { return w.st.Update(change) })
 	w.syncInputs()
 }
+
+// Step applies one of the state's own operations as one undoable step
+// described by what (empty: described from the change itself).
+func (w *Window) Step(what string, apply func(st *State) Outcome) {
+	w.step(what, func() Outcome { return apply(w.st) })
+}
+
+// Drag applies a change that is part of a slider drag; the whole drag
+// becomes one step when EndDrag is called.
+func (w *Window) Drag(apply func(st *State) Outcome) {
+	w.beginDrag()
+	w.after(apply(w.st))
+}
+
+// EndDrag files a finished slider drag as one step.
+func (w *Window) EndDrag() { w.endDrag() }
 
 // step applies a change of the state as one undoable step and shows it.
 func (w *Window) step(what string, apply func() Outcome) Outcome {
@@ -138,7 +151,7 @@ func (w *Window) dropDemoName(before memo) {
 	if w.st.Valid.Name == demo.Name {
 		w.st.Valid.Name = ""
 	}
-	w.syncName()
+	w.inputs.syncName()
 	w.updateTitle()
 	w.notify("Edited, so the demo's name is removed: name the scheme under Scheme name")
 }

@@ -26,7 +26,7 @@ func TestUndoRedoOfAFieldChange(t *testing.T) {
 		assert.Equal(t, h.w.UndoLabel(), h.w.ed.undoItem.Label, "the Edit menu names the step")
 		h.w.win.Canvas().(interface{ TypedShortcut(fyne.Shortcut) }).TypedShortcut(shortcutUndo)
 		assert.InDelta(t, sc.Setting.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Z undoes it")
-		assert.Equal(t, units.Length(sc.Setting.LengthMM, units.US), h.w.fields["length"].entry.Text)
+		assert.Equal(t, units.Length(sc.Setting.LengthMM, units.US), h.w.field("length").entry.Text)
 		assert.Equal(t, `Redo: Unbraced length 20'-0.0"`, h.w.RedoLabel())
 		h.w.win.Canvas().(interface{ TypedShortcut(fyne.Shortcut) }).TypedShortcut(shortcutRedoY)
 		assert.InDelta(t, 20*units.MMPerFoot, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Y redoes it")
@@ -44,20 +44,20 @@ func TestTypingFiftyMetresNeverEvaluatesFive(t *testing.T) {
 	var seen []float64
 	h.ui(func() { h.w.onApplied = func(s *Snapshot) { seen = append(seen, s.Result.Setting.LengthMM) } })
 	for _, k := range "50m" {
-		h.ui(func() { test.Type(h.w.fields["length"].entry, string(k)) })
+		h.ui(func() { test.Type(h.w.field("length").entry, string(k)) })
 		h.settle()
 	}
 	h.ui(func() {
-		h.w.fields["length"].entry.SetText("")
-		test.Type(h.w.fields["length"].entry, "50m")
-		h.w.fields["length"].entry.commit()
+		h.w.field("length").entry.SetText("")
+		test.Type(h.w.field("length").entry, "50m")
+		h.w.field("length").entry.commit()
 	})
 	h.settle()
 	h.ui(func() {
 		for _, mm := range seen {
 			assert.False(t, mm > 4999 && mm < 5001, "5 m was evaluated while 50m was typed")
 		}
-		assert.Contains(t, h.w.fields["length"].err.Text, "is not accepted", "50 m is beyond the accepted range")
+		assert.Contains(t, h.w.field("length").err.Text, "is not accepted", "50 m is beyond the accepted range")
 	})
 	// A length that is accepted is applied once committed, never its prefix.
 	seen = nil
@@ -78,7 +78,7 @@ func TestBareNumberTakesTheShownUnit(t *testing.T) {
 	h.typeInto("length", "6")
 	h.ui(func() {
 		assert.InDelta(t, 6000, h.w.st.Valid.Setting.LengthMM, 1e-6, "6 in an SI length field is 6 m")
-		assert.True(t, strings.HasSuffix(h.w.fields["length"].entry.Text, " m"), h.w.fields["length"].entry.Text)
+		assert.True(t, strings.HasSuffix(h.w.field("length").entry.Text, " m"), h.w.field("length").entry.Text)
 	})
 }
 
@@ -89,12 +89,12 @@ func TestUndoOfASliderDrag(t *testing.T) {
 	h.layOut()
 	var dragged float64
 	h.ui(func() {
-		w := h.w.slider.Size().Width
+		w := h.w.chart.slider.Size().Width
 		require.Greater(t, w, float32(100), "the slider is laid out")
 		for _, f := range []float32{0.3, 0.4, 0.5, 0.6} {
-			h.w.slider.Dragged(&fyne.DragEvent{PointEvent: fyne.PointEvent{Position: fyne.NewPos(f*w, 5)}})
+			h.w.chart.slider.Dragged(&fyne.DragEvent{PointEvent: fyne.PointEvent{Position: fyne.NewPos(f*w, 5)}})
 		}
-		h.w.slider.DragEnd()
+		h.w.chart.slider.DragEnd()
 		dragged = h.w.st.Valid.Setting.LengthMM
 		assert.NotEqual(t, sc.Setting.LengthMM, dragged, "the drag moved the length")
 		inches := dragged / units.MMPerInch

@@ -124,7 +124,7 @@ func TestSaveThenOpenGivesBackTheScheme(t *testing.T) {
 	h.settle()
 	h.ui(func() {
 		assert.True(t, reflect.DeepEqual(saved, h.w.st.Valid), "saved %+v\nopened %+v", saved, h.w.st.Valid)
-		assert.Equal(t, `21'-4.0"`, h.w.fields["length"].entry.Text)
+		assert.Equal(t, `21'-4.0"`, h.w.field("length").entry.Text)
 		assert.InDelta(t, 21*units.MMPerFoot+4*units.MMPerInch, h.w.snap.Result.Setting.LengthMM, 1e-9)
 		assert.False(t, h.w.Dirty())
 		assert.Equal(t, "Opened gallery"+schemefile.Extension, h.w.status.Notice())

@@ -102,8 +102,8 @@ func newHarnessAt(t testing.TB, sc model.Scheme, size fyne.Size) *harness {
 	h.ui(func() {
 		h.w = newWindow(a, sc, do, do)
 		h.w.win.Resize(size)
-		if h.w.wantW == 0 {
-			h.w.wantW, h.w.wantH = 900, 420
+		if h.w.chart.wantW == 0 {
+			h.w.chart.wantW, h.w.chart.wantH = 900, 420
 		}
 		h.w.submit()
 	})
@@ -147,7 +147,7 @@ func (h *harness) settle() {
 // typeInto replaces a field's text by typing, as a user would.
 func (h *harness) typeInto(id, text string) {
 	h.ui(func() {
-		e := h.w.fields[id].entry
+		e := h.w.field(id).entry
 		e.SetText("")
 		test.Type(e, text)
 		e.commit()
@@ -191,6 +191,15 @@ func (h *harness) sizeOf(family string) string {
 
 // setSlider moves the length slider to mm, as a drag or arrow key does.
 func (h *harness) setSlider(mm float64) {
-	h.ui(func() { h.w.slider.SetValue(toDisplay(mm, h.w.sys())) })
+	h.ui(func() { h.w.chart.slider.SetValue(toDisplay(mm, h.w.sys())) })
 	h.settle()
+}
+
+// field returns the text field with the state's field id, from whichever
+// pane holds it.
+func (w *Window) field(id string) *field {
+	if f := w.inputs.fs.byID[id]; f != nil {
+		return f
+	}
+	return w.chart.fs.byID[id]
 }

@@ -1,7 +1,6 @@
 package ui
 
 import (
-	"errors"
 	"fmt"
 	"image/color"
 	"strings"
@@ -101,123 +100,128 @@ func small(s string) *widget.Label {
 // labelWidth is the width of the label column of the inputs panel.
 const labelWidth = 132
 
-// newField makes the text input of a field spec: its label to the left,
-// the entry to the right, and its problem (when there is one) below.
-func (w *Window) newField(id string) *field {
-	spec := specByID(id)
-	f := &field{spec: spec}
-	f.entry = newCommitEntry(w.do, func(text string) { w.commitField(id, text) })
-	// No Validator: the state holds each field's problem and
-	// showFieldErrors marks the entry (red border and icon) with it.
-	f.entry.AlwaysShowValidationError = true
-	if spec.hint != "" {
-		f.entry.SetPlaceHolder(spec.hint)
-	}
-	f.err = widget.NewLabel("")
-	f.err.Wrapping = fyne.TextWrapWord
-	f.err.Importance = widget.DangerImportance
-	f.err.SizeName = theme.SizeNameCaptionText
-	f.err.Hide()
-	f.entry.OnChanged = func(string) {
-		if w.quiet > 0 {
-			return
-		}
-		f.entry.typed()
-	}
-	lbl := widget.NewLabel(spec.label)
-	lbl.Wrapping = fyne.TextWrapWord
-	f.box = container.NewVBox(container.NewBorder(nil, nil, fixedWidth(labelWidth, lbl), nil, container.NewVBox(layout.NewSpacer(), f.entry, layout.NewSpacer())), f.err)
-	if w.fields == nil {
-		w.fields = map[string]*field{}
-	}
-	w.fields[id] = f
-	return f
+// inputsPane is the inputs: the scheme's name, the column's ends and
+// bracing, the load, the design choices, the fire rating and the materials
+// with their options. It reads the state and changes it only through its
+// stepper, one undoable step per change.
+type inputsPane struct {
+	st    *State  // read only: changes go through ed
+	ed    stepper // the one edit path
+	do    func(func())
+	prefs fyne.Preferences // where the folded sections are kept
+	fs    *fieldSet        // the text fields
+	quiet int              // >0 while the pane sets its widgets itself
+
+	sketches   map[model.EndCondition]*widgets.EndSketch
+	weakCheck  *widget.Check
+	twistCheck *widget.Check  // the weak-axis braces also restrain twisting (steel Lcz)
+	nameEntry  *commitEntry   // the scheme's name
+	tieSelect  *widget.Select // the near-tie tolerance
+	load       loadWidgets
+	method     *widget.RadioGroup
+	metric     *widget.Select
+	unitsRadio *widget.RadioGroup
+	matChecks  map[string]*widget.Check
+	matProblem *widget.Label
+	opts       materialWidgets
+	fire       fireWidgets
+	inSections []*inputSection // the foldable sections
+	box        *fyne.Container
 }
 
-// commitField applies a field's committed text as one undoable step and
-// shows the field as the state now reads it (a bare number with its unit).
-func (w *Window) commitField(id, text string) {
-	w.step("", func() Outcome { return w.st.Commit(id, text) })
-	if id == "length" {
-		w.syncSlider()
-	}
-	w.setEntryQuietForce(w.fields[id], w.st.Text(id))
-	if id == "length" || id == "weak-axis length" {
-		w.setEntryQuiet(w.fields["weak-axis length"], w.st.Text("weak-axis length"))
-		w.setEntryQuiet(w.fields["length"], w.st.Text("length"))
-	}
+// loadWidgets are the inputs of the load: typed, or taken down from the
+// tributary area and the floor loads.
+type loadWidgets struct {
+	mode        *widget.RadioGroup
+	directBox   *fyne.Container
+	takedownBox *fyne.Container
+	directHint  *widget.Label
+	liveRed     *widget.Check
+	kll         *widget.Select
+	occupancy   *widget.Select
+	selfWeight  *widget.Check
+	summary     *widget.Label // the demand the load gives, from the snapshot shown
 }
 
-// setEntryQuiet sets an entry's text without treating it as typing; it
-// leaves an entry with the focus alone so typing is not disturbed.
-func (w *Window) setEntryQuiet(f *field, text string) {
-	if f == nil || f.entry.Text == text {
-		return
-	}
-	if c := w.win.Canvas(); c != nil && c.Focused() == f.entry {
-		return
-	}
-	w.quiet++
-	f.entry.SetText(text)
-	w.quiet--
+// newInputsPane builds the inputs reading st and changing it through ed;
+// focused reports the widget with the keyboard focus; prefs keeps the
+// folded sections.
+func newInputsPane(st *State, ed stepper, do func(func()), focused func() fyne.Focusable, prefs fyne.Preferences) *inputsPane {
+	p := &inputsPane{st: st, ed: ed, do: do, prefs: prefs}
+	p.fs = newFieldSet(st, ed, do, focused)
+	p.box = p.buildInputs().(*fyne.Container)
+	p.foldSections(p.box)
+	wrapLongChecks(p.box, inputsWidth-40)
+	return p
+}
+
+// Object returns the inputs, foldable by section (the window scrolls them).
+func (p *inputsPane) Object() fyne.CanvasObject { return p.box }
+
+// Show says what demand the snapshot's load gives.
+func (p *inputsPane) Show(s *Snapshot) { p.updateLoadSummary(s) }
+
+// refresh shows the state's texts and problems after a change made anywhere.
+func (p *inputsPane) refresh() {
+	p.fs.refresh()
+	p.showFieldErrors()
 }
 
 // showFieldErrors puts each field's problem under it.
-func (w *Window) showFieldErrors() {
-	for id, f := range w.fields {
-		msg := w.st.FieldError(id)
-		if msg == "" {
-			f.err.Hide()
-			f.entry.SetValidationError(nil)
-			continue
-		}
-		f.err.SetText(msg)
-		f.err.Show()
-		f.entry.SetValidationError(errors.New(msg))
-	}
-	if msg := w.st.FieldError("materials"); msg != "" {
-		w.matProblem.SetText(msg)
-		w.matProblem.Show()
+func (p *inputsPane) showFieldErrors() {
+	p.fs.showErrors()
+	if msg := p.st.FieldError("materials"); msg != "" {
+		p.matProblem.SetText(msg)
+		p.matProblem.Show()
 	} else {
-		w.matProblem.Hide()
+		p.matProblem.Hide()
 	}
-	w.opts.showProblems(w)
+	p.opts.showProblems(p)
 }
 
-// change applies a choice made by a widget unless the window is setting it.
-func (w *Window) change(fn func(sc *model.Scheme)) {
-	if w.quiet > 0 {
+// newField makes one of the pane's text fields.
+func (p *inputsPane) newField(id string) *field { return p.fs.add(id) }
+
+// change applies a choice made by a widget unless the pane is setting it.
+func (p *inputsPane) change(fn func(sc *model.Scheme)) {
+	if p.quiet > 0 {
 		return
 	}
-	w.step("", func() Outcome { return w.st.Update(fn) })
+	p.ed.Step("", func(st *State) Outcome { return st.Update(fn) })
+}
+
+// stepState applies one of the state's own operations as a step unless the
+// pane is setting its widgets.
+func (p *inputsPane) stepState(apply func(st *State) Outcome) {
+	if p.quiet > 0 {
+		return
+	}
+	p.ed.Step("", apply)
 }
 
 // buildInputs makes the inputs panel: column, load, design, materials.
-func (w *Window) buildInputs() fyne.CanvasObject {
+func (p *inputsPane) buildInputs() fyne.CanvasObject {
 	// Column: ends, K, weak axis. The length itself sits under the chart.
-	w.sketches = map[model.EndCondition]*widgets.EndSketch{}
+	p.sketches = map[model.EndCondition]*widgets.EndSketch{}
 	var tiles []fyne.CanvasObject
 	for _, sp := range endSketchSpecs {
 		sp := sp
 		s := widgets.NewEndSketch(sp.bottom, sp.top, sp.title, sp.note, func() {
-			w.change(func(sc *model.Scheme) { sc.Setting.Ends = sp.ends })
-			w.syncSketches()
+			p.change(func(sc *model.Scheme) { sc.Setting.Ends = sp.ends })
+			p.syncSketches()
 		})
-		w.sketches[sp.ends] = s
+		p.sketches[sp.ends] = s
 		tiles = append(tiles, s)
 	}
 	sketchGrid := container.NewGridWithColumns(3, tiles...)
-	kField := w.newField("K")
-	w.weakCheck = widget.NewCheck("Weak axis braced at a shorter length", func(on bool) {
-		if w.quiet > 0 {
-			return
-		}
-		w.step("", func() Outcome { return w.st.SetWeakBraced(on) })
-		w.syncWeak()
+	kField := p.newField("K")
+	p.weakCheck = widget.NewCheck("Weak axis braced at a shorter length", func(on bool) {
+		p.stepState(func(st *State) Outcome { return st.SetWeakBraced(on) })
+		p.syncWeak()
 	})
-	weak := w.newField("weak-axis length")
-	w.twistCheck = widget.NewCheck("Braces also restrain twisting (steel Lcz = weak-axis length)", func(on bool) {
-		w.change(func(sc *model.Scheme) { sc.Setting.TwistBraced = on })
+	weak := p.newField("weak-axis length")
+	p.twistCheck = widget.NewCheck("Braces also restrain twisting (steel Lcz = weak-axis length)", func(on bool) {
+		p.change(func(sc *model.Scheme) { sc.Setting.TwistBraced = on })
 	})
 	column := container.NewVBox(
 		heading("Column"),
@@ -225,111 +229,101 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		sketchGrid,
 		small("K under each sketch is the ideal value; each material applies its own recommended design K. A typed K overrides both."),
 		kField.box,
-		w.weakCheck,
+		p.weakCheck,
 		weak.box,
-		w.twistCheck,
+		p.twistCheck,
 		small("A weak-axis brace keeps its fraction of the height as the length changes. Unless the braces also restrain twisting, steel twists over the full height."),
 	)
 
 	// Load.
-	w.loadMode = widget.NewRadioGroup([]string{"Typed axial load", "Load takedown"}, func(s string) {
-		w.change(func(sc *model.Scheme) {
+	p.load.mode = widget.NewRadioGroup([]string{"Typed axial load", "Load takedown"}, func(s string) {
+		p.change(func(sc *model.Scheme) {
 			if s == "Load takedown" {
 				sc.Load.Mode = model.LoadTakedown
 			} else {
 				sc.Load.Mode = model.LoadDirect
 			}
 		})
-		w.syncLoadMode()
+		p.syncLoadMode()
 	})
-	w.loadMode.Horizontal = true
-	w.loadMode.Required = true
-	load := w.newField("load")
-	share := w.newField("dead-share")
-	w.directHint = small("")
-	w.directBox = container.NewVBox(load.box, share.box, w.directHint)
+	p.load.mode.Horizontal = true
+	p.load.mode.Required = true
+	load := p.newField("load")
+	share := p.newField("dead-share")
+	p.load.directHint = small("")
+	p.load.directBox = container.NewVBox(load.box, share.box, p.load.directHint)
 	var td []fyne.CanvasObject
 	for _, id := range []string{"tributary", "floors", "dead", "live", "roof-dead", "roof-live", "snow"} {
-		td = append(td, w.newField(id).box)
+		td = append(td, p.newField(id).box)
 	}
-	w.liveRed = widget.NewCheck("Reduce floor live load (ASCE 7-22 4.7)", func(on bool) {
-		w.change(func(sc *model.Scheme) { sc.Load.LiveReduction = on })
+	p.load.liveRed = widget.NewCheck("Reduce floor live load (ASCE 7-22 4.7)", func(on bool) {
+		p.change(func(sc *model.Scheme) { sc.Load.LiveReduction = on })
 	})
-	w.kll = widget.NewSelect(labels(kllChoices), func(s string) {
-		w.change(func(sc *model.Scheme) {
+	p.load.kll = widget.NewSelect(labels(kllChoices), func(s string) {
+		p.change(func(sc *model.Scheme) {
 			var v float64
 			fmt.Sscanf(valueOf(kllChoices, s), "%g", &v)
 			sc.Load.KLL = v
 		})
 	})
-	w.occupancy = widget.NewSelect(labels(occChoices), func(s string) {
-		w.change(func(sc *model.Scheme) { sc.Load.Occupancy = valueOf(occChoices, s) })
+	p.load.occupancy = widget.NewSelect(labels(occChoices), func(s string) {
+		p.change(func(sc *model.Scheme) { sc.Load.Occupancy = valueOf(occChoices, s) })
 	})
-	td = append(td, w.liveRed, row("KLL", w.kll), row("Occupancy", w.occupancy))
-	w.takedownBox = container.NewVBox(td...)
-	w.selfWeight = widget.NewCheck("Add the column's own weight", func(on bool) {
-		w.change(func(sc *model.Scheme) { sc.SelfWeight = on })
+	td = append(td, p.load.liveRed, row("KLL", p.load.kll), row("Occupancy", p.load.occupancy))
+	p.load.takedownBox = container.NewVBox(td...)
+	p.load.selfWeight = widget.NewCheck("Add the column's own weight", func(on bool) {
+		p.change(func(sc *model.Scheme) { sc.SelfWeight = on })
 	})
-	w.loadSummary = widget.NewLabel("")
-	w.loadSummary.Wrapping = fyne.TextWrapWord
-	loadBox := container.NewVBox(heading("Load"), w.loadMode, w.directBox, w.takedownBox, w.selfWeight, w.loadSummary)
+	p.load.summary = widget.NewLabel("")
+	p.load.summary.Wrapping = fyne.TextWrapWord
+	loadBox := container.NewVBox(heading("Load"), p.load.mode, p.load.directBox, p.load.takedownBox, p.load.selfWeight, p.load.summary)
 
 	// Design.
-	w.method = widget.NewRadioGroup([]string{"LRFD", "ASD"}, func(s string) {
-		w.change(func(sc *model.Scheme) { sc.Setting.Method = model.Method(strings.ToLower(s)) })
-		w.syncLoadMode()
+	p.method = widget.NewRadioGroup([]string{"LRFD", "ASD"}, func(s string) {
+		p.change(func(sc *model.Scheme) { sc.Setting.Method = model.Method(strings.ToLower(s)) })
+		p.syncLoadMode()
 	})
-	w.method.Horizontal = true
-	w.method.Required = true
-	w.metric = widget.NewSelect(labels(metricChoices), func(s string) {
-		w.change(func(sc *model.Scheme) { sc.Metric = model.Metric(valueOf(metricChoices, s)) })
+	p.method.Horizontal = true
+	p.method.Required = true
+	p.metric = widget.NewSelect(labels(metricChoices), func(s string) {
+		p.change(func(sc *model.Scheme) { sc.Metric = model.Metric(valueOf(metricChoices, s)) })
 	})
-	w.unitsRadio = widget.NewRadioGroup([]string{"US", "SI"}, func(s string) {
-		if w.quiet > 0 {
-			return
-		}
-		w.step("", func() Outcome {
-			return w.st.Update(func(sc *model.Scheme) {
-				if s == "SI" {
-					sc.Units = model.SI
-				} else {
-					sc.Units = model.US
-				}
-			})
+	p.unitsRadio = widget.NewRadioGroup([]string{"US", "SI"}, func(s string) {
+		p.change(func(sc *model.Scheme) {
+			if s == "SI" {
+				sc.Units = model.SI
+			} else {
+				sc.Units = model.US
+			}
 		})
-		w.syncTexts()
-		w.configureSlider()
 	})
-	w.unitsRadio.Horizontal = true
-	w.unitsRadio.Required = true
+	p.unitsRadio.Horizontal = true
+	p.unitsRadio.Required = true
 	design := container.NewVBox(heading("Design"),
-		row("Method", w.method),
-		row("Rank by", w.metric),
-		w.buildTieSelect(),
-		row("Units", w.unitsRadio),
+		row("Method", p.method),
+		row("Rank by", p.metric),
+		p.buildTieSelect(),
+		row("Units", p.unitsRadio),
 	)
 
 	// Materials.
-	w.matChecks = map[string]*widget.Check{}
-	w.matProblem = widget.NewLabel("")
-	w.matProblem.Importance = widget.DangerImportance
-	w.matProblem.Wrapping = fyne.TextWrapWord
-	w.matProblem.Hide()
-	mats := container.NewVBox(heading("Materials"), w.matProblem)
+	p.matChecks = map[string]*widget.Check{}
+	p.matProblem = widget.NewLabel("")
+	p.matProblem.Importance = widget.DangerImportance
+	p.matProblem.Wrapping = fyne.TextWrapWord
+	p.matProblem.Hide()
+	mats := container.NewVBox(heading("Materials"), p.matProblem)
 	acc := widget.NewAccordion()
 	acc.MultiOpen = true
 	for _, m := range model.Materials() {
 		m := m
 		c := widget.NewCheck(materialTitle(m)+" columns", func(on bool) {
-			if w.quiet > 0 {
-				return
-			}
-			w.step("", func() Outcome { return w.st.SetMaterial(m, on) })
-			w.opts.enable(w)
+			p.stepState(func(st *State) Outcome { return st.SetMaterial(m, on) })
+			p.opts.enable(p)
 		})
-		w.matChecks[m] = c
+		p.matChecks[m] = c
 		mats.Add(c)
-		if panel := w.opts.panel(w, m); panel != nil {
+		if panel := p.opts.panel(p, m); panel != nil {
 			acc.Append(widget.NewAccordionItem(materialTitle(m)+" options", panel))
 		}
 	}
@@ -337,7 +331,7 @@ func (w *Window) buildInputs() fyne.CanvasObject {
 		mats.Add(small("No materials are registered in this build."))
 	}
 	mats.Add(acc)
-	return container.NewVBox(w.buildNameField(), column, loadBox, design, w.buildFireInputs(), mats, layout.NewSpacer())
+	return container.NewVBox(p.buildNameField(), column, loadBox, design, p.buildFireInputs(), mats, layout.NewSpacer())
 }
 
 // materialTitle capitalises a material name.
@@ -348,109 +342,97 @@ func materialTitle(m string) string {
 	return strings.ToUpper(m[:1]) + m[1:]
 }
 
-// syncInputs sets every input widget from the state.
-func (w *Window) syncInputs() {
-	w.quiet++
-	defer func() { w.quiet-- }()
-	d := &w.st.Draft
-	w.syncName()
-	w.syncTie()
-	w.syncTexts()
-	w.syncSketches()
-	w.weakCheck.SetChecked(w.st.WeakBraced)
-	w.twistCheck.SetChecked(d.Setting.TwistBraced)
+// sync sets every input widget from the state.
+func (p *inputsPane) sync() {
+	p.quiet++
+	defer func() { p.quiet-- }()
+	d := &p.st.Draft
+	p.syncName()
+	p.syncTie()
+	p.syncTexts()
+	p.syncSketches()
+	p.weakCheck.SetChecked(p.st.WeakBraced)
+	p.twistCheck.SetChecked(d.Setting.TwistBraced)
 	if d.Load.Mode == model.LoadTakedown {
-		w.loadMode.SetSelected("Load takedown")
+		p.load.mode.SetSelected("Load takedown")
 	} else {
-		w.loadMode.SetSelected("Typed axial load")
+		p.load.mode.SetSelected("Typed axial load")
 	}
-	w.liveRed.SetChecked(d.Load.LiveReduction)
+	p.load.liveRed.SetChecked(d.Load.LiveReduction)
 	kll := d.Load.KLL
 	if kll == 0 {
 		kll = model.DefaultKLL
 	}
-	w.kll.SetSelected(labelOf(kllChoices, fmt.Sprintf("%g", kll)))
+	p.load.kll.SetSelected(labelOf(kllChoices, fmt.Sprintf("%g", kll)))
 	occ := d.Load.Occupancy
 	if occ == "" {
 		occ = model.OccGeneral
 	}
-	w.occupancy.SetSelected(labelOf(occChoices, occ))
-	w.selfWeight.SetChecked(d.SelfWeight)
-	w.method.SetSelected(strings.ToUpper(string(d.Setting.Method)))
-	w.metric.SetSelected(labelOf(metricChoices, string(d.Metric)))
+	p.load.occupancy.SetSelected(labelOf(occChoices, occ))
+	p.load.selfWeight.SetChecked(d.SelfWeight)
+	p.method.SetSelected(strings.ToUpper(string(d.Setting.Method)))
+	p.metric.SetSelected(labelOf(metricChoices, string(d.Metric)))
 	if d.Units == model.SI {
-		w.unitsRadio.SetSelected("SI")
+		p.unitsRadio.SetSelected("SI")
 	} else {
-		w.unitsRadio.SetSelected("US")
+		p.unitsRadio.SetSelected("US")
 	}
-	for m, c := range w.matChecks {
-		c.SetChecked(w.st.MaterialOn(m))
+	for m, c := range p.matChecks {
+		c.SetChecked(p.st.MaterialOn(m))
 	}
-	w.opts.sync(w)
-	w.syncFire()
-	w.syncWeak()
-	w.syncLoadMode()
-	w.configureSlider()
-	w.showFieldErrors()
+	p.opts.sync(p)
+	p.syncFire()
+	p.syncWeak()
+	p.syncLoadMode()
+	p.showFieldErrors()
 }
 
 // syncTexts rewrites every entry from the state's text.
-func (w *Window) syncTexts() {
-	for id, f := range w.fields {
-		w.setEntryQuietForce(f, w.st.Text(id))
+func (p *inputsPane) syncTexts() {
+	for id, f := range p.fs.byID {
+		p.fs.setForce(f, p.st.Text(id))
 	}
 }
 
-// setEntryQuietForce sets an entry's text without treating it as typing, even with the focus.
-func (w *Window) setEntryQuietForce(f *field, text string) {
-	if f.entry.Text == text {
-		return
-	}
-	w.quiet++
-	f.entry.SetText(text)
-	w.quiet--
-}
-
-func (w *Window) syncSketches() {
-	for e, s := range w.sketches {
-		s.SetSelected(e == w.st.Draft.Setting.Ends)
+func (p *inputsPane) syncSketches() {
+	for e, s := range p.sketches {
+		s.SetSelected(e == p.st.Draft.Setting.Ends)
 	}
 }
 
-func (w *Window) syncWeak() {
-	if w.st.WeakBraced {
-		w.fields["weak-axis length"].entry.Enable()
-		w.twistCheck.Enable()
+func (p *inputsPane) syncWeak() {
+	if p.st.WeakBraced {
+		p.fs.byID["weak-axis length"].entry.Enable()
+		p.twistCheck.Enable()
 	} else {
-		w.fields["weak-axis length"].entry.Disable()
-		w.twistCheck.Disable()
+		p.fs.byID["weak-axis length"].entry.Disable()
+		p.twistCheck.Disable()
 	}
 }
 
-func (w *Window) syncLoadMode() {
-	if w.st.Draft.Load.Mode == model.LoadTakedown {
-		w.directBox.Hide()
-		w.takedownBox.Show()
+func (p *inputsPane) syncLoadMode() {
+	if p.st.Draft.Load.Mode == model.LoadTakedown {
+		p.load.directBox.Hide()
+		p.load.takedownBox.Show()
 	} else {
-		w.takedownBox.Hide()
-		w.directBox.Show()
+		p.load.takedownBox.Hide()
+		p.load.directBox.Show()
 	}
-	if w.st.Draft.Setting.Method == model.ASD {
-		w.directHint.SetText("ASD: give the service load (unfactored); a bare number is taken in the unit shown. The dead share splits it into D and L, and every combination follows.")
+	if p.st.Draft.Setting.Method == model.ASD {
+		p.load.directHint.SetText("ASD: give the service load (unfactored); a bare number is taken in the unit shown. The dead share splits it into D and L, and every combination follows.")
 	} else {
-		w.directHint.SetText("LRFD: give the governing factored load; a bare number is taken in the unit shown. The dead share splits it into D and L, and every combination follows.")
+		p.load.directHint.SetText("LRFD: give the governing factored load; a bare number is taken in the unit shown. The dead share splits it into D and L, and every combination follows.")
 	}
-	w.showFieldErrors()
-	w.updateBanner()
+	p.showFieldErrors()
 }
 
 // updateLoadSummary says what demand the load gives and where it comes from.
-func (w *Window) updateLoadSummary() {
-	if w.snap == nil || w.snap.Model == nil {
-		w.loadSummary.SetText("")
+func (p *inputsPane) updateLoadSummary(s *Snapshot) {
+	if s == nil || s.Model == nil {
+		p.load.summary.SetText("")
 		return
 	}
-	m := w.snap.Model
+	m := s.Model
 	sys := unitsOf(m)
 	ls := &m.Loads
 	var b strings.Builder
@@ -478,5 +460,5 @@ func (w *Window) updateLoadSummary() {
 	} else {
 		b.WriteString(".")
 	}
-	w.loadSummary.SetText(b.String())
+	p.load.summary.SetText(b.String())
 }

@@ -29,9 +29,9 @@ type compositeWidgets struct {
 }
 
 // panel returns the composite options: the filled families and the fill's f'c.
-func (o *compositeWidgets) panel(w *Window) fyne.CanvasObject {
+func (o *compositeWidgets) panel(p *inputsPane) fyne.CanvasObject {
 	o.families = widget.NewCheckGroup(compositeFamilies, func(sel []string) {
-		w.change(func(sc *model.Scheme) {
+		p.change(func(sc *model.Scheme) {
 			if len(sel) == len(compositeFamilies) {
 				sc.Composite.Families = nil
 				return
@@ -48,7 +48,7 @@ func (o *compositeWidgets) panel(w *Window) fyne.CanvasObject {
 	o.problem = problemLabel()
 	return container.NewVBox(
 		widget.NewLabel("Filled tube families"), o.families, o.problem,
-		w.newField("fill f'c").box,
+		p.newField("fill f'c").box,
 		small("Concrete-filled HSS by AISC 360-22 I2.2. The wall takes the steel Fy (each HSS grade unless typed); the fill is 3,000 to 10,000 psi."),
 	)
 }
@@ -66,11 +66,11 @@ func (o *compositeWidgets) sync(d *model.Scheme) {
 }
 
 // showProblem shows the state's problem with the family choice, if any.
-func (o *compositeWidgets) showProblem(w *Window) {
+func (o *compositeWidgets) showProblem(p *inputsPane) {
 	if o.problem == nil {
 		return
 	}
-	if msg := w.st.FieldError("composite families"); msg != "" {
+	if msg := p.st.FieldError("composite families"); msg != "" {
 		o.problem.SetText(msg)
 		o.problem.Show()
 	} else {

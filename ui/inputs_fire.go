@@ -26,35 +26,35 @@ type fireWidgets struct {
 
 // buildFireInputs makes the fire-resistance group: the rating every
 // material answers to and the concrete aggregate it depends on.
-func (w *Window) buildFireInputs() fyne.CanvasObject {
-	w.fire.rating = widget.NewSelect(labels(fireRatingChoices), func(s string) {
-		w.change(func(sc *model.Scheme) { sc.Fire.Rating = valueOf(fireRatingChoices, s) })
+func (p *inputsPane) buildFireInputs() fyne.CanvasObject {
+	p.fire.rating = widget.NewSelect(labels(fireRatingChoices), func(s string) {
+		p.change(func(sc *model.Scheme) { sc.Fire.Rating = valueOf(fireRatingChoices, s) })
 	})
-	w.fire.aggregate = widget.NewSelect(labels(aggregateChoices), func(s string) {
-		w.change(func(sc *model.Scheme) { sc.Fire.Aggregate = valueOf(aggregateChoices, s) })
+	p.fire.aggregate = widget.NewSelect(labels(aggregateChoices), func(s string) {
+		p.change(func(sc *model.Scheme) { sc.Fire.Aggregate = valueOf(aggregateChoices, s) })
 	})
-	w.fire.protection = widget.NewSelect(labels(protectionChoices), func(s string) {
-		w.change(func(sc *model.Scheme) { sc.Fire.SteelProtection = valueOf(protectionChoices, s) })
+	p.fire.protection = widget.NewSelect(labels(protectionChoices), func(s string) {
+		p.change(func(sc *model.Scheme) { sc.Fire.SteelProtection = valueOf(protectionChoices, s) })
 	})
 	note := small("Steel boxed in Type X gypsum board or sprayed, concrete least size and cover, timber char. Calculated methods for comparison; listed assemblies and the local code govern.")
 	note.Wrapping = fyne.TextWrapWord
 	return container.NewVBox(heading("Fire resistance"),
-		row("Rating", w.fire.rating),
-		row("Concrete aggregate", w.fire.aggregate),
-		row("Steel protection", w.fire.protection),
+		row("Rating", p.fire.rating),
+		row("Concrete aggregate", p.fire.aggregate),
+		row("Steel protection", p.fire.protection),
 		note,
 	)
 }
 
 // syncFire sets the fire inputs from the draft.
-func (w *Window) syncFire() {
-	if w.fire.rating == nil {
+func (p *inputsPane) syncFire() {
+	if p.fire.rating == nil {
 		return
 	}
-	d := &w.st.Draft
-	w.fire.rating.SetSelected(labelOf(fireRatingChoices, d.Fire.Rating))
-	w.fire.aggregate.SetSelected(labelOf(aggregateChoices, d.Fire.Aggregate))
-	w.fire.protection.SetSelected(labelOf(protectionChoices, d.Fire.SteelProtection))
+	d := &p.st.Draft
+	p.fire.rating.SetSelected(labelOf(fireRatingChoices, d.Fire.Rating))
+	p.fire.aggregate.SetSelected(labelOf(aggregateChoices, d.Fire.Aggregate))
+	p.fire.protection.SetSelected(labelOf(protectionChoices, d.Fire.SteelProtection))
 }
 
 // fireNote is the line under the table note on the fire rating: empty without one.

@@ -19,17 +19,17 @@ func TestFireSelectorProtectsThePlan(t *testing.T) {
 	h := newHarness(t, sc)
 	var bare *model.Static
 	h.ui(func() {
-		require.NotNil(t, h.w.fire.rating)
-		assert.Equal(t, "None", h.w.fire.rating.Selected)
-		assert.Equal(t, "Siliceous", h.w.fire.aggregate.Selected)
+		require.NotNil(t, h.w.inputs.fire.rating)
+		assert.Equal(t, "None", h.w.inputs.fire.rating.Selected)
+		assert.Equal(t, "Siliceous", h.w.inputs.fire.aggregate.Selected)
 		bare = h.w.results.rows[0].Static
 	})
 	barePlan := plan(bare.FootprintMM)
 	assert.Equal(t, barePlan, h.cell(0, "plan"))
 
-	h.ui(func() { h.w.fire.rating.SetSelected("2 hours") })
+	h.ui(func() { h.w.inputs.fire.rating.SetSelected("2 hours") })
 	h.settle()
-	h.ui(func() { h.w.fire.aggregate.SetSelected("Carbonate") })
+	h.ui(func() { h.w.inputs.fire.aggregate.SetSelected("Carbonate") })
 	h.settle()
 	var st *model.Static
 	h.ui(func() {
@@ -46,7 +46,7 @@ func TestFireSelectorProtectsThePlan(t *testing.T) {
 	h.ui(func() {
 		h.w.st.Draft.Fire.Rating = "1.5h"
 		h.w.syncInputs()
-		assert.Equal(t, "1½ hours", h.w.fire.rating.Selected)
+		assert.Equal(t, "1½ hours", h.w.inputs.fire.rating.Selected)
 	})
 }
 

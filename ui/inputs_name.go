@@ -13,27 +13,27 @@ import (
 
 // buildNameField makes the scheme's name editable: it names the window, the
 // suggested file name, the report and exported charts.
-func (w *Window) buildNameField() fyne.CanvasObject {
-	w.nameEntry = newCommitEntry(w.do, func(s string) {
+func (p *inputsPane) buildNameField() fyne.CanvasObject {
+	p.nameEntry = newCommitEntry(p.do, func(s string) {
 		name := cleanName(s)
-		w.change(func(sc *model.Scheme) { sc.Name = name })
-		w.syncName()
+		p.change(func(sc *model.Scheme) { sc.Name = name })
+		p.syncName()
 	})
-	w.nameEntry.SetPlaceHolder("Untitled scheme")
-	w.nameEntry.OnChanged = func(string) {
-		if w.quiet == 0 {
-			w.nameEntry.typed()
+	p.nameEntry.SetPlaceHolder("Untitled scheme")
+	p.nameEntry.OnChanged = func(string) {
+		if p.quiet == 0 {
+			p.nameEntry.typed()
 		}
 	}
-	return container.NewVBox(row("Scheme name", w.nameEntry))
+	return container.NewVBox(row("Scheme name", p.nameEntry))
 }
 
 // syncName shows the scheme's name in its entry, without firing a change.
-func (w *Window) syncName() {
-	if w.nameEntry != nil && w.nameEntry.Text != w.st.Draft.Name {
-		w.quiet++
-		w.nameEntry.SetText(w.st.Draft.Name)
-		w.quiet--
+func (p *inputsPane) syncName() {
+	if p.nameEntry != nil && p.nameEntry.Text != p.st.Draft.Name {
+		p.quiet++
+		p.nameEntry.SetText(p.st.Draft.Name)
+		p.quiet--
 	}
 }
 

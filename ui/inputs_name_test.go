@@ -18,11 +18,11 @@ func TestSchemeNameIsEditable(t *testing.T) {
 	h, dir := fileHarness(t)
 	var gen uint64
 	h.ui(func() {
-		assert.Equal(t, DemoScheme().Name, h.w.nameEntry.Text, "the entry shows the scheme's name")
+		assert.Equal(t, DemoScheme().Name, h.w.inputs.nameEntry.Text, "the entry shows the scheme's name")
 		gen = h.w.st.SchemeGen
-		h.w.nameEntry.SetText("")
-		test.Type(h.w.nameEntry, "Quarry Lane depot, bay column")
-		h.w.nameEntry.commit()
+		h.w.inputs.nameEntry.SetText("")
+		test.Type(h.w.inputs.nameEntry, "Quarry Lane depot, bay column")
+		h.w.inputs.nameEntry.commit()
 	})
 	h.settle()
 	path := filepath.Join(dir, "depot.upright.json")
@@ -37,12 +37,12 @@ func TestSchemeNameIsEditable(t *testing.T) {
 	assert.Equal(t, "Quarry Lane depot, bay column", sc.Name)
 
 	// A pasted line break does not reach the file, and loading a scheme shows its name.
-	h.ui(func() { h.w.nameEntry.SetText("two\nlines"); h.w.nameEntry.commit() })
+	h.ui(func() { h.w.inputs.nameEntry.SetText("two\nlines"); h.w.inputs.nameEntry.commit() })
 	h.settle()
 	h.ui(func() {
 		assert.Equal(t, "two lines", h.w.st.Valid.Name)
 		h.w.LoadScheme(DemoScheme())
-		assert.Equal(t, DemoScheme().Name, h.w.nameEntry.Text)
+		assert.Equal(t, DemoScheme().Name, h.w.inputs.nameEntry.Text)
 	})
 	h.settle()
 }

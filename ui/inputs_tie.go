@@ -23,19 +23,19 @@ func tieLabel(tie float64) string {
 
 // buildTieSelect makes the near-tie tolerance setting: the best family
 // changes only when another beats it by more than this share of the metric.
-func (w *Window) buildTieSelect() fyne.CanvasObject {
+func (p *inputsPane) buildTieSelect() fyne.CanvasObject {
 	var opts []string
-	for _, p := range tieChoices {
-		opts = append(opts, tieLabel(p/100))
+	for _, pc := range tieChoices {
+		opts = append(opts, tieLabel(pc/100))
 	}
-	w.tieSelect = widget.NewSelect(opts, func(s string) {
+	p.tieSelect = widget.NewSelect(opts, func(s string) {
 		v, ok := parseTieLabel(s)
 		if !ok {
 			return
 		}
-		w.change(func(sc *model.Scheme) { sc.Tie = v })
+		p.change(func(sc *model.Scheme) { sc.Tie = v })
 	})
-	return row("Near-tie tolerance", w.tieSelect)
+	return row("Near-tie tolerance", p.tieSelect)
 }
 
 // parseTieLabel reads a choice back into a fraction.
@@ -49,19 +49,19 @@ func parseTieLabel(s string) (float64, bool) {
 
 // syncTie shows the scheme's tolerance, adding it to the choices when a file
 // brought another value.
-func (w *Window) syncTie() {
-	if w.tieSelect == nil {
+func (p *inputsPane) syncTie() {
+	if p.tieSelect == nil {
 		return
 	}
-	l := tieLabel(w.st.Draft.Tie)
+	l := tieLabel(p.st.Draft.Tie)
 	found := false
-	for _, o := range w.tieSelect.Options {
+	for _, o := range p.tieSelect.Options {
 		found = found || o == l
 	}
 	if !found {
-		w.tieSelect.Options = append(w.tieSelect.Options, l)
+		p.tieSelect.Options = append(p.tieSelect.Options, l)
 	}
-	w.quiet++
-	w.tieSelect.SetSelected(l)
-	w.quiet--
+	p.quiet++
+	p.tieSelect.SetSelected(l)
+	p.quiet--
 }

@@ -12,15 +12,15 @@ import (
 func TestNearTieToleranceSetting(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	h.ui(func() {
-		assert.Equal(t, "5%", h.w.tieSelect.Selected, "the demo uses the default")
-		h.w.tieSelect.SetSelected("20%") // glulam 29.7 lb/ft, round tube 35.1 lb/ft at 18 ft: within 20%
+		assert.Equal(t, "5%", h.w.inputs.tieSelect.Selected, "the demo uses the default")
+		h.w.inputs.tieSelect.SetSelected("20%") // glulam 29.7 lb/ft, round tube 35.1 lb/ft at 18 ft: within 20%
 	})
 	h.settle()
 	h.ui(func() {
 		assert.Equal(t, 0.20, h.w.st.Valid.Tie)
 		note := h.w.results.tableNote.Text
 		assert.True(t, strings.Contains(note, "within 20%: "), note)
-		h.w.tieSelect.SetSelected("none")
+		h.w.inputs.tieSelect.SetSelected("none")
 	})
 	h.settle()
 	h.ui(func() {
@@ -32,5 +32,5 @@ func TestNearTieToleranceSetting(t *testing.T) {
 	sc.Tie = 0.07
 	h.ui(func() { h.w.LoadScheme(sc) })
 	h.settle()
-	h.ui(func() { assert.Equal(t, "7%", h.w.tieSelect.Selected) })
+	h.ui(func() { assert.Equal(t, "7%", h.w.inputs.tieSelect.Selected) })
 }

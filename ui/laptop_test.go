@@ -286,26 +286,26 @@ func TestInputSectionsFoldAndComeBack(t *testing.T) {
 	h.ui(func() {
 		w := h.w
 		var titles []string
-		for _, s := range w.inSections {
+		for _, s := range w.inputs.inSections {
 			titles = append(titles, s.title)
 		}
 		assert.Equal(t, []string{"Column", "Load", "Design", "Fire resistance", "Materials"}, titles, "every inputs section folds")
-		directHidden := !w.directBox.Visible()
-		w.FoldSection("Load", true)
-		assert.True(t, w.SectionFolded("Load"))
-		assert.False(t, isShown(w.fields["tributary"].entry, w.inSections[1].body), "the rows are hidden with their section")
-		w.FoldSection("Load", false)
-		assert.False(t, w.SectionFolded("Load"))
-		assert.Equal(t, directHidden, !w.directBox.Visible(), "opening a section leaves the rows its choices hide hidden")
-		w.FoldSection("Design", true)
+		directHidden := !w.inputs.load.directBox.Visible()
+		w.inputs.FoldSection("Load", true)
+		assert.True(t, w.inputs.SectionFolded("Load"))
+		assert.False(t, isShown(w.field("tributary").entry, w.inputs.inSections[1].body), "the rows are hidden with their section")
+		w.inputs.FoldSection("Load", false)
+		assert.False(t, w.inputs.SectionFolded("Load"))
+		assert.Equal(t, directHidden, !w.inputs.load.directBox.Visible(), "opening a section leaves the rows its choices hide hidden")
+		w.inputs.FoldSection("Design", true)
 		assert.True(t, w.app.Preferences().Bool(prefSectionShut+"Design"), "remembered")
 	})
 	// A window opened on the same preferences comes back with Design folded.
 	h.ui(func() {
 		w2 := newWindow(h.w.app, DemoScheme(), func(f func()) { f() }, func(f func()) { f() })
 		defer func() { w2.closing.Store(true); w2.eng.Close() }()
-		assert.True(t, w2.SectionFolded("Design"))
-		assert.False(t, w2.SectionFolded("Load"))
+		assert.True(t, w2.inputs.SectionFolded("Design"))
+		assert.False(t, w2.inputs.SectionFolded("Load"))
 	})
 }
 

@@ -56,8 +56,6 @@ func (w *Window) buildPanes(inputs, chartArea, results, xsPanel, calc, banner fy
 	fold := widget.NewButtonWithIcon("", theme.NavigateBackIcon(), func() { w.FoldInputs(true) })
 	fold.Importance = widget.LowImportance
 	title := widget.NewLabelWithStyle("Inputs", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
-	w.foldSections(inputs)
-	wrapLongChecks(inputs, inputsWidth-40)
 	scroll := container.NewVScroll(inputs)
 	p.inputs = container.NewBorder(container.NewBorder(nil, nil, title, fold), nil, nil, nil, scroll)
 	unfold := widget.NewButtonWithIcon("", theme.NavigateNextIcon(), func() { w.FoldInputs(false) })

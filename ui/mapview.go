@@ -28,6 +28,7 @@ import (
 // map being computed. Clicking a cell moves the scheme there.
 type mapView struct {
 	w        *Window
+	quiet    int // >0 while the view sets its own check box
 	raster   *canvas.Raster
 	surface  *mapSurface
 	status   *widget.Label
@@ -112,7 +113,7 @@ const mapViewEnv = "UPRIGHT_VIEW"
 
 // withMapView adds the Map view as a tab beside the chart (and the
 // Sections view, when the window has it) and starts the map's worker.
-func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
+func (w *Window) withMapView(tabs *container.AppTabs) fyne.CanvasObject {
 	mv := &mapView{w: w, wake: make(chan struct{}, 1), quit: make(chan struct{}), done: make(chan struct{})}
 	w.mapv = mv
 	mv.raster = canvas.NewRaster(func(pw, ph int) image.Image {
@@ -132,7 +133,7 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 	mv.progress = widget.NewProgressBar()
 	mv.progress.Hide()
 	mv.inReport = widget.NewCheck("Map in the client report", func(on bool) {
-		if w.quiet > 0 || on == w.st.Draft.ReportMap {
+		if mv.quiet > 0 || on == w.st.Draft.ReportMap {
 			return
 		}
 		w.step("map in the report", func() Outcome { return w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }) })
@@ -142,41 +143,23 @@ func (w *Window) withMapView(chartArea fyne.CanvasObject) fyne.CanvasObject {
 	view := container.NewBorder(nil, foot, nil, nil, mv.surface)
 	item := container.NewTabItem("Map", view)
 	show := os.Getenv(mapViewEnv) == "map"
-	out := chartArea
-	if tabs := w.sectionsTabs; tabs != nil {
-		// One row of tabs above the slider: Chart, Sections, Map.
-		prev := tabs.OnSelected
-		tabs.Append(item)
-		tabs.OnSelected = func(t *container.TabItem) {
-			if prev != nil {
-				prev(t)
-			}
-			mv.visible = t == item
-			w.roomForMap(mv.visible)
-			mv.submit()
+	prev := tabs.OnSelected
+	tabs.Append(item)
+	tabs.OnSelected = func(t *container.TabItem) {
+		if prev != nil {
+			prev(t)
 		}
-		if show {
-			tabs.Select(item)
-		}
-	} else {
-		tabs := container.NewAppTabs(container.NewTabItem("Chart", chartArea), item)
-		tabs.OnSelected = func(t *container.TabItem) {
-			mv.visible = t == item
-			mv.submit()
-		}
-		if show {
-			tabs.Select(item)
-		}
-		out = tabs
+		mv.visible = t == item
+		w.roomForMap(mv.visible)
+		mv.submit()
 	}
-	if w.sectionsTabs != nil {
-		w.addViews(w.sectionsTabs)
-	} else if tabs, ok := out.(*container.AppTabs); ok {
-		w.addViews(tabs)
+	if show {
+		tabs.Select(item)
 	}
+	w.addViews(tabs)
 	mv.visible = show
 	go mv.loop()
-	return out
+	return tabs
 }
 
 // close stops the worker, cancelling any map being computed.
@@ -229,9 +212,9 @@ func (mv *mapView) submit() {
 	}
 	w := mv.w
 	if w.st.HaveValid && mv.inReport.Checked != w.st.Valid.ReportMap {
-		w.quiet++
+		mv.quiet++
 		mv.inReport.SetChecked(w.st.Valid.ReportMap)
-		w.quiet--
+		mv.quiet--
 	}
 	if !mv.visible || !w.st.HaveValid || mv.wantW < 1 || mv.wantH < 1 {
 		return
@@ -443,12 +426,10 @@ func (w *Window) moveMapPoint(lengthMM, load float64, axis model.MapAxis) {
 		return
 	}
 	before := memoOf(w.st)
-	out := w.st.SetText(id, f.format(load, w.sys()))
-	if fl := w.fields[id]; fl != nil {
-		w.setEntryQuietForce(fl, w.st.Text(id))
-	}
+	typed := w.st.SetText(id, f.format(load, w.sys()))
+	out := w.st.SetLength(lengthMM)
+	out.Rebuild = out.Rebuild || typed.Rebuild
 	w.after(out)
-	w.moveTo(lengthMM, true)
 	what := "map point: " + f.label + " " + w.st.Text(id) + ", length " + w.st.Text("length")
 	w.record(what, before)
 	w.notify("Map click set " + strings.TrimPrefix(what, "map point: ") + " (Ctrl+Z undoes it)")

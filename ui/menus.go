@@ -75,7 +75,7 @@ func (w *Window) addShortcuts() {
 	c.AddShortcut(shortcutSave, func(fyne.Shortcut) { w.Save() })
 	c.AddShortcut(shortcutSaveAs, func(fyne.Shortcut) { w.SaveAs() })
 	c.AddShortcut(shortcutExport, func(fyne.Shortcut) { w.Export() })
-	c.AddShortcut(shortcutLength, func(fyne.Shortcut) { c.Focus(w.slider) })
+	c.AddShortcut(shortcutLength, func(fyne.Shortcut) { c.Focus(w.chart.slider) })
 	c.AddShortcut(shortcutUndo, func(fyne.Shortcut) { w.Undo() })
 	c.AddShortcut(shortcutRedo, func(fyne.Shortcut) { w.Redo() })
 	c.AddShortcut(shortcutRedoY, func(fyne.Shortcut) { w.Redo() })

@@ -71,11 +71,11 @@ func problemLabel() *widget.Label {
 func labelled(name string, o fyne.CanvasObject) fyne.CanvasObject { return row(name, o) }
 
 // panel returns the options of one material, or nil for a material without options here.
-func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
+func (o *materialWidgets) panel(p *inputsPane, material string) fyne.CanvasObject {
 	switch material {
 	case "steel":
 		o.steelFam = widget.NewCheckGroup(steelFamilies, func(sel []string) {
-			w.change(func(sc *model.Scheme) {
+			p.change(func(sc *model.Scheme) {
 				if len(sel) == len(steelFamilies) {
 					sc.Steel.Families = nil
 					return
@@ -91,36 +91,36 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		})
 		o.steelProblem = problemLabel()
 		o.nonswayK1 = widget.NewCheck("k = 1.0 at nonsway ends (ACI 318-19 6.6.4.4.3) in place of the ends' recommended K", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Concrete.NonswayK1 = on })
+			p.change(func(sc *model.Scheme) { sc.Concrete.NonswayK1 = on })
 		})
-		return container.NewVBox(w.newField("steel Fy").box, widget.NewLabel("Shape families"), o.steelFam, o.steelProblem)
+		return container.NewVBox(p.newField("steel Fy").box, widget.NewLabel("Shape families"), o.steelFam, o.steelProblem)
 	case "concrete":
 		o.barGrade = widget.NewSelect(labels(barGradeChoices), func(s string) {
-			w.change(func(sc *model.Scheme) {
+			p.change(func(sc *model.Scheme) {
 				fmt.Sscanf(valueOf(barGradeChoices, s), "%d", &sc.Concrete.BarGrade)
 			})
 		})
 		o.transverse = widget.NewSelect(labels(transverseChoices), func(s string) {
-			w.change(func(sc *model.Scheme) { sc.Concrete.Transverse = valueOf(transverseChoices, s) })
+			p.change(func(sc *model.Scheme) { sc.Concrete.Transverse = valueOf(transverseChoices, s) })
 		})
 		o.eiMethod = widget.NewSelect(labels(eiChoices), func(s string) {
-			w.change(func(sc *model.Scheme) { sc.Concrete.EIMethod = valueOf(eiChoices, s) })
+			p.change(func(sc *model.Scheme) { sc.Concrete.EIMethod = valueOf(eiChoices, s) })
 		})
 		o.betaFromLoads = widget.NewCheck("βdns of each load combination (factored dead over total); untick to type one that may only raise it", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Concrete.BetaFromLoads = on })
+			p.change(func(sc *model.Scheme) { sc.Concrete.BetaFromLoads = on })
 		})
 		o.cap14 = widget.NewCheck("δ above 1.4 never works (ACI 318-19 6.2.5.3); untick to see the uncapped strength as a note", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Concrete.SecondOrderCap = on })
+			p.change(func(sc *model.Scheme) { sc.Concrete.SecondOrderCap = on })
 		})
 		return container.NewVBox(
-			w.newField("f'c").box,
+			p.newField("f'c").box,
 			labelled("Reinforcing bars", o.barGrade),
-			w.newField("rho-max").box,
+			p.newField("rho-max").box,
 			labelled("Transverse reinforcement", o.transverse),
-			w.newField("m1m2").box,
+			p.newField("m1m2").box,
 			small("−1 is single curvature (the severe case); 1 is double curvature."),
 			o.betaFromLoads,
-			w.newField("beta-dns").box,
+			p.newField("beta-dns").box,
 			small("A typed βdns applies when the box above is off, and only where it is higher than a combination's own."),
 			labelled("(EI)eff, ACI 318-19 6.6.4.4.4", o.eiMethod),
 			o.cap14,
@@ -128,20 +128,20 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 		)
 	case "timber":
 		o.species = widget.NewSelect(labels(speciesChoices), func(s string) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Species = valueOf(speciesChoices, s) })
+			p.change(func(sc *model.Scheme) { sc.Timber.Species = valueOf(speciesChoices, s) })
 		})
 		o.grade = widget.NewSelect(labels(gradeChoices), func(s string) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Grade = valueOf(gradeChoices, s) })
+			p.change(func(sc *model.Scheme) { sc.Timber.Grade = valueOf(gradeChoices, s) })
 		})
 		o.sawn = widget.NewCheck("Sawn lumber and timbers", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Sawn = on })
+			p.change(func(sc *model.Scheme) { sc.Timber.Sawn = on })
 		})
 		o.glulam = widget.NewCheck("Glulam", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Glulam = on })
+			p.change(func(sc *model.Scheme) { sc.Timber.Glulam = on })
 		})
 		all := timber.GlulamCombinations(0)
 		o.combos = widget.NewCheckGroup(all, func(sel []string) {
-			w.change(func(sc *model.Scheme) {
+			p.change(func(sc *model.Scheme) {
 				if len(sel) == len(all) {
 					sc.Timber.GlulamCombos = nil
 					return
@@ -156,19 +156,19 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			})
 		})
 		o.wet = widget.NewCheck("Wet service (CM)", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Wet = on })
+			p.change(func(sc *model.Scheme) { sc.Timber.Wet = on })
 		})
 		o.incised = widget.NewCheck("Incised sawn lumber (Ci)", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Incised = on })
+			p.change(func(sc *model.Scheme) { sc.Timber.Incised = on })
 		})
 		o.hot = widget.NewCheck("Sustained 100–125 °F (Ct)", func(on bool) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Hot = on })
+			p.change(func(sc *model.Scheme) { sc.Timber.Hot = on })
 		})
 		o.fireSides = widget.NewSelect(labels(sidesChoices), func(s string) {
-			w.change(func(sc *model.Scheme) { fmt.Sscanf(valueOf(sidesChoices, s), "%d", &sc.Timber.FireSides) })
+			p.change(func(sc *model.Scheme) { fmt.Sscanf(valueOf(sidesChoices, s), "%d", &sc.Timber.FireSides) })
 		})
 		o.duration = widget.NewSelect(labels(durationChoices), func(s string) {
-			w.change(func(sc *model.Scheme) { sc.Timber.Duration = valueOf(durationChoices, s) })
+			p.change(func(sc *model.Scheme) { sc.Timber.Duration = valueOf(durationChoices, s) })
 		})
 		o.timberProblem = problemLabel()
 		return container.NewVBox(
@@ -181,14 +181,14 @@ func (o *materialWidgets) panel(w *Window, material string) fyne.CanvasObject {
 			labelled("ASD load duration", o.duration),
 		)
 	case "composite":
-		return o.composite.panel(w)
+		return o.composite.panel(p)
 	}
 	return nil
 }
 
 // sync sets the option widgets from the draft.
-func (o *materialWidgets) sync(w *Window) {
-	d := &w.st.Draft
+func (o *materialWidgets) sync(p *inputsPane) {
+	d := &p.st.Draft
 	if o.steelFam != nil {
 		if len(d.Steel.Families) == 0 && d.Steel.Families == nil {
 			o.steelFam.SetSelected(append([]string(nil), steelFamilies...))
@@ -226,23 +226,23 @@ func (o *materialWidgets) sync(w *Window) {
 }
 
 // enable is called when a material is switched on or off.
-func (o *materialWidgets) enable(w *Window) {}
+func (o *materialWidgets) enable(p *inputsPane) {}
 
 // showProblems shows the option problems the state found.
-func (o *materialWidgets) showProblems(w *Window) {
-	for _, p := range []struct {
+func (o *materialWidgets) showProblems(p *inputsPane) {
+	for _, pr := range []struct {
 		l  *widget.Label
 		id string
 	}{{o.steelProblem, "steel families"}, {o.timberProblem, "timber products"}} {
-		if p.l == nil {
+		if pr.l == nil {
 			continue
 		}
-		if msg := w.st.FieldError(p.id); msg != "" {
-			p.l.SetText(msg)
-			p.l.Show()
+		if msg := p.st.FieldError(pr.id); msg != "" {
+			pr.l.SetText(msg)
+			pr.l.Show()
 		} else {
-			p.l.Hide()
+			pr.l.Hide()
 		}
 	}
-	o.composite.showProblem(w)
+	o.composite.showProblem(p)
 }

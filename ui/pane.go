@@ -20,3 +20,14 @@ type pane interface {
 type editor interface {
 	Edit(what string, change func(sc *model.Scheme))
 }
+
+// stepper is the edit path of the panes that work on the state's own
+// operations (a typed field, a material switched, a slider dragged): each
+// Step is one undoable step; the changes of a drag become one step when it
+// ends. apply runs on the state and reports what to do next.
+type stepper interface {
+	editor
+	Step(what string, apply func(st *State) Outcome)
+	Drag(apply func(st *State) Outcome)
+	EndDrag()
+}

@@ -21,7 +21,7 @@ func BenchmarkSliderStepFire(b *testing.B) {
 	for i := 0; i < b.N; i++ {
 		var gen uint64
 		h.ui(func() {
-			h.w.slider.SetValue(toDisplay(sweep(r, i), sys))
+			h.w.chart.slider.SetValue(toDisplay(sweep(r, i), sys))
 			gen = h.w.reqGen
 		})
 		if !h.w.eng.WaitEvaluated(gen, 10*time.Second) {

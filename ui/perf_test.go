@@ -53,7 +53,7 @@ func BenchmarkSliderStep(b *testing.B) {
 	for i := 0; i < b.N; i++ {
 		var gen uint64
 		h.ui(func() {
-			h.w.slider.SetValue(toDisplay(sweep(r, i), sys))
+			h.w.chart.slider.SetValue(toDisplay(sweep(r, i), sys))
 			gen = h.w.reqGen
 		})
 		if !h.w.eng.WaitEvaluated(gen, 10*time.Second) {
@@ -80,7 +80,7 @@ func BenchmarkSliderStepWithChart(b *testing.B) {
 	r0 := h.w.eng.Renders()
 	b.ResetTimer()
 	for i := 0; i < b.N; i++ {
-		h.ui(func() { h.w.slider.SetValue(toDisplay(sweep(r, i), sys)) })
+		h.ui(func() { h.w.chart.slider.SetValue(toDisplay(sweep(r, i), sys)) })
 		h.settle()
 	}
 	b.StopTimer()
@@ -132,7 +132,7 @@ func TestLongDragKeepsMemoryFlat(t *testing.T) {
 	r0 := h.w.eng.Renders()
 	start := time.Now()
 	for i := 0; i < steps; i++ {
-		h.ui(func() { h.w.slider.SetValue(toDisplay(sweep(r, i*3), sys)) })
+		h.ui(func() { h.w.chart.slider.SetValue(toDisplay(sweep(r, i*3), sys)) })
 		h.settle()
 		if i == steps/4 || i == steps/2 || i == steps-1 {
 			heaps = append(heaps, heap())

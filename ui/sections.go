@@ -23,7 +23,7 @@ type inputSection struct {
 // its title, and the rows after the heading move into a body the button
 // hides and shows. Rows added to a section before this runs fold with it, so
 // a new input row needs nothing here.
-func (w *Window) foldSections(inputs fyne.CanvasObject) {
+func (p *inputsPane) foldSections(inputs fyne.CanvasObject) {
 	box, ok := inputs.(*fyne.Container)
 	if !ok {
 		return
@@ -38,14 +38,14 @@ func (w *Window) foldSections(inputs fyne.CanvasObject) {
 			continue
 		}
 		s := &inputSection{title: title, body: container.NewVBox(sec.Objects[1:]...)}
-		s.button = widget.NewButtonWithIcon("", theme.MenuDropUpIcon(), func() { w.FoldSection(s.title, s.body.Visible()) })
+		s.button = widget.NewButtonWithIcon("", theme.MenuDropUpIcon(), func() { p.FoldSection(s.title, s.body.Visible()) })
 		s.button.Importance = widget.LowImportance
 		head := sec.Objects[0].(*fyne.Container)
 		head.Objects[1] = container.NewBorder(nil, nil, nil, s.button, head.Objects[1])
 		sec.Objects = []fyne.CanvasObject{head, s.body}
-		w.inSections = append(w.inSections, s)
-		if w.app.Preferences().Bool(prefSectionShut + title) {
-			w.FoldSection(title, true)
+		p.inSections = append(p.inSections, s)
+		if p.prefs.Bool(prefSectionShut + title) {
+			p.FoldSection(title, true)
 		}
 	}
 }
@@ -68,8 +68,8 @@ func headingTitle(o fyne.CanvasObject) (string, bool) {
 
 // FoldSection folds (on) or opens the inputs section of that title, and
 // remembers it in the preferences.
-func (w *Window) FoldSection(title string, on bool) {
-	for _, s := range w.inSections {
+func (p *inputsPane) FoldSection(title string, on bool) {
+	for _, s := range p.inSections {
 		if s.title != title {
 			continue
 		}
@@ -80,13 +80,13 @@ func (w *Window) FoldSection(title string, on bool) {
 			s.body.Show()
 			s.button.SetIcon(theme.MenuDropUpIcon())
 		}
-		w.app.Preferences().SetBool(prefSectionShut+title, on)
+		p.prefs.SetBool(prefSectionShut+title, on)
 	}
 }
 
 // SectionFolded reports whether the inputs section of that title is folded.
-func (w *Window) SectionFolded(title string) bool {
-	for _, s := range w.inSections {
+func (p *inputsPane) SectionFolded(title string) bool {
+	for _, s := range p.inSections {
 		if s.title == title {
 			return !s.body.Visible()
 		}

@@ -77,7 +77,7 @@ func newSectionsView(w *Window) *sectionsView {
 }
 
 // plotViews puts the chart and the Sections view in tabs above the slider.
-func (w *Window) plotViews(chartView fyne.CanvasObject) fyne.CanvasObject {
+func (w *Window) plotViews(chartView fyne.CanvasObject) *container.AppTabs {
 	w.sections = newSectionsView(w)
 	w.fed = append(w.fed, w.sections)
 	tabs := container.NewAppTabs(
@@ -87,7 +87,7 @@ func (w *Window) plotViews(chartView fyne.CanvasObject) fyne.CanvasObject {
 	tabs.OnSelected = func(t *container.TabItem) {
 		w.sections.setVisible(t.Content == w.sections.area)
 	}
-	w.sectionsTabs = tabs
+	w.viewTabs = tabs
 	// UPRIGHT_VIEW=sections opens on the Sections tab (screenshots, demonstrations).
 	if os.Getenv("UPRIGHT_VIEW") == "sections" {
 		tabs.SelectIndex(1)
@@ -98,10 +98,10 @@ func (w *Window) plotViews(chartView fyne.CanvasObject) fyne.CanvasObject {
 
 // ShowSections opens the Sections tab (true) or the chart (false).
 func (w *Window) ShowSections(on bool) {
-	if w.sectionsTabs == nil {
+	if w.viewTabs == nil {
 		return
 	}
-	w.sectionsTabs.SelectIndex(map[bool]int{false: 0, true: 1}[on])
+	w.viewTabs.SelectIndex(map[bool]int{false: 0, true: 1}[on])
 }
 
 // setVisible starts or stops following the snapshots.

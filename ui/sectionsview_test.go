@@ -136,7 +136,7 @@ func BenchmarkSliderStepWithSections(b *testing.B) {
 	for i := 0; i < b.N; i++ {
 		var gen uint64
 		h.ui(func() {
-			h.w.slider.SetValue(toDisplay(sweep(r, i), sys))
+			h.w.chart.slider.SetValue(toDisplay(sweep(r, i), sys))
 			gen = h.w.reqGen
 		})
 		if !h.w.eng.WaitEvaluated(gen, 10*time.Second) {
@@ -197,7 +197,7 @@ func TestDragWithSectionsKeepsMemoryFlat(t *testing.T) {
 	var heaps []uint64
 	r0 := h.w.sections.renders.Load()
 	for i := 0; i < steps; i++ {
-		h.ui(func() { h.w.slider.SetValue(toDisplay(sweep(r, i*8), sys)) })
+		h.ui(func() { h.w.chart.slider.SetValue(toDisplay(sweep(r, i*8), sys)) })
 		h.settle()
 		if i == steps/4 || i == steps-1 {
 			heaps = append(heaps, heap())

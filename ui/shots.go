@@ -38,8 +38,8 @@ var shotViews = []shotView{
 	{"file-menu", showFileMenu},
 	{"inputs-folded", func(w *Window) func() { w.FoldInputs(true); return func() { w.FoldInputs(false) } }},
 	{"sections-folded", func(w *Window) func() {
-		w.FoldSection("Column", true)
-		return func() { w.FoldSection("Column", false) }
+		w.inputs.FoldSection("Column", true)
+		return func() { w.inputs.FoldSection("Column", false) }
 	}},
 }
 

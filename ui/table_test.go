@@ -68,9 +68,9 @@ func TestMapViewTakesTheRoomItNeeds(t *testing.T) {
 	h.layOut()
 	h.ui(func() {
 		before := h.w.panes.centre.Offset
-		h.w.sectionsTabs.SelectIndex(2) // Chart, Sections, Map
+		h.w.viewTabs.SelectIndex(2) // Chart, Sections, Map
 		assert.GreaterOrEqual(t, h.w.panes.centre.Offset, mapShare)
-		h.w.sectionsTabs.SelectIndex(0)
+		h.w.viewTabs.SelectIndex(0)
 		assert.Equal(t, before, h.w.panes.centre.Offset)
 	})
 }

@@ -10,19 +10,18 @@ import (
 	"time"
 
 	"fyne.io/fyne/v2"
-	"fyne.io/fyne/v2/canvas"
 	"fyne.io/fyne/v2/container"
 	"fyne.io/fyne/v2/widget"
 
 	"upright/ui/model"
 	"upright/ui/units"
-	"upright/ui/widgets"
 )
 
-// Window is Upright's main window: the inputs, the chart with its length
-// slider and crossovers, the results table and the calculation view. Its
-// fields are touched only on the UI goroutine; the engine reaches it
-// through fyne.Do.
+// Window is Upright's main window. It lays the panes out (inputs, chart,
+// view tabs, results table, crossovers, calculation, status), keeps the
+// state and the engine, files every change of the scheme as one undoable
+// step and routes each evaluated snapshot to the panes. Its fields are
+// touched only on the UI goroutine; the engine reaches it through w.do.
 type Window struct {
 	app fyne.App
 	win fyne.Window
@@ -33,80 +32,49 @@ type Window struct {
 	appliedGen uint64 // the last snapshot shown
 	snap       *Snapshot
 	evalErr    error
-
-	picks picks // the candidate shown in the calculation and those pinned to the chart
+	picks      picks // the candidate shown in the calculation and those pinned to the chart
 
 	do     func(func()) // runs a function on the UI goroutine (fyne.Do)
 	doWait func(func()) // the same, waiting for it (fyne.DoAndWait)
+	mail   mailbox      // the newest snapshot waiting for the UI goroutine
 
-	mailMu     sync.Mutex
-	mailSnap   *Snapshot
-	mailQueued bool
-
-	quiet      int // >0 while the window sets widgets itself: change callbacks ignore it
 	closing    atomic.Bool
 	storeTimer *time.Timer
-	// OnApplied, when set, is called after each snapshot is shown (tests, timing).
+	// onApplied, when set, is called after each snapshot is shown (tests, timing).
 	onApplied func(*Snapshot)
-	started   time.Time
-	submitted [64]time.Time // when each request was made, for UPRIGHT_TRACE
-	firstLog  sync.Once
+	clock     timing
 
-	// inputs
-	fields      map[string]*field
-	sketches    map[model.EndCondition]*widgets.EndSketch
-	weakCheck   *widget.Check
-	twistCheck  *widget.Check  // the weak-axis braces also restrain twisting (steel Lcz)
-	nameEntry   *commitEntry   // the scheme's name
-	tieSelect   *widget.Select // the near-tie tolerance
-	loadMode    *widget.RadioGroup
-	directBox   *fyne.Container
-	takedownBox *fyne.Container
-	directHint  *widget.Label
-	liveRed     *widget.Check
-	kll         *widget.Select
-	occupancy   *widget.Select
-	selfWeight  *widget.Check
-	method      *widget.RadioGroup
-	metric      *widget.Select
-	unitsRadio  *widget.RadioGroup
-	loadSummary *widget.Label
-	matChecks   map[string]*widget.Check
-	matProblem  *widget.Label
-	opts        materialWidgets
-	fire        fireWidgets
+	// the panes
+	inputs   *inputsPane
+	chart    *chartPane
+	xsp      *crossoversPane    // the crossovers beside the chart
+	sections *sectionsView      // the Sections tab beside the chart
+	mapv     *mapView           // the Map tab beside the chart
+	viewTabs *container.AppTabs // Chart, Sections, Map and the extra views
+	results  *resultsPane
+	calc     *calcPane
+	status   *statusPane // the banner, the status line and the caution
+	fed      []pane      // the panes fed each snapshot shown (see views.go)
 
-	// chart and slider
-	chartRaster *canvas.Raster
-	front       *image.RGBA
-	frame       FrameInfo // where the data area lies in front
-	frames      int       // frames shown
-	markerLine  *canvas.Line
-	markerBox   *canvas.Rectangle
-	markerText  *canvas.Text
-	wantW       int
-	wantH       int
-	slider      *lengthSlider
-	sliderUnit  *widget.Label
-	rangeLabel  *widget.Label
-	xsp         *crossoversPane // the crossovers beside the chart
-
-	sections     *sectionsView      // the Sections tab beside the chart
-	sectionsTabs *container.AppTabs // the chart and Sections tabs
-
-	results *resultsPane // the results table
-	calc    *calcPane    // the calculation view
-
-	// frame
-	panes      panes           // the draggable splits and the folded inputs
-	inSections []*inputSection // the foldable sections of the inputs
-	status     *statusPane     // the banner, the status line and the caution
-
+	panes panes     // the draggable splits and the folded inputs
 	files fileState // the scheme's file, unsaved changes, recent files, autosave
 	ed    edits     // the undo history and the Edit menu
+}
 
-	mapv *mapView // the Map view beside the chart
-	fed  []pane   // the panes fed each snapshot shown (see views.go)
+// mailbox holds the newest snapshot the engine posted until the UI
+// goroutine takes it.
+type mailbox struct {
+	mu     sync.Mutex
+	snap   *Snapshot
+	queued bool
+}
+
+// timing is when the window was made and when each request was, for the
+// start-up log line and UPRIGHT_TRACE.
+type timing struct {
+	started   time.Time
+	submitted [64]time.Time
+	firstLog  sync.Once
 }
 
 // processStart is when the package was initialised, close to the start of the process.
@@ -114,14 +82,6 @@ var processStart = time.Now()
 
 // traceOn logs the delay of every snapshot when UPRIGHT_TRACE is set.
 var traceOn = os.Getenv("UPRIGHT_TRACE") != ""
-
-// field is one text input with its error line.
-type field struct {
-	spec  *fieldSpec
-	entry *commitEntry
-	err   *widget.Label
-	box   *fyne.Container
-}
 
 // NewWindow builds the window on app a showing sc; it does not show it.
 func NewWindow(a fyne.App, sc model.Scheme) *Window {
@@ -132,7 +92,8 @@ func NewWindow(a fyne.App, sc model.Scheme) *Window {
 // results onto the UI goroutine (fyne.Do and fyne.DoAndWait, or in tests a
 // lock shared with the test's own actions).
 func newWindow(a fyne.App, sc model.Scheme, do, doWait func(func())) *Window {
-	w := &Window{app: a, st: NewState(sc), started: time.Now(), do: do, doWait: doWait}
+	w := &Window{app: a, st: NewState(sc), do: do, doWait: doWait}
+	w.clock.started = time.Now()
 	a.Settings().SetTheme(lightTheme{})
 	w.win = a.NewWindow("Upright")
 	registerWindow(w)
@@ -162,19 +123,35 @@ func (w *Window) Close() {
 	w.win.Close()
 }
 
-// build assembles the window's content.
+// build makes the panes and lays them out.
 func (w *Window) build() fyne.CanvasObject {
-	inputs := w.buildInputs()
-	chartArea, xsPanel := w.buildChartArea()
-	chartArea = w.withMapView(chartArea)
+	w.inputs = newInputsPane(w.st, w, w.do, w.focused, w.app.Preferences())
+	w.chart = newChartPane(w.st, w, w.do, w.win, w.submit)
+	w.xsp = newCrossoversPane(w, w.sys, func() model.Range { return w.st.Range })
 	w.results = newResultsPane(func() (units.System, model.Method) { return w.sys(), w.st.Valid.Setting.Method }, w.Select)
 	w.calc = newCalcPane(w.TogglePin, w.clearPins)
 	w.status = newStatusPane()
-	w.fed = append(w.fed, w.results, w.calc, w.status)
+	w.fed = append(w.fed, w.inputs, w.chart, w.results, w.calc, w.status)
 
-	split := w.buildPanes(inputs, chartArea, w.results.Object(), xsPanel, w.calc.Object(), w.status.Banner())
-
+	// One row of view tabs over the slider: Chart, Sections, Map, then the extra views.
+	views := w.withMapView(w.plotViews(w.chart.Object()))
+	chartArea := container.NewBorder(nil, w.chart.Controls(), nil, nil, views)
+	split := w.buildPanes(w.inputs.Object(), chartArea, w.results.Object(), w.xsp.Object(), w.calc.Object(), w.status.Banner())
 	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), w.status.Object()), nil, nil, split)
+}
+
+// focused returns the widget with the keyboard focus, if any.
+func (w *Window) focused() fyne.Focusable {
+	if c := w.win.Canvas(); c != nil {
+		return c.Focused()
+	}
+	return nil
+}
+
+// syncInputs sets every input widget from the state.
+func (w *Window) syncInputs() {
+	w.inputs.sync()
+	w.chart.refresh(true)
 }
 
 // sys is the display system of the inputs.
@@ -187,30 +164,32 @@ func (w *Window) submit() {
 	}
 	w.reqGen++
 	if traceOn {
-		w.submitted[w.reqGen%uint64(len(w.submitted))] = time.Now()
+		w.clock.submitted[w.reqGen%uint64(len(w.clock.submitted))] = time.Now()
 	}
 	scale := float32(1)
 	if c := w.win.Canvas(); c != nil {
 		scale = c.Scale()
 	}
+	cw, ch := w.chart.size()
 	w.eng.Submit(Request{
 		Gen: w.reqGen, SchemeGen: w.st.SchemeGen, Scheme: w.st.Valid, Range: w.st.Range,
 		Pinned: append([]string(nil), w.picks.pinned...), Selected: w.picks.selected,
-		Width: w.wantW, Height: w.wantH, DPI: chartDPI(scale),
+		Width: cw, Height: ch, DPI: chartDPI(scale),
 	})
 	w.mapv.submit()
 }
 
-// after handles the outcome of an input change: fields, banner, slider and engine.
+// after shows the outcome of a change of the state in every pane and
+// hands a valid scheme to the engine.
 func (w *Window) after(out Outcome) {
-	w.showFieldErrors()
+	w.inputs.refresh()
+	w.chart.refresh(out.Rebuild)
 	w.updateBanner()
 	if out.Rebuild {
 		w.xsp.searching()
-		w.configureSlider()
 	}
 	if out.Submit {
-		w.placeMarker()
+		w.chart.placeMarker()
 		w.submit()
 		w.scheduleStore()
 		w.autosaveChanged()
@@ -244,17 +223,17 @@ func (w *Window) scheduleStore() {
 // coalesced: while one is waiting to be shown a newer one replaces it, so
 // the UI goroutine never works through a backlog.
 func (w *Window) postSnapshot(s *Snapshot) {
-	w.mailMu.Lock()
-	w.mailSnap = s
-	queued := w.mailQueued
-	w.mailQueued = true
-	w.mailMu.Unlock()
+	w.mail.mu.Lock()
+	w.mail.snap = s
+	queued := w.mail.queued
+	w.mail.queued = true
+	w.mail.mu.Unlock()
 	if !queued {
 		w.do(func() {
-			w.mailMu.Lock()
-			s := w.mailSnap
-			w.mailSnap, w.mailQueued = nil, false
-			w.mailMu.Unlock()
+			w.mail.mu.Lock()
+			s := w.mail.snap
+			w.mail.snap, w.mail.queued = nil, false
+			w.mail.mu.Unlock()
 			if s != nil {
 				w.applySnapshot(s)
 			}
@@ -275,24 +254,20 @@ func (w *Window) applySnapshot(s *Snapshot) {
 		return
 	}
 	w.evalErr = nil
-	newScheme := w.snap == nil || w.snap.SchemeGen != s.SchemeGen
 	w.snap = s
 	w.feed(s)
-	if newScheme {
-		w.updateLoadSummary()
-	}
 	w.updateBanner()
 	n := 0
 	for i := range s.Result.Families {
 		n += len(s.Result.Families[i].Rows)
 	}
-	w.firstLog.Do(func() {
+	w.clock.firstLog.Do(func() {
 		log.Printf("upright: first evaluation shown %.0f ms after the process started, %.0f ms after the window was created (%d candidates)",
-			float64(time.Since(processStart).Microseconds())/1000, float64(time.Since(w.started).Microseconds())/1000, n)
+			float64(time.Since(processStart).Microseconds())/1000, float64(time.Since(w.clock.started).Microseconds())/1000, n)
 	})
 	if traceOn {
 		log.Printf("trace: snapshot %d applied %.1f ms after submit (evaluated in %.1f ms), renders %d", s.Gen,
-			float64(time.Since(w.submitted[s.Gen%uint64(len(w.submitted))]).Microseconds())/1000, float64(s.Took.Microseconds())/1000, w.eng.Renders())
+			float64(time.Since(w.clock.submitted[s.Gen%uint64(len(w.clock.submitted))]).Microseconds())/1000, float64(s.Took.Microseconds())/1000, w.eng.Renders())
 	}
 	if w.onApplied != nil {
 		w.onApplied(s)
@@ -307,27 +282,16 @@ func (w *Window) applyCrossovers(x *Crossovers) {
 	w.xsp.setList(x.SchemeGen, x.List, x.Err)
 }
 
-// takeFrame copies a rendered chart into the window's image and shows it.
-// It runs on the engine's renderer goroutine and waits for the UI goroutine,
-// so the engine never draws into pixels the window is reading.
+// takeFrame hands a rendered chart to the chart pane and its curve keys to
+// the results table. It runs on the engine's renderer goroutine and waits
+// for the UI goroutine, so the engine never draws into pixels being read.
 func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
 	if w.closing.Load() {
 		return
 	}
 	w.doWait(func() {
-		b := img.Bounds()
-		if w.front == nil || w.front.Bounds() != b {
-			w.front = image.NewRGBA(b)
-		}
-		copy(w.front.Pix, img.Pix)
+		w.chart.takeFrame(img, info)
 		w.results.takeKeys(info.Keys)
-		w.frame = info
-		w.frames++
-		if w.frames == 1 {
-			log.Printf("upright: first chart shown %.0f ms after the process started", float64(time.Since(processStart).Microseconds())/1000)
-		}
-		w.chartRaster.Refresh()
-		w.placeMarker()
 	})
 }
 

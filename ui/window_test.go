@@ -45,7 +45,7 @@ func TestDemoSchemeOpensAndValidates(t *testing.T) {
 		assert.Equal(t, "Upright — "+sc.Name, h.w.win.Title())
 		assert.Equal(t, "", h.w.status.BannerText())
 		assert.NotEmpty(t, h.w.results.rows, "the table shows the demo's answers")
-		assert.NotNil(t, h.w.front, "a chart was drawn")
+		assert.NotNil(t, h.w.chart.front, "a chart was drawn")
 	})
 }
 
@@ -67,7 +67,7 @@ func TestTypingALengthUpdatesTheTable(t *testing.T) {
 		}
 		h.ui(func() {
 			assert.InDelta(t, tc.mm, h.w.snap.Result.Setting.LengthMM, 1e-6)
-			assert.InDelta(t, toDisplay(tc.mm, units.US), h.w.slider.Value, 1e-9, "the slider follows the typed length")
+			assert.InDelta(t, toDisplay(tc.mm, units.US), h.w.chart.slider.Value, 1e-9, "the slider follows the typed length")
 			assert.Contains(t, h.w.results.tableNote.Text, units.Length(tc.mm, units.US))
 		})
 		// The column weight follows the length: weight per foot times the length.
@@ -122,7 +122,7 @@ func TestSliderAcrossACrossoverChangesTheAnswer(t *testing.T) {
 	h.settle()
 	h.ui(func() {
 		assert.InDelta(t, x.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6)
-		assert.InDelta(t, toDisplay(x.LengthMM, units.US), h.w.slider.Value, 1e-9)
+		assert.InDelta(t, toDisplay(x.LengthMM, units.US), h.w.chart.slider.Value, 1e-9)
 	})
 	assert.Equal(t, x.From, h.sizeOf(x.Family), "at the crossover the first answer still holds")
 }
@@ -133,8 +133,8 @@ func TestDraggingTheSliderMovesMarkerAndTable(t *testing.T) {
 	var x0 float32
 	h.ui(func() {
 		before = h.w.st.Valid.Setting.LengthMM
-		x0 = h.w.markerLine.Position1.X
-		s := h.w.slider
+		x0 = h.w.chart.markerLine.Position1.X
+		s := h.w.chart.slider
 		s.Resize(fyne.NewSize(600, s.MinSize().Height))
 		// Drag to three quarters of the way along.
 		s.Dragged(&fyne.DragEvent{PointEvent: fyne.PointEvent{Position: fyne.NewPos(450, 5)}})
@@ -145,10 +145,10 @@ func TestDraggingTheSliderMovesMarkerAndTable(t *testing.T) {
 		after := h.w.st.Valid.Setting.LengthMM
 		assert.Greater(t, after, before, "the drag moved the length")
 		assert.InDelta(t, after, h.w.snap.Result.Setting.LengthMM, 1e-9, "the table is at the dragged length")
-		assert.Equal(t, units.Length(after, units.US), h.w.fields["length"].entry.Text)
-		assert.True(t, h.w.markerLine.Visible())
-		assert.Greater(t, h.w.markerLine.Position1.X, x0, "the marker moved right")
-		assert.Equal(t, units.Length(after, units.US), h.w.markerText.Text)
+		assert.Equal(t, units.Length(after, units.US), h.w.field("length").entry.Text)
+		assert.True(t, h.w.chart.markerLine.Visible())
+		assert.Greater(t, h.w.chart.markerLine.Position1.X, x0, "the marker moved right")
+		assert.Equal(t, units.Length(after, units.US), h.w.chart.markerText.Text)
 	})
 }
 
@@ -156,15 +156,15 @@ func TestArrowKeysStepTheSlider(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	var v0 float64
 	h.ui(func() {
-		v0 = h.w.slider.Value
-		h.w.slider.TypedKey(&fyne.KeyEvent{Name: fyne.KeyRight})
-		h.w.slider.TypedKey(&fyne.KeyEvent{Name: fyne.KeyRight})
-		h.w.slider.TypedKey(&fyne.KeyEvent{Name: fyne.KeyPageUp})
+		v0 = h.w.chart.slider.Value
+		h.w.chart.slider.TypedKey(&fyne.KeyEvent{Name: fyne.KeyRight})
+		h.w.chart.slider.TypedKey(&fyne.KeyEvent{Name: fyne.KeyRight})
+		h.w.chart.slider.TypedKey(&fyne.KeyEvent{Name: fyne.KeyPageUp})
 	})
 	h.settle()
 	h.ui(func() {
 		// Two fine steps of 1 in and one coarse step of 1 ft.
-		assert.InDelta(t, v0+2.0/12+1, h.w.slider.Value, 1e-9)
+		assert.InDelta(t, v0+2.0/12+1, h.w.chart.slider.Value, 1e-9)
 		assert.InDelta(t, fromDisplay(v0+2.0/12+1, units.US), h.w.snap.Result.Setting.LengthMM, 1e-6)
 	})
 }
@@ -192,10 +192,10 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 	}
 	for _, c := range cases {
 		// Pasted in one go, so no half-typed text makes a valid scheme on the way.
-		h.ui(func() { e := h.w.fields[c.field].entry; e.SetText(c.typed); e.commit() })
+		h.ui(func() { e := h.w.field(c.field).entry; e.SetText(c.typed); e.commit() })
 		h.settle()
 		h.ui(func() {
-			f := h.w.fields[c.field]
+			f := h.w.field(c.field)
 			assert.True(t, f.err.Visible(), "%s %q shows its message", c.field, c.typed)
 			for _, s := range c.says {
 				assert.Contains(t, f.err.Text, s, "%s %q", c.field, c.typed)
@@ -215,7 +215,7 @@ func TestInvalidInputKeepsTheLastValidResult(t *testing.T) {
 		h.ui(func() { good = specByID(c.field).format(specByID(c.field).get(&h.w.st.Valid), units.US) })
 		h.typeInto(c.field, good)
 		h.ui(func() {
-			assert.False(t, h.w.fields[c.field].err.Visible(), "%s fixed", c.field)
+			assert.False(t, h.w.field(c.field).err.Visible(), "%s fixed", c.field)
 			assert.Equal(t, "", h.w.status.BannerText())
 			gen = h.w.appliedGen
 		})
@@ -262,9 +262,11 @@ func (h *harness) shownTexts() []string {
 	var out []string
 	h.ui(func() {
 		w := h.w
-		for _, f := range w.fields {
-			if w.st.active(f.spec.id) || f.spec.id == "weak-axis length" {
-				out = append(out, f.entry.Text)
+		for _, fs := range []*fieldSet{w.inputs.fs, w.chart.fs} {
+			for _, f := range fs.byID {
+				if w.st.active(f.spec.id) || f.spec.id == "weak-axis length" {
+					out = append(out, f.entry.Text)
+				}
 			}
 		}
 		for c := range columns {
@@ -280,7 +282,7 @@ func (h *harness) shownTexts() []string {
 				out = append(out, l.Text)
 			}
 		}
-		out = append(out, w.rangeLabel.Text, w.loadSummary.Text, w.markerText.Text)
+		out = append(out, w.chart.rangeLabel.Text, w.inputs.load.summary.Text, w.chart.markerText.Text)
 		note := w.results.tableNote.Text
 		if i := strings.Index(note, " · best overall"); i >= 0 {
 			note = note[:i] // the rest names a candidate
@@ -313,14 +315,14 @@ func TestUnitSwitchConvertsEveryShownValue(t *testing.T) {
 		assert.False(t, siTokens.MatchString(s) && !usTokens.MatchString(s), "US display shows an SI value: %q", s)
 	}
 
-	h.ui(func() { h.w.unitsRadio.SetSelected("SI") })
+	h.ui(func() { h.w.inputs.unitsRadio.SetSelected("SI") })
 	h.settle()
 	var length float64
 	h.ui(func() {
 		length = h.w.st.Valid.Setting.LengthMM
 		assert.Equal(t, model.SI, h.w.snap.Model.Scheme.Units)
-		assert.Equal(t, trim(length/1000, 3)+" m", h.w.fields["length"].entry.Text)
-		assert.InDelta(t, length/1000, h.w.slider.Value, 1e-9, "the slider is in metres")
+		assert.Equal(t, trim(length/1000, 3)+" m", h.w.field("length").entry.Text)
+		assert.InDelta(t, length/1000, h.w.chart.slider.Value, 1e-9, "the slider is in metres")
 		assert.InDelta(t, 18*units.MMPerFoot, length, 1e-6, "switching units does not move the length")
 	})
 	assert.Equal(t, num(capN/1000, 0), h.cell(0, "capacity"), "capacity in kN")
@@ -328,10 +330,10 @@ func TestUnitSwitchConvertsEveryShownValue(t *testing.T) {
 		assert.False(t, usTokens.MatchString(s), "SI display still shows a US value: %q", s)
 	}
 	// And back again, with the inputs unchanged.
-	h.ui(func() { h.w.unitsRadio.SetSelected("US") })
+	h.ui(func() { h.w.inputs.unitsRadio.SetSelected("US") })
 	h.settle()
 	assert.Equal(t, usCap, h.cell(0, "capacity"))
-	h.ui(func() { assert.Equal(t, `18'-0.0"`, h.w.fields["length"].entry.Text) })
+	h.ui(func() { assert.Equal(t, `18'-0.0"`, h.w.field("length").entry.Text) })
 }
 
 func TestSortingByAColumn(t *testing.T) {
@@ -444,17 +446,17 @@ func TestSelectingARowShowsItsTraceAndPinAddsItsCurve(t *testing.T) {
 func TestEndConditionSketchesChooseTheEnds(t *testing.T) {
 	h := newHarness(t, DemoScheme())
 	for _, sp := range endSketchSpecs {
-		h.ui(func() { test.Tap(h.w.sketches[sp.ends]) })
+		h.ui(func() { test.Tap(h.w.inputs.sketches[sp.ends]) })
 		h.settle()
 		h.ui(func() {
 			assert.Equal(t, sp.ends, h.w.snap.Model.Scheme.Setting.Ends)
-			for e, s := range h.w.sketches {
+			for e, s := range h.w.inputs.sketches {
 				assert.Equal(t, e == sp.ends, s.Selected, "%s shown as chosen", e)
 			}
 		})
 	}
 	// The keyboard chooses too.
-	h.ui(func() { h.w.sketches[model.FixedFree].TypedRune(' ') })
+	h.ui(func() { h.w.inputs.sketches[model.FixedFree].TypedRune(' ') })
 	h.settle()
 	h.ui(func() { assert.Equal(t, model.FixedFree, h.w.st.Valid.Setting.Ends) })
 }
@@ -464,15 +466,15 @@ func TestTakedownAndTypedLoad(t *testing.T) {
 	var takedown float64
 	h.ui(func() {
 		takedown = h.w.snap.Model.Loads.DemandN
-		assert.Contains(t, h.w.loadSummary.Text, "ASCE 7-22")
-		h.w.loadMode.SetSelected("Typed axial load")
+		assert.Contains(t, h.w.inputs.load.summary.Text, "ASCE 7-22")
+		h.w.inputs.load.mode.SetSelected("Typed axial load")
 	})
 	h.typeInto("load", "250 kip")
 	h.ui(func() {
 		assert.Equal(t, model.LoadDirect, h.w.snap.Model.Scheme.Load.Mode)
 		assert.InDelta(t, 250*units.NPerKip, h.w.snap.Model.Loads.DemandN, 1e-6)
 		assert.NotEqual(t, takedown, h.w.snap.Model.Loads.DemandN)
-		assert.Contains(t, h.w.loadSummary.Text, "250 kip")
+		assert.Contains(t, h.w.inputs.load.summary.Text, "250 kip")
 	})
 }
 
@@ -482,18 +484,18 @@ func TestMaterialSwitches(t *testing.T) {
 	if len(mats) < 2 {
 		t.Skip("needs two materials to switch one off")
 	}
-	h.ui(func() { h.w.matChecks[mats[0]].SetChecked(false) })
+	h.ui(func() { h.w.inputs.matChecks[mats[0]].SetChecked(false) })
 	h.settle()
 	h.ui(func() {
 		for _, r := range h.w.results.rows {
 			assert.NotEqual(t, mats[0], h.w.snap.Model.Families[r.Family].Material())
 		}
 		for _, m := range mats[1:] {
-			h.w.matChecks[m].SetChecked(false)
+			h.w.inputs.matChecks[m].SetChecked(false)
 		}
 		assert.Contains(t, h.w.status.BannerText(), "fix Materials")
-		assert.True(t, h.w.matProblem.Visible())
-		h.w.matChecks[mats[0]].SetChecked(true)
+		assert.True(t, h.w.inputs.matProblem.Visible())
+		h.w.inputs.matChecks[mats[0]].SetChecked(true)
 		assert.Equal(t, "", h.w.status.BannerText())
 	})
 }
@@ -646,8 +648,8 @@ func TestOpenHookLoadsTheScheme(t *testing.T) {
 	h.settle()
 	h.ui(func() {
 		assert.Equal(t, "Upright — "+other.Name, h.w.win.Title())
-		assert.Equal(t, "4.2 m", h.w.fields["length"].entry.Text)
-		assert.Equal(t, "SI", h.w.unitsRadio.Selected)
+		assert.Equal(t, "4.2 m", h.w.field("length").entry.Text)
+		assert.Equal(t, "SI", h.w.inputs.unitsRadio.Selected)
 		assert.InDelta(t, 4200, h.w.snap.Result.Setting.LengthMM, 1e-9)
 	})
 }
@@ -689,10 +691,10 @@ func TestTabOrderRunsDownTheInputsThenToTheSlider(t *testing.T) {
 			}
 			return -1
 		}
-		first := index(h.w.sketches[model.FixedFixed])
-		k := index(h.w.fields["K"].entry)
-		slider := index(h.w.slider)
-		length := index(h.w.fields["length"].entry)
+		first := index(h.w.inputs.sketches[model.FixedFixed])
+		k := index(h.w.field("K").entry)
+		slider := index(h.w.chart.slider)
+		length := index(h.w.field("length").entry)
 		table := index(h.w.results.table)
 		require.True(t, first >= 0 && k >= 0 && slider >= 0 && length >= 0, "all reachable by Tab: %d %d %d %d", first, k, slider, length)
 		assert.Less(t, first, k, "the end conditions come before K")

@@ -59,13 +59,13 @@ func Run(args []string) int {
 	w.files.path, w.files.clean = path, normalised(clean)
 	w.updateTitle()
 	if auto != "" {
-		if err := w.startAutosave(auto, autosaveEvery); err != nil && msg == "" {
+		if err := w.files.startAutosave(auto, autosaveEvery); err != nil && msg == "" {
 			msg = "Autosave is off: " + err.Error()
 		}
 	}
 	// Quit from the menu ends the app without the close intercept: the
 	// autosave still gets the last scheme.
-	a.Lifecycle().SetOnStopped(w.stopAutosave)
+	a.Lifecycle().SetOnStopped(w.files.stopAutosave)
 	w.win.Resize(savedSize(prefs, area))
 	if shotsDir() == "" {
 		w.refitAfterShow(area, areaScale)
@@ -77,7 +77,7 @@ func Run(args []string) int {
 			storeScheme(prefs, w.st.Valid)
 		}
 		w.closing.Store(true)
-		w.stopAutosave()
+		w.files.stopAutosave()
 		unregisterWindow(w)
 		w.win.Close()
 	})

@@ -25,7 +25,7 @@ func TestSaveAsNeverLeavesAnEmptyFile(t *testing.T) {
 	require.NoError(t, wc.Close())
 	h.ui(func() {
 		h.w.st.HaveValid = false // inputs that do not make a scheme: the save fails
-		assert.Error(t, h.w.SaveFile(path))
+		assert.Error(t, h.w.files.SaveFile(path))
 		h.w.st.HaveValid = true
 	})
 	closeDialogs(h)
@@ -37,7 +37,7 @@ func TestSaveAsNeverLeavesAnEmptyFile(t *testing.T) {
 	wc, err = storage.Writer(storage.NewFileURI(path))
 	require.NoError(t, err)
 	require.NoError(t, wc.Close())
-	h.ui(func() { require.NoError(t, h.w.SaveFile(path)) })
+	h.ui(func() { require.NoError(t, h.w.files.SaveFile(path)) })
 	b, err = os.ReadFile(path)
 	require.NoError(t, err)
 	assert.Contains(t, string(b), `"format": "upright-scheme"`)

@@ -17,7 +17,7 @@ import (
 func TestExportedChartCarriesTheCaution(t *testing.T) {
 	h, dir := fileHarness(t)
 	path := filepath.Join(dir, "chart.png")
-	h.ui(func() { require.NoError(t, h.w.ExportChartFile(path)) })
+	h.ui(func() { require.NoError(t, h.w.files.ExportChartFile(path)) })
 	b, err := os.ReadFile(path)
 	require.NoError(t, err)
 	img, err := png.Decode(bytes.NewReader(b))

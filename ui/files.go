@@ -41,8 +41,17 @@ const autosaveEvery = 4 * time.Second
 // chartExportSize is the page of an exported chart: 10 × 6 in at 200 dpi for PNG.
 var chartExportSize = plots.Size{Width: 720, Height: 432, DPI: 200}
 
-// fileState is what the window knows about the file behind the scheme on screen.
-type fileState struct {
+// filesPane is the scheme's file and what is written from it: open, save,
+// the recent files, the autosave, the exports and their dialogs. It reads
+// the state; a file opened reaches the state through the host's LoadScheme,
+// one undoable step.
+type filesPane struct {
+	win   fyne.Window // parent of the dialogs
+	prefs fyne.Preferences
+	st    *State // read only
+	host  fileHost
+	do    func(func()) // runs a function on the UI goroutine
+
 	path      string       // the scheme file; "" when the scheme has none yet
 	clean     model.Scheme // the valid scheme as last opened or saved: differences are unsaved changes
 	recent    schemefile.Recent
@@ -50,9 +59,49 @@ type fileState struct {
 	lastTitle string
 }
 
+// fileHost is what the files pane needs of the window.
+type fileHost interface {
+	LoadScheme(sc model.Scheme)          // a scheme opened, as one undoable step
+	exportInputs() (exportInputs, error) // what an export writes, taken now
+	notify(msg string)                   // a message kept in the status line
+	updateTitle()                        // the window title follows the file
+	menuChanged()                        // the recent list changed
+	closed() bool                        // the window is closing
+}
+
+// newFilesPane makes the files pane of a window, with the recent list from
+// the preferences and the scheme on screen as saved.
+func newFilesPane(win fyne.Window, prefs fyne.Preferences, st *State, host fileHost, do func(func())) *filesPane {
+	useAtomicFileWriters()
+	r, _ := schemefile.ParseRecent(prefs.String(prefRecent))
+	return &filesPane{win: win, prefs: prefs, st: st, host: host, do: do, recent: r, clean: st.Valid}
+}
+
+// title is the window title: the scheme's name, with a trailing " •" while
+// it has unsaved changes; changed reports whether it differs from the last.
+func (f *filesPane) title() (t string, changed bool) {
+	name := strings.TrimSpace(f.st.Valid.Name)
+	if name == "" {
+		name = "Untitled scheme"
+	}
+	t = "Upright — " + name
+	if f.Dirty() {
+		t += " •"
+	}
+	changed = t != f.lastTitle
+	f.lastTitle = t
+	return t, changed
+}
+
 // notify shows a file action's message in the status line and keeps it
 // there for a while, over the evaluation summary.
 func (w *Window) notify(msg string) { w.status.say(msg) }
+
+// menuChanged sets the main menu again (the recent files changed).
+func (w *Window) menuChanged() { w.win.SetMainMenu(w.mainMenu()) }
+
+// closed reports whether the window is closing.
+func (w *Window) closed() bool { return w.closing.Load() }
 
 // windows maps each open fyne.Window to its Window, so the hooks (which are
 // handed the fyne.Window) reach the window's file state.
@@ -83,7 +132,7 @@ func windowOf(win fyne.Window) *Window {
 func init() {
 	OpenHook = func(win fyne.Window, load func(model.Scheme)) {
 		if w := windowOf(win); w != nil {
-			w.showOpenDialog()
+			w.files.showOpenDialog()
 		}
 	}
 	SaveHook = func(win fyne.Window, sc model.Scheme) {
@@ -92,24 +141,16 @@ func init() {
 			return
 		}
 		if w.files.path == "" {
-			w.SaveAs()
+			w.files.SaveAs()
 			return
 		}
-		_ = w.SaveFile(w.files.path)
+		_ = w.files.SaveFile(w.files.path)
 	}
 	ExportHook = func(win fyne.Window, ex Export) {
 		if w := windowOf(win); w != nil {
-			w.showExportDialog("Export the client report", ".pdf", "report", w.startReport)
+			w.files.showExportDialog("Export the client report", ".pdf", "report", w.files.startReport)
 		}
 	}
-}
-
-// initFiles reads the recent list from the preferences.
-func (w *Window) initFiles() {
-	useAtomicFileWriters()
-	r, _ := schemefile.ParseRecent(w.app.Preferences().String(prefRecent))
-	w.files.recent = r
-	w.files.clean = w.st.Valid
 }
 
 // normalised returns sc as the window's state holds it once loaded, so it
@@ -117,111 +158,111 @@ func (w *Window) initFiles() {
 func normalised(sc model.Scheme) model.Scheme { return NewState(sc).Valid }
 
 // Dirty reports whether the scheme on screen differs from the one last opened or saved.
-func (w *Window) Dirty() bool {
-	return !reflect.DeepEqual(w.st.Valid, w.files.clean)
+func (f *filesPane) Dirty() bool {
+	return !reflect.DeepEqual(f.st.Valid, f.clean)
 }
 
 // Path returns the scheme file of the scheme on screen, or "" when it has none.
-func (w *Window) Path() string { return w.files.path }
+func (f *filesPane) Path() string { return f.path }
 
 // setPath records the file behind the scheme on screen, and that the scheme
 // on screen is what it holds.
-func (w *Window) setPath(path string) {
-	w.files.path = path
-	w.files.clean = w.st.Valid
-	w.app.Preferences().SetString(prefSchemePath, path)
+func (f *filesPane) setPath(path string) {
+	f.path = path
+	f.clean = f.st.Valid
+	f.prefs.SetString(prefSchemePath, path)
 	if path != "" {
-		w.addRecent(path)
+		f.addRecent(path)
 	}
-	w.updateTitle()
+	f.host.updateTitle()
 }
 
 // addRecent puts a path at the top of the recent list and rebuilds the menu.
-func (w *Window) addRecent(path string) {
-	w.files.recent.Add(path)
-	w.storeRecent()
+func (f *filesPane) addRecent(path string) {
+	f.recent.Add(path)
+	f.storeRecent()
 }
 
-func (w *Window) storeRecent() {
-	w.app.Preferences().SetString(prefRecent, w.files.recent.String())
-	w.win.SetMainMenu(w.mainMenu())
+func (f *filesPane) storeRecent() {
+	f.prefs.SetString(prefRecent, f.recent.String())
+	f.host.menuChanged()
 }
 
 // RecentPaths returns the recent scheme files, most recent first.
-func (w *Window) RecentPaths() []string { return w.files.recent.Paths() }
+func (f *filesPane) RecentPaths() []string { return f.recent.Paths() }
 
 // OpenFile loads the scheme file at path into the window. On error it shows
 // the message in a dialog, keeps the scheme on screen and returns the error.
-func (w *Window) OpenFile(path string) error {
+func (f *filesPane) OpenFile(path string) error {
 	sc, err := schemefile.Load(path)
 	if err != nil {
-		w.showFileError("The scheme could not be opened", err)
+		f.showFileError("The scheme could not be opened", err)
 		return err
 	}
-	w.LoadScheme(sc)
-	w.setPath(path)
-	w.notify("Opened " + filepath.Base(path))
+	f.host.LoadScheme(sc)
+	f.setPath(path)
+	f.host.notify("Opened " + filepath.Base(path))
 	return nil
 }
 
 // openReader loads a scheme from a file dialog's reader: through its path
 // when it is a local file, else by reading at most MaxSize bytes.
-func (w *Window) openReader(rc fyne.URIReadCloser) error {
+func (f *filesPane) openReader(rc fyne.URIReadCloser) error {
 	defer rc.Close()
 	u := rc.URI()
 	if u.Scheme() == "file" {
-		return w.OpenFile(u.Path())
+		return f.OpenFile(u.Path())
 	}
 	b, err := io.ReadAll(io.LimitReader(rc, schemefile.MaxSize+1))
 	if err == nil {
 		var sc model.Scheme
 		if sc, err = schemefile.Unmarshal(b); err == nil {
-			w.LoadScheme(sc)
-			w.notify("Opened " + u.Name())
+			f.host.LoadScheme(sc)
+			f.host.notify("Opened " + u.Name())
 			return nil
 		}
 	}
 	err = fmt.Errorf("%s: %w", u.Name(), err)
-	w.showFileError("The scheme could not be opened", err)
+	f.showFileError("The scheme could not be opened", err)
 	return err
 }
 
 // SaveFile writes the valid scheme to path atomically (schemefile.Save) and
 // makes path the scheme's file. On error it shows the message and returns it.
-func (w *Window) SaveFile(path string) error {
-	if !w.st.HaveValid {
+func (f *filesPane) SaveFile(path string) error {
+	if !f.st.HaveValid {
 		err := errors.New("the inputs do not make a valid scheme yet; fix the fields named in the banner first")
-		w.showFileError("The scheme was not saved", err)
+		f.showFileError("The scheme was not saved", err)
 		return err
 	}
-	if err := schemefile.Save(path, w.st.Valid); err != nil {
-		w.showFileError("The scheme was not saved", err)
+	if err := schemefile.Save(path, f.st.Valid); err != nil {
+		f.showFileError("The scheme was not saved", err)
 		return err
 	}
-	w.setPath(path)
-	w.notify("Saved " + filepath.Base(path))
+	f.setPath(path)
+	f.host.notify("Saved " + filepath.Base(path))
 	return nil
 }
 
 // SaveAs asks where to save the scheme.
-func (w *Window) SaveAs() {
-	w.showSaveDialog("Save the scheme", schemefile.Extension, "", func(path string) { _ = w.SaveFile(path) })
+func (f *filesPane) SaveAs() {
+	f.showSaveDialog("Save the scheme", schemefile.Extension, "", func(path string) { _ = f.SaveFile(path) })
 }
 
 // showOpenDialog asks for a scheme file to open.
-func (w *Window) showOpenDialog() {
+func (f *filesPane) showOpenDialog() {
 	d := dialog.NewFileOpen(func(rc fyne.URIReadCloser, err error) {
 		if err != nil {
-			w.showFileError("The scheme could not be opened", err)
+			f.showFileError("The scheme could not be opened", err)
 			return
 		}
 		if rc == nil {
 			return // cancelled
 		}
-		_ = w.openReader(rc)
-	}, w.win)
+		_ = f.openReader(rc)
+	}, f.win)
 	d.SetFilter(storage.NewExtensionFileFilter([]string{".json"}))
-	w.startIn(d)
+	f.startIn(d)
 	d.Resize(fyne.NewSize(820, 560))
 	d.Show()
 }
@@ -232,10 +273,10 @@ func (w *Window) showOpenDialog() {
 // is an atomicFiles writer, which leaves the file untouched when closed
 // unused, and the file is then written by path, atomically (a temporary file
 // beside it, renamed over it), so a failed save leaves the earlier file.
-func (w *Window) showSaveDialog(title, ext, suffix string, write func(path string)) {
+func (f *filesPane) showSaveDialog(title, ext, suffix string, write func(path string)) {
 	d := dialog.NewFileSave(func(wc fyne.URIWriteCloser, err error) {
 		if err != nil {
-			w.showFileError(title+" failed", err)
+			f.showFileError(title+" failed", err)
 			return
 		}
 		if wc == nil {
@@ -244,32 +285,32 @@ func (w *Window) showSaveDialog(title, ext, suffix string, write func(path strin
 		u := wc.URI()
 		_ = wc.Close()
 		if u.Scheme() != "file" {
-			w.showFileError(title+" failed", fmt.Errorf("%s is not a local file; choose a file on this computer", u))
+			f.showFileError(title+" failed", fmt.Errorf("%s is not a local file; choose a file on this computer", u))
 			return
 		}
 		write(u.Path())
-	}, w.win)
+	}, f.win)
 	d.SetTitleText(title)
-	d.SetFileName(fileStem(w.st.Valid.Name) + suffix + ext)
+	d.SetFileName(fileStem(f.st.Valid.Name) + suffix + ext)
 	if i := strings.LastIndex(ext, "."); i >= 0 {
 		d.SetFilter(storage.NewExtensionFileFilter([]string{ext[i:]}))
 	}
-	w.startIn(d)
+	f.startIn(d)
 	d.Resize(fyne.NewSize(820, 560))
 	d.Show()
 }
 
 // showExportDialog asks where to export and runs export with the path.
-func (w *Window) showExportDialog(title, ext, suffix string, export func(path string)) {
-	w.showSaveDialog(title, ext, "-"+suffix, export)
+func (f *filesPane) showExportDialog(title, ext, suffix string, export func(path string)) {
+	f.showSaveDialog(title, ext, "-"+suffix, export)
 }
 
 // startIn opens a file dialog in the folder of the scheme's file, or of the
 // most recent one.
-func (w *Window) startIn(d *dialog.FileDialog) {
-	p := w.files.path
-	if p == "" && w.files.recent.Len() > 0 {
-		p = w.files.recent.Paths()[0]
+func (f *filesPane) startIn(d *dialog.FileDialog) {
+	p := f.path
+	if p == "" && f.recent.Len() > 0 {
+		p = f.recent.Paths()[0]
 	}
 	if p == "" {
 		return
@@ -305,9 +346,9 @@ func fileStem(name string) string {
 }
 
 // showFileError shows a file action's error in a dialog.
-func (w *Window) showFileError(title string, err error) {
-	dialog.ShowInformation(title, err.Error(), w.win)
-	w.notify(title)
+func (f *filesPane) showFileError(title string, err error) {
+	dialog.ShowInformation(title, err.Error(), f.win)
+	f.host.notify(title)
 }
 
 // exportInputs is what an export needs from the window, taken on the UI goroutine.
@@ -392,83 +433,83 @@ func writeChart(path string, in exportInputs) error {
 
 // export runs one export synchronously and reports it in the status bar or,
 // on error, a dialog.
-func (w *Window) export(what, path string, write func(string, exportInputs) error) error {
-	in, err := w.exportInputs()
+func (f *filesPane) export(what, path string, write func(string, exportInputs) error) error {
+	in, err := f.host.exportInputs()
 	if err == nil {
 		err = write(path, in)
 	}
-	w.exportDone(what, path, err)
+	f.exportDone(what, path, err)
 	return err
 }
 
 // exportBackground runs one export off the UI goroutine (a report takes a
 // moment) and reports it on the UI goroutine.
-func (w *Window) exportBackground(what, path string, write func(string, exportInputs) error) {
-	in, err := w.exportInputs()
+func (f *filesPane) exportBackground(what, path string, write func(string, exportInputs) error) {
+	in, err := f.host.exportInputs()
 	if err != nil {
-		w.exportDone(what, path, err)
+		f.exportDone(what, path, err)
 		return
 	}
-	w.notify("Writing " + filepath.Base(path) + "…")
+	f.host.notify("Writing " + filepath.Base(path) + "…")
 	go func() {
 		err := write(path, in)
-		if w.closing.Load() {
+		if f.host.closed() {
 			return
 		}
-		w.do(func() { w.exportDone(what, path, err) })
+		f.do(func() { f.exportDone(what, path, err) })
 	}()
 }
 
-func (w *Window) exportDone(what, path string, err error) {
+func (f *filesPane) exportDone(what, path string, err error) {
 	if err != nil {
-		w.showFileError("The "+what+" was not written", err)
+		f.showFileError("The "+what+" was not written", err)
 		return
 	}
-	w.notify("Wrote " + filepath.Base(path))
+	f.host.notify("Wrote " + filepath.Base(path))
 }
 
 // ExportReportFile writes the client report (PDF) of the valid scheme to path.
-func (w *Window) ExportReportFile(path string) error { return w.export("report", path, writeReport) }
+func (f *filesPane) ExportReportFile(path string) error { return f.export("report", path, writeReport) }
 
 // ExportCSVFile writes the candidate table (CSV, every candidate) of the valid scheme to path.
-func (w *Window) ExportCSVFile(path string) error { return w.export("table", path, writeCSV) }
+func (f *filesPane) ExportCSVFile(path string) error { return f.export("table", path, writeCSV) }
 
 // ExportChartFile writes the chart of the valid scheme to path (.png, .svg or .pdf).
-func (w *Window) ExportChartFile(path string) error { return w.export("chart", path, writeChart) }
+func (f *filesPane) ExportChartFile(path string) error { return f.export("chart", path, writeChart) }
 
-func (w *Window) startReport(path string) { w.exportBackground("report", path, writeReport) }
+func (f *filesPane) startReport(path string) { f.exportBackground("report", path, writeReport) }
 
 // ExportCSV asks where to write the candidate table.
-func (w *Window) ExportCSV() {
-	w.showExportDialog("Export the candidate table", ".csv", "table", func(p string) { w.exportBackground("table", p, writeCSV) })
+func (f *filesPane) ExportCSV() {
+	f.showExportDialog("Export the candidate table", ".csv", "table", func(p string) { f.exportBackground("table", p, writeCSV) })
 }
 
 // ExportChart asks where to write the chart; the extension chosen picks the format.
-func (w *Window) ExportChart() {
-	w.showSaveDialog("Export the chart (.png, .svg or .pdf)", ".png", "-chart", func(p string) {
+func (f *filesPane) ExportChart() {
+	f.showSaveDialog("Export the chart (.png, .svg or .pdf)", ".png", "-chart", func(p string) {
 		switch strings.ToLower(filepath.Ext(p)) {
 		case ".png", ".svg", ".pdf":
 		default:
 			p += ".png"
 		}
-		w.exportBackground("chart", p, writeChart)
+		f.exportBackground("chart", p, writeChart)
 	})
 }
 
 // openRecent opens a file of the recent list, dropping it from the list when it cannot be read.
-func (w *Window) openRecent(path string) {
-	if err := w.OpenFile(path); err != nil {
-		w.files.recent.Remove(path)
-		w.storeRecent()
+func (f *filesPane) openRecent(path string) {
+	if err := f.OpenFile(path); err != nil {
+		f.recent.Remove(path)
+		f.storeRecent()
 	}
 }
 
 // recentMenu lists the recent files, most recent first.
-func (w *Window) recentMenu() *fyne.Menu {
+func (f *filesPane) recentMenu() *fyne.Menu {
 	var items []*fyne.MenuItem
-	for _, p := range w.files.recent.Paths() {
+	for _, p := range f.recent.Paths() {
 		p := p
-		items = append(items, fyne.NewMenuItem(filepath.Base(p)+"   ("+filepath.Dir(p)+")", func() { w.openRecent(p) }))
+		items = append(items, fyne.NewMenuItem(filepath.Base(p)+"   ("+filepath.Dir(p)+")", func() { f.openRecent(p) }))
 	}
 	if len(items) == 0 {
 		none := fyne.NewMenuItem("No scheme opened or saved yet", nil)
@@ -476,8 +517,8 @@ func (w *Window) recentMenu() *fyne.Menu {
 		return fyne.NewMenu("", none)
 	}
 	items = append(items, fyne.NewMenuItemSeparator(), fyne.NewMenuItem("Clear this list", func() {
-		w.files.recent = schemefile.Recent{}
-		w.storeRecent()
+		f.recent = schemefile.Recent{}
+		f.storeRecent()
 	}))
 	return fyne.NewMenu("", items...)
 }
@@ -495,34 +536,34 @@ func autosavePath(a fyne.App) string {
 }
 
 // startAutosave starts autosaving the valid scheme to path; errors go to the status bar.
-func (w *Window) startAutosave(path string, every time.Duration) error {
+func (f *filesPane) startAutosave(path string, every time.Duration) error {
 	if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
 		return err
 	}
 	a, err := schemefile.NewAutosaver(path, every, func(err error) {
-		if w.closing.Load() {
+		if f.host.closed() {
 			return
 		}
-		w.do(func() { w.notify("Autosave failed: " + err.Error()) })
+		f.do(func() { f.host.notify("Autosave failed: " + err.Error()) })
 	})
 	if err != nil {
 		return err
 	}
-	w.files.auto = a
+	f.auto = a
 	return nil
 }
 
 // stopAutosave writes any pending scheme and stops the autosaver.
-func (w *Window) stopAutosave() {
-	if w.files.auto != nil {
-		_ = w.files.auto.Stop()
+func (f *filesPane) stopAutosave() {
+	if f.auto != nil {
+		_ = f.auto.Stop()
 	}
 }
 
 // autosaveChanged hands the valid scheme to the autosaver.
-func (w *Window) autosaveChanged() {
-	if w.files.auto != nil && w.st.HaveValid {
-		w.files.auto.Update(w.st.Valid)
+func (f *filesPane) autosaveChanged() {
+	if f.auto != nil && f.st.HaveValid {
+		f.auto.Update(f.st.Valid)
 	}
 }
 

@@ -107,26 +107,26 @@ func TestSaveThenOpenGivesBackTheScheme(t *testing.T) {
 	path := filepath.Join(dir, "gallery"+schemefile.Extension)
 	var saved model.Scheme
 	h.ui(func() {
-		assert.True(t, h.w.Dirty(), "typed changes are unsaved")
+		assert.True(t, h.w.files.Dirty(), "typed changes are unsaved")
 		assert.True(t, strings.HasSuffix(h.w.win.Title(), " •"), h.w.win.Title())
 		saved = h.w.st.Valid
-		require.NoError(t, h.w.SaveFile(path))
-		assert.False(t, h.w.Dirty())
+		require.NoError(t, h.w.files.SaveFile(path))
+		assert.False(t, h.w.files.Dirty())
 		assert.Equal(t, "Upright — Tannery Yard studios, gallery column", h.w.win.Title())
-		assert.Equal(t, path, h.w.Path())
-		assert.Equal(t, []string{path}, h.w.RecentPaths())
+		assert.Equal(t, path, h.w.files.Path())
+		assert.Equal(t, []string{path}, h.w.files.RecentPaths())
 		assert.Equal(t, `["`+path+`"]`, h.w.app.Preferences().String(prefRecent))
 		h.w.LoadScheme(DemoScheme())
-		assert.Equal(t, "", h.w.Path(), "the demo has no file")
+		assert.Equal(t, "", h.w.files.Path(), "the demo has no file")
 	})
 	h.settle()
-	h.ui(func() { require.NoError(t, h.w.OpenFile(path)) })
+	h.ui(func() { require.NoError(t, h.w.files.OpenFile(path)) })
 	h.settle()
 	h.ui(func() {
 		assert.True(t, reflect.DeepEqual(saved, h.w.st.Valid), "saved %+v\nopened %+v", saved, h.w.st.Valid)
 		assert.Equal(t, `21'-4.0"`, h.w.field("length").entry.Text)
 		assert.InDelta(t, 21*units.MMPerFoot+4*units.MMPerInch, h.w.snap.Result.Setting.LengthMM, 1e-9)
-		assert.False(t, h.w.Dirty())
+		assert.False(t, h.w.files.Dirty())
 		assert.Equal(t, "Opened gallery"+schemefile.Extension, h.w.status.Notice())
 	})
 	// Ctrl+S now saves to the known file without asking: a length change reaches it.
@@ -134,10 +134,10 @@ func TestSaveThenOpenGivesBackTheScheme(t *testing.T) {
 	// slider rounds to 1 in in a US scheme).
 	h.setSlider(16.5 * units.MMPerFoot)
 	h.ui(func() {
-		assert.True(t, h.w.Dirty())
+		assert.True(t, h.w.files.Dirty())
 		h.w.win.Canvas().(interface{ TypedShortcut(fyne.Shortcut) }).TypedShortcut(shortcutSave)
 		assert.Empty(t, h.w.win.Canvas().Overlays().List(), "no dialog when the file is known")
-		assert.False(t, h.w.Dirty())
+		assert.False(t, h.w.files.Dirty())
 	})
 	back, err := schemefile.Load(path)
 	require.NoError(t, err)
@@ -162,7 +162,7 @@ func TestOpeningABadFileKeepsTheScheme(t *testing.T) {
 		var openErr error
 		h.ui(func() {
 			before = h.w.st.Valid
-			openErr = h.w.OpenFile(path)
+			openErr = h.w.files.OpenFile(path)
 		})
 		require.Error(t, openErr, tc.name)
 		msg := dialogText(h)
@@ -173,18 +173,18 @@ func TestOpeningABadFileKeepsTheScheme(t *testing.T) {
 		}
 		h.ui(func() {
 			assert.True(t, reflect.DeepEqual(before, h.w.st.Valid), "%s: the scheme on screen is kept", tc.name)
-			assert.Equal(t, "", h.w.Path())
+			assert.Equal(t, "", h.w.files.Path())
 			assert.Equal(t, "Upright — "+DemoScheme().Name, h.w.win.Title())
 		})
 		closeDialogs(h)
 	}
 	// A recent file that no longer opens leaves the list.
 	path := filepath.Join(dir, "kept"+schemefile.Extension)
-	h.ui(func() { require.NoError(t, h.w.SaveFile(path)) })
+	h.ui(func() { require.NoError(t, h.w.files.SaveFile(path)) })
 	require.NoError(t, os.WriteFile(path, []byte("{"), 0o644))
 	h.ui(func() {
-		h.w.openRecent(path)
-		assert.NotContains(t, h.w.RecentPaths(), path)
+		h.w.files.openRecent(path)
+		assert.NotContains(t, h.w.files.RecentPaths(), path)
 	})
 	closeDialogs(h)
 }
@@ -196,11 +196,11 @@ func TestExportsWriteAPDFACSVAndACharts(t *testing.T) {
 	png := filepath.Join(dir, "chart.png")
 	svg := filepath.Join(dir, "chart.svg")
 	h.ui(func() {
-		require.NoError(t, h.w.ExportReportFile(pdf))
+		require.NoError(t, h.w.files.ExportReportFile(pdf))
 		assert.Equal(t, "Wrote report.pdf", h.w.status.Notice())
-		require.NoError(t, h.w.ExportCSVFile(csv))
-		require.NoError(t, h.w.ExportChartFile(png))
-		require.NoError(t, h.w.ExportChartFile(svg))
+		require.NoError(t, h.w.files.ExportCSVFile(csv))
+		require.NoError(t, h.w.files.ExportChartFile(png))
+		require.NoError(t, h.w.files.ExportChartFile(svg))
 	})
 	b, err := os.ReadFile(pdf)
 	require.NoError(t, err)
@@ -223,7 +223,7 @@ func TestExportsWriteAPDFACSVAndACharts(t *testing.T) {
 
 	// A failed export says so and leaves the earlier file as it was.
 	bad := filepath.Join(dir, "missing-folder", "report.pdf")
-	h.ui(func() { assert.Error(t, h.w.ExportReportFile(bad)) })
+	h.ui(func() { assert.Error(t, h.w.files.ExportReportFile(bad)) })
 	assert.Contains(t, dialogText(h), "was not written")
 	closeDialogs(h)
 }
@@ -233,8 +233,8 @@ func TestTheMenuListsRecentFilesAndTheExports(t *testing.T) {
 	a := filepath.Join(dir, "a"+schemefile.Extension)
 	b := filepath.Join(dir, "b"+schemefile.Extension)
 	h.ui(func() {
-		require.NoError(t, h.w.SaveFile(a))
-		require.NoError(t, h.w.SaveFile(b))
+		require.NoError(t, h.w.files.SaveFile(a))
+		require.NoError(t, h.w.files.SaveFile(b))
 		var labels []string
 		var recent *fyne.MenuItem
 		for _, it := range h.w.win.MainMenu().Items[0].Items {
@@ -297,13 +297,13 @@ func TestStartupRestoresANewerAutosave(t *testing.T) {
 func TestTheAutosaverWritesTheSchemeAfterChanges(t *testing.T) {
 	h, dir := fileHarness(t)
 	auto := filepath.Join(dir, autosaveName)
-	h.ui(func() { require.NoError(t, h.w.startAutosave(auto, 50*time.Millisecond)) })
+	h.ui(func() { require.NoError(t, h.w.files.startAutosave(auto, 50*time.Millisecond)) })
 	h.typeInto("length", "17 ft")
 	require.Eventually(t, func() bool {
 		sc, err := schemefile.Load(auto)
 		return err == nil && math.Abs(sc.Setting.LengthMM-17*units.MMPerFoot) < 1e-6
 	}, 5*time.Second, 20*time.Millisecond, "the typed length reaches the autosave file")
-	h.ui(func() { h.w.stopAutosave() })
+	h.ui(func() { h.w.files.stopAutosave() })
 }
 
 func TestFileStem(t *testing.T) {

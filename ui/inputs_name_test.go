@@ -30,7 +30,7 @@ func TestSchemeNameIsEditable(t *testing.T) {
 		assert.Equal(t, "Quarry Lane depot, bay column", h.w.st.Valid.Name)
 		assert.Equal(t, gen, h.w.st.SchemeGen, "a new name recomputes nothing")
 		assert.True(t, strings.HasPrefix(h.w.win.Title(), "Upright — Quarry Lane depot, bay column"), h.w.win.Title())
-		require.NoError(t, h.w.SaveFile(path))
+		require.NoError(t, h.w.files.SaveFile(path))
 	})
 	sc, err := schemefile.Load(path)
 	require.NoError(t, err)

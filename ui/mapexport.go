@@ -44,10 +44,10 @@ func (w *Window) mapWriter() func(path string, in exportInputs) error {
 }
 
 // ExportMapFile writes the map of the valid scheme to path (.png, .svg or .pdf).
-func (w *Window) ExportMapFile(path string) error { return w.export("map", path, w.mapWriter()) }
+func (w *Window) ExportMapFile(path string) error { return w.files.export("map", path, w.mapWriter()) }
 
 // ExportMap asks where to write the map; the extension chosen picks the format.
 func (w *Window) ExportMap() {
 	write := w.mapWriter()
-	w.showExportDialog("Export the map (.png, .svg or .pdf)", ".png", "map", func(p string) { w.exportBackground("map", p, write) })
+	w.files.showExportDialog("Export the map (.png, .svg or .pdf)", ".png", "map", func(p string) { w.files.exportBackground("map", p, write) })
 }

@@ -120,7 +120,7 @@ func TestMapInReportCheckFollowsTheScheme(t *testing.T) {
 		assert.True(t, h.w.mapv.inReport.Checked, "the demo scheme asks for the map")
 		h.w.mapv.inReport.SetChecked(false)
 		assert.False(t, h.w.st.Valid.ReportMap)
-		assert.True(t, h.w.Dirty(), "a change to save")
+		assert.True(t, h.w.files.Dirty(), "a change to save")
 	})
 	h.settle()
 	h.ui(func() {

@@ -40,8 +40,8 @@ func fileItem(label string, sc fyne.Shortcut, available bool, run func()) *fyne.
 // mainMenu builds the File and Help menus.
 func (w *Window) mainMenu() *fyne.MainMenu {
 	recent := fyne.NewMenuItem("Open recent", nil)
-	recent.ChildMenu = w.recentMenu()
-	saveAs := fyne.NewMenuItem("Save scheme as…", w.SaveAs)
+	recent.ChildMenu = w.files.recentMenu()
+	saveAs := fyne.NewMenuItem("Save scheme as…", w.files.SaveAs)
 	saveAs.Shortcut = shortcutSaveAs
 	file := fyne.NewMenu("File",
 		fyne.NewMenuItem("New scheme", w.NewScheme),
@@ -51,9 +51,9 @@ func (w *Window) mainMenu() *fyne.MainMenu {
 		saveAs,
 		fyne.NewMenuItemSeparator(),
 		fileItem("Export client report (PDF)…", shortcutExport, ExportHook != nil, w.Export),
-		fyne.NewMenuItem("Export candidate table (CSV)…", w.ExportCSV),
-		fyne.NewMenuItem("Export chart (PNG, SVG or PDF)…", w.ExportChart),
-		fyne.NewMenuItem("Export plan sections (PNG, SVG or PDF)…", w.ExportSections),
+		fyne.NewMenuItem("Export candidate table (CSV)…", w.files.ExportCSV),
+		fyne.NewMenuItem("Export chart (PNG, SVG or PDF)…", w.files.ExportChart),
+		fyne.NewMenuItem("Export plan sections (PNG, SVG or PDF)…", w.files.ExportSections),
 		fyne.NewMenuItemSeparator(),
 		fyne.NewMenuItem("Start again from the demo scheme", func() { w.LoadScheme(DemoScheme()) }),
 	)
@@ -73,7 +73,7 @@ func (w *Window) addShortcuts() {
 	c := w.win.Canvas()
 	c.AddShortcut(shortcutOpen, func(fyne.Shortcut) { w.Open() })
 	c.AddShortcut(shortcutSave, func(fyne.Shortcut) { w.Save() })
-	c.AddShortcut(shortcutSaveAs, func(fyne.Shortcut) { w.SaveAs() })
+	c.AddShortcut(shortcutSaveAs, func(fyne.Shortcut) { w.files.SaveAs() })
 	c.AddShortcut(shortcutExport, func(fyne.Shortcut) { w.Export() })
 	c.AddShortcut(shortcutLength, func(fyne.Shortcut) { c.Focus(w.chart.slider) })
 	c.AddShortcut(shortcutUndo, func(fyne.Shortcut) { w.Undo() })
@@ -128,7 +128,7 @@ func (w *Window) LoadScheme(sc model.Scheme) {
 	w.record("load the scheme “"+strings.TrimSpace(sc.Name)+"”", before)
 	w.picks = picks{}
 	w.syncInputs()
-	w.setPath("")
+	w.files.setPath("")
 	w.after(out)
 	if out.Submit {
 		w.xsp.searching()

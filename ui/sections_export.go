@@ -41,18 +41,18 @@ func writeSections(path string, in exportInputs) error {
 }
 
 // ExportSectionsFile writes the plan sections of the valid scheme to path (.png, .svg or .pdf).
-func (w *Window) ExportSectionsFile(path string) error {
-	return w.export("plan sections", path, writeSections)
+func (f *filesPane) ExportSectionsFile(path string) error {
+	return f.export("plan sections", path, writeSections)
 }
 
 // ExportSections asks where to write the plan sections; the extension chosen picks the format.
-func (w *Window) ExportSections() {
-	w.showSaveDialog("Export the plan sections (.png, .svg or .pdf)", ".png", "-sections", func(p string) {
+func (f *filesPane) ExportSections() {
+	f.showSaveDialog("Export the plan sections (.png, .svg or .pdf)", ".png", "-sections", func(p string) {
 		switch strings.ToLower(filepath.Ext(p)) {
 		case ".png", ".svg", ".pdf":
 		default:
 			p += ".png"
 		}
-		w.exportBackground("plan sections", p, writeSections)
+		f.exportBackground("plan sections", p, writeSections)
 	})
 }

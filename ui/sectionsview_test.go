@@ -155,7 +155,7 @@ func TestExportSectionsFile(t *testing.T) {
 	for _, ext := range []string{".svg", ".png", ".pdf"} {
 		path := filepath.Join(dir, "sections"+ext)
 		var err error
-		h.ui(func() { err = h.w.ExportSectionsFile(path) })
+		h.ui(func() { err = h.w.files.ExportSectionsFile(path) })
 		require.NoError(t, err, ext)
 		b, err := os.ReadFile(path)
 		require.NoError(t, err)
@@ -171,7 +171,7 @@ func TestExportSectionsFile(t *testing.T) {
 		}
 	}
 	var err error
-	h.ui(func() { err = h.w.ExportSectionsFile(filepath.Join(dir, "sections.gif")) })
+	h.ui(func() { err = h.w.files.ExportSectionsFile(filepath.Join(dir, "sections.gif")) })
 	assert.Error(t, err)
 }
 

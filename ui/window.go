@@ -56,9 +56,9 @@ type Window struct {
 	status   *statusPane // the banner, the status line and the caution
 	fed      []pane      // the panes fed each snapshot shown (see views.go)
 
-	panes panes     // the draggable splits and the folded inputs
-	files fileState // the scheme's file, unsaved changes, recent files, autosave
-	ed    edits     // the undo history and the Edit menu
+	panes panes      // the draggable splits and the folded inputs
+	files *filesPane // the scheme's file, unsaved changes, recent files, autosave, exports
+	ed    edits      // the undo history and the Edit menu
 }
 
 // mailbox holds the newest snapshot the engine posted until the UI
@@ -102,7 +102,7 @@ func newWindow(a fyne.App, sc model.Scheme, do, doWait func(func())) *Window {
 	w.eng.OnCrossovers = func(x *Crossovers) { w.do(func() { w.applyCrossovers(x) }) }
 	w.eng.OnFrame = w.takeFrame
 	w.win.SetContent(w.build())
-	w.initFiles()
+	w.files = newFilesPane(w.win, a.Preferences(), w.st, w, w.do)
 	w.win.SetMainMenu(w.mainMenu())
 	w.addShortcuts()
 	w.syncInputs()
@@ -115,7 +115,7 @@ func newWindow(a fyne.App, sc model.Scheme, do, doWait func(func())) *Window {
 // Close stops the engine and closes the window.
 func (w *Window) Close() {
 	w.closing.Store(true)
-	w.stopAutosave()
+	w.files.stopAutosave()
 	unregisterWindow(w)
 	w.eng.Close()
 	w.mapv.close()
@@ -192,7 +192,7 @@ func (w *Window) after(out Outcome) {
 		w.chart.placeMarker()
 		w.submit()
 		w.scheduleStore()
-		w.autosaveChanged()
+		w.files.autosaveChanged()
 	}
 	w.updateTitle()
 }
@@ -298,16 +298,7 @@ func (w *Window) takeFrame(img *image.RGBA, info FrameInfo) {
 // updateTitle names the scheme in the window title, with a trailing " •"
 // while it has unsaved changes.
 func (w *Window) updateTitle() {
-	name := strings.TrimSpace(w.st.Valid.Name)
-	if name == "" {
-		name = "Untitled scheme"
-	}
-	t := "Upright — " + name
-	if w.Dirty() {
-		t += " •"
-	}
-	if t != w.files.lastTitle {
-		w.files.lastTitle = t
+	if t, changed := w.files.title(); changed {
 		w.win.SetTitle(t)
 	}
 }

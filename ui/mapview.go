@@ -27,8 +27,12 @@ import (
 // on its own goroutine, into reused buffers; a change of input cancels a
 // map being computed. Clicking a cell moves the scheme there.
 type mapView struct {
-	w        *Window
-	quiet    int // >0 while the view sets its own check box
+	link     drawLink
+	st       *State // read only: changes go through ed
+	ed       editor
+	onPoint  func(lengthMM, load float64, axis model.MapAxis) // a cell tapped
+	quiet    int                                              // >0 while the view sets its own check box
+	view     fyne.CanvasObject                                // the map with its footer
 	raster   *canvas.Raster
 	surface  *mapSurface
 	status   *widget.Label
@@ -43,15 +47,7 @@ type mapView struct {
 	specAxis model.MapAxis // and its vertical axis
 	haveSpec bool
 
-	mu      sync.Mutex
-	pending *mapJob
-	cancel  context.CancelFunc // cancels the map being computed
-	running *mapKey            // the key of the map being computed
-	latest  *mapKey            // the key of the last map computed to the end
-	wake    chan struct{}
-	quit    chan struct{}
-	done    chan struct{}
-	closed  bool
+	wk mapWorker // the goroutine that computes the maps
 
 	maps      atomic.Int64 // maps computed to the end
 	cancelled atomic.Int64 // maps cancelled by a change of input
@@ -108,14 +104,28 @@ func (s *mapSurface) Tapped(ev *fyne.PointEvent) {
 	}
 }
 
+// mapWorker is the map view's worker goroutine and what it is handed.
+type mapWorker struct {
+	mu      sync.Mutex
+	pending *mapJob
+	cancel  context.CancelFunc // cancels the map being computed
+	running *mapKey            // the key of the map being computed
+	latest  *mapKey            // the key of the last map computed to the end
+	wake    chan struct{}
+	quit    chan struct{}
+	done    chan struct{}
+	closed  bool
+}
+
 // mapViewEnv, set to "map", opens the window on the Map view (for screenshots).
 const mapViewEnv = "UPRIGHT_VIEW"
 
-// withMapView adds the Map view as a tab beside the chart (and the
-// Sections view, when the window has it) and starts the map's worker.
-func (w *Window) withMapView(tabs *container.AppTabs) fyne.CanvasObject {
-	mv := &mapView{w: w, wake: make(chan struct{}, 1), quit: make(chan struct{}), done: make(chan struct{})}
-	w.mapv = mv
+// newMapView builds the Map view reading st: a tapped cell is handed to
+// onPoint, the report check box changes the scheme through ed and the
+// Export button runs onExport. It starts the map's worker.
+func newMapView(link drawLink, st *State, ed editor, onPoint func(lengthMM, load float64, axis model.MapAxis), onExport func()) *mapView {
+	mv := &mapView{link: link, st: st, ed: ed, onPoint: onPoint}
+	mv.wk = mapWorker{wake: make(chan struct{}, 1), quit: make(chan struct{}), done: make(chan struct{})}
 	mv.raster = canvas.NewRaster(func(pw, ph int) image.Image {
 		if pw != mv.wantW || ph != mv.wantH {
 			mv.wantW, mv.wantH = pw, ph
@@ -133,32 +143,44 @@ func (w *Window) withMapView(tabs *container.AppTabs) fyne.CanvasObject {
 	mv.progress = widget.NewProgressBar()
 	mv.progress.Hide()
 	mv.inReport = widget.NewCheck("Map in the client report", func(on bool) {
-		if mv.quiet > 0 || on == w.st.Draft.ReportMap {
+		if mv.quiet > 0 || on == st.Draft.ReportMap {
 			return
 		}
-		w.step("map in the report", func() Outcome { return w.st.Update(func(sc *model.Scheme) { sc.ReportMap = on }) })
+		ed.Edit("map in the report", func(sc *model.Scheme) { sc.ReportMap = on })
 	})
-	export := widget.NewButton("Export…", w.ExportMap)
+	export := widget.NewButton("Export…", onExport)
 	foot := container.NewBorder(nil, nil, nil, container.NewHBox(mv.inReport, export, fixedWidth(160, mv.progress)), mv.status)
-	view := container.NewBorder(nil, foot, nil, nil, mv.surface)
-	item := container.NewTabItem("Map", view)
-	show := os.Getenv(mapViewEnv) == "map"
+	mv.view = container.NewBorder(nil, foot, nil, nil, mv.surface)
+	go mv.loop()
+	return mv
+}
+
+// setVisible starts or stops following the scheme.
+func (mv *mapView) setVisible(on bool) {
+	mv.visible = on
+	mv.submit()
+}
+
+// withMapView adds the Map view as a tab after Chart and Sections, then the
+// extra views.
+func (w *Window) withMapView(tabs *container.AppTabs) fyne.CanvasObject {
+	mv := newMapView(w.link(), w.st, w, w.moveMapPoint, w.ExportMap)
+	w.mapv = mv
+	item := container.NewTabItem("Map", mv.view)
 	prev := tabs.OnSelected
 	tabs.Append(item)
 	tabs.OnSelected = func(t *container.TabItem) {
 		if prev != nil {
 			prev(t)
 		}
-		mv.visible = t == item
-		w.roomForMap(mv.visible)
-		mv.submit()
+		w.roomForMap(t == item)
+		mv.setVisible(t == item)
 	}
-	if show {
+	// UPRIGHT_VIEW=map opens on the Map view (screenshots, demonstrations).
+	if os.Getenv(mapViewEnv) == "map" {
 		tabs.Select(item)
 	}
 	w.addViews(tabs)
-	mv.visible = show
-	go mv.loop()
 	return tabs
 }
 
@@ -167,18 +189,18 @@ func (mv *mapView) close() {
 	if mv == nil {
 		return
 	}
-	mv.mu.Lock()
-	if mv.closed {
-		mv.mu.Unlock()
+	mv.wk.mu.Lock()
+	if mv.wk.closed {
+		mv.wk.mu.Unlock()
 		return
 	}
-	mv.closed = true
-	if mv.cancel != nil {
-		mv.cancel()
+	mv.wk.closed = true
+	if mv.wk.cancel != nil {
+		mv.wk.cancel()
 	}
-	mv.mu.Unlock()
-	close(mv.quit)
-	<-mv.done
+	mv.wk.mu.Unlock()
+	close(mv.wk.quit)
+	<-mv.wk.done
 }
 
 // mapSpecFor keeps the grid still while the scheme's own point stays in it:
@@ -210,7 +232,7 @@ func (mv *mapView) submit() {
 	if mv == nil {
 		return
 	}
-	w := mv.w
+	w := mv
 	if w.st.HaveValid && mv.inReport.Checked != w.st.Valid.ReportMap {
 		mv.quiet++
 		mv.inReport.SetChecked(w.st.Valid.ReportMap)
@@ -222,22 +244,18 @@ func (mv *mapView) submit() {
 	sc := w.st.Valid
 	sp := mv.mapSpecFor(&sc, w.st.Range)
 	mv.spec, mv.haveSpec, mv.specAxis = sp, true, model.MapAxisOf(&sc)
-	scale := float32(1)
-	if c := w.win.Canvas(); c != nil {
-		scale = c.Scale()
-	}
-	job := &mapJob{key: keyOf(sc, sp), sc: sc, w: mv.wantW, h: mv.wantH, dpi: chartDPI(scale), schemeGn: w.st.SchemeGen}
-	mv.mu.Lock()
-	if mv.closed {
-		mv.mu.Unlock()
+	job := &mapJob{key: keyOf(sc, sp), sc: sc, w: mv.wantW, h: mv.wantH, dpi: chartDPI(mv.link.scale()), schemeGn: w.st.SchemeGen}
+	mv.wk.mu.Lock()
+	if mv.wk.closed {
+		mv.wk.mu.Unlock()
 		return
 	}
-	mv.pending = job
-	if mv.cancel != nil && mv.running != nil && !reflect.DeepEqual(*mv.running, job.key) {
-		mv.cancel()
+	mv.wk.pending = job
+	if mv.wk.cancel != nil && mv.wk.running != nil && !reflect.DeepEqual(*mv.wk.running, job.key) {
+		mv.wk.cancel()
 	}
-	mv.mu.Unlock()
-	poke(mv.wake)
+	mv.wk.mu.Unlock()
+	poke(mv.wk.wake)
 }
 
 // keyOf returns the map key of a scheme and grid: the scheme's own length
@@ -259,7 +277,7 @@ func keyOf(sc model.Scheme, sp model.MapSpec) mapKey {
 // loop is the map worker: it takes the latest job, computes the map when
 // its key changed (cancellable), and draws it with the scheme's point.
 func (mv *mapView) loop() {
-	defer close(mv.done)
+	defer close(mv.wk.done)
 	var (
 		mp     model.Mapper
 		ras    *plots.MapRaster
@@ -269,37 +287,37 @@ func (mv *mapView) loop() {
 	)
 	for {
 		select {
-		case <-mv.quit:
+		case <-mv.wk.quit:
 			return
-		case <-mv.wake:
+		case <-mv.wk.wake:
 		}
-		mv.mu.Lock()
-		job := mv.pending
-		mv.pending = nil
+		mv.wk.mu.Lock()
+		job := mv.wk.pending
+		mv.wk.pending = nil
 		var ctx context.Context
 		if job != nil && (haveK == nil || !reflect.DeepEqual(*haveK, job.key)) {
-			ctx, mv.cancel = context.WithCancel(context.Background())
+			ctx, mv.wk.cancel = context.WithCancel(context.Background())
 			k := job.key
-			mv.running = &k
+			mv.wk.running = &k
 		}
-		mv.mu.Unlock()
+		mv.wk.mu.Unlock()
 		if job == nil {
 			continue
 		}
 		if ctx != nil {
 			have, haveK, failed = nil, nil, nil
-			mv.w.do(func() {
+			mv.link.do(func() {
 				mv.status.SetText("Computing the map…")
 				mv.progress.SetValue(0)
 				mv.progress.Show()
 			})
 			g, err := mp.Compute(ctx, job.sc, job.key.spec, func(done, total int) {
-				mv.w.do(func() { mv.progress.SetValue(float64(done) / float64(total)) })
+				mv.link.do(func() { mv.progress.SetValue(float64(done) / float64(total)) })
 			})
-			mv.mu.Lock()
-			mv.cancel()
-			mv.cancel, mv.running = nil, nil
-			mv.mu.Unlock()
+			mv.wk.mu.Lock()
+			mv.wk.cancel()
+			mv.wk.cancel, mv.wk.running = nil, nil
+			mv.wk.mu.Unlock()
 			if errors.Is(err, context.Canceled) {
 				mv.cancelled.Add(1)
 				continue // a newer job is pending
@@ -310,15 +328,15 @@ func (mv *mapView) loop() {
 				have = g
 				k := job.key
 				haveK = &k
-				mv.mu.Lock()
-				mv.latest = &k
-				mv.mu.Unlock()
+				mv.wk.mu.Lock()
+				mv.wk.latest = &k
+				mv.wk.mu.Unlock()
 				mv.maps.Add(1)
 			}
 		}
 		if failed != nil {
 			msg := "The map could not be computed: " + failed.Error()
-			mv.w.do(func() {
+			mv.link.do(func() {
 				mv.progress.Hide()
 				mv.status.SetText(msg)
 			})
@@ -348,17 +366,17 @@ func (mv *mapView) loop() {
 		pm := chart.Map(have, &job.sc, "")
 		if err := ras.RenderMap(&pm); err != nil {
 			msg := "The map could not be drawn: " + err.Error()
-			mv.w.do(func() { mv.status.SetText(msg) })
+			mv.link.do(func() { mv.status.SetText(msg) })
 			continue
 		}
 		geo := mapGeometry{ok: true, area: ras.CellsArea(), imgW: job.w, imgH: job.h, axis: have.Axis,
 			lengthsMM: append([]float64(nil), have.LengthsMM...), loads: append([]float64(nil), have.Loads...)}
 		status := mapStatus(have)
 		img := ras.Image()
-		if mv.w.closing.Load() {
+		if mv.link.closing.Load() {
 			return
 		}
-		mv.w.doWait(func() {
+		mv.link.doWait(func() {
 			b := img.Bounds()
 			if mv.front == nil || mv.front.Bounds() != b {
 				mv.front = image.NewRGBA(b)
@@ -399,7 +417,7 @@ func (mv *mapView) tapped(pos fyne.Position, size fyne.Size) {
 	if !ok {
 		return
 	}
-	mv.w.moveMapPoint(g.lengthsMM[j], g.loads[i], g.axis)
+	mv.onPoint(g.lengthsMM[j], g.loads[i], g.axis)
 }
 
 // cellAt returns the row and column of the cell at an image pixel.

@@ -93,9 +93,9 @@ func TestMapViewFollowsAChangeOfInput(t *testing.T) {
 	var want mapKey
 	h.ui(func() { want = keyOf(h.w.st.Valid, mv.spec) })
 	waitFor(h, func() bool {
-		mv.mu.Lock()
-		defer mv.mu.Unlock()
-		return mv.latest != nil && reflect.DeepEqual(*mv.latest, want) && mv.pending == nil && mv.running == nil
+		mv.wk.mu.Lock()
+		defer mv.wk.mu.Unlock()
+		return mv.wk.latest != nil && reflect.DeepEqual(*mv.wk.latest, want) && mv.wk.pending == nil && mv.wk.running == nil
 	}, "the map of the changed scheme")
 	// The first scheme's map was computed, cancelled, or replaced before it started.
 	assert.LessOrEqual(t, mv.maps.Load()+mv.cancelled.Load(), int64(2))

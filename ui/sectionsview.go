@@ -25,13 +25,15 @@ import (
 // selection, the units, the image size), so a slider drag that keeps the
 // same sizes costs nothing. Tapping a section selects that candidate.
 type sectionsView struct {
-	w       *Window
-	area    *sectionsArea
-	raster  *canvas.Raster
-	visible bool
-	wantW   int
-	wantH   int
-	last    *Snapshot // the snapshot last handed over, for a redraw on resize or when shown
+	link     drawLink
+	selected func() string            // the candidate selected in the window
+	onSelect func(designation string) // a section tapped
+	area     *sectionsArea
+	raster   *canvas.Raster
+	visible  bool
+	wantW    int
+	wantH    int
+	last     *Snapshot // the snapshot last handed over, for a redraw on resize or when shown
 
 	// shown (UI goroutine)
 	front  *image.RGBA
@@ -58,8 +60,8 @@ type sectionsJob struct {
 }
 
 // newSectionsView builds the view and starts its drawing goroutine.
-func newSectionsView(w *Window) *sectionsView {
-	v := &sectionsView{w: w, wake: make(chan struct{}, 1), quit: make(chan struct{})}
+func newSectionsView(link drawLink, selected func() string, onSelect func(string)) *sectionsView {
+	v := &sectionsView{link: link, selected: selected, onSelect: onSelect, wake: make(chan struct{}, 1), quit: make(chan struct{})}
 	v.raster = canvas.NewRaster(func(pw, ph int) image.Image {
 		if pw != v.wantW || ph != v.wantH {
 			v.wantW, v.wantH = pw, ph
@@ -78,7 +80,7 @@ func newSectionsView(w *Window) *sectionsView {
 
 // plotViews puts the chart and the Sections view in tabs above the slider.
 func (w *Window) plotViews(chartView fyne.CanvasObject) *container.AppTabs {
-	w.sections = newSectionsView(w)
+	w.sections = newSectionsView(w.link(), func() string { return w.picks.selected }, w.Select)
 	w.fed = append(w.fed, w.sections)
 	tabs := container.NewAppTabs(
 		container.NewTabItem("Chart", chartView),
@@ -126,12 +128,8 @@ func (v *sectionsView) request() {
 	if !v.visible || v.last == nil || v.wantW < 1 || v.wantH < 1 {
 		return
 	}
-	scale := float32(1)
-	if c := v.w.win.Canvas(); c != nil {
-		scale = c.Scale()
-	}
 	v.mu.Lock()
-	v.job = &sectionsJob{snap: v.last, selected: v.w.picks.selected, w: v.wantW, h: v.wantH, dpi: chartDPI(scale)}
+	v.job = &sectionsJob{snap: v.last, selected: v.selected(), w: v.wantW, h: v.wantH, dpi: chartDPI(v.link.scale())}
 	v.mu.Unlock()
 	poke(v.wake)
 }
@@ -202,11 +200,11 @@ func (v *sectionsView) draw(j *sectionsJob) {
 	}
 	v.renders.Add(1)
 	v.lastKey = key
-	if v.w.closing.Load() || v.closed.Load() {
+	if v.link.closing.Load() || v.closed.Load() {
 		return
 	}
 	img := v.rast.Image()
-	v.w.doWait(func() {
+	v.link.doWait(func() {
 		b := img.Bounds()
 		if v.front == nil || v.front.Bounds() != b {
 			v.front = image.NewRGBA(b)
@@ -254,7 +252,7 @@ func (a *sectionsArea) Cursor() desktop.Cursor { return desktop.PointerCursor }
 // Tapped selects the candidate whose section (or its labels) was tapped.
 func (a *sectionsArea) Tapped(e *fyne.PointEvent) {
 	if d := a.v.pick(e.Position, a.Size()); d != "" {
-		a.v.w.Select(d)
+		a.v.onSelect(d)
 	}
 }
 

@@ -31,6 +31,7 @@ func CSVHeader(sys units.System) []string {
 		"weight_" + wu, "column_weight_" + mu, "capacity_" + fu, "demand_" + fu, "utilization",
 		"governing", "slenderness", "carbon_kgCO2e", "governing_combination", "slenderness_limit",
 		"fire_rating_h", "fire_system", "fire_provided_h", "bare_width_" + du, "bare_depth_" + du,
+		"caution",
 	}
 }
 
@@ -57,8 +58,8 @@ func num(v float64, decimals int) string {
 // a comma, quote or line break), in the scheme's unit system: one header row
 // (CSVHeader), then each family's candidates in ranked order, working sizes
 // first. Rank counts within a family; utilization is empty when the method
-// does not permit the candidate. A model without families writes only the
-// header.
+// does not permit the candidate; the last column of every row is the
+// caution (model.Caution). A model without families writes only the header.
 func WriteCSV(w io.Writer, m *model.Model, opt CSVOptions) error {
 	if m == nil {
 		return errors.New("csv: no model given (nil *model.Model)")
@@ -130,6 +131,9 @@ func WriteCSV(w io.Writer, m *model.Model, opt CSVOptions) error {
 				governingCombination(m, r, sc.Setting), r.Limit,
 			}
 			rec = append(rec, fireCSVCells(st, dim)...)
+			// Every row carries the caution, so a row copied out of the
+			// table still says it is preliminary sizing.
+			rec = append(rec, model.Caution)
 			if err := cw.Write(rec); err != nil {
 				return fmt.Errorf("csv: %w", err)
 			}

@@ -62,6 +62,7 @@ func TestCSVTableMatchesTheModel(t *testing.T) {
 			}
 			for _, rec := range recs[1:] {
 				assert.Equal(t, model.StatusWorks, rec[col["status"]])
+				assert.Equal(t, model.Caution, rec[col["caution"]], "every row says it is preliminary sizing")
 				u, err := strconv.ParseFloat(rec[col["utilization"]], 64)
 				require.NoError(t, err)
 				assert.LessOrEqual(t, u, 1.0)

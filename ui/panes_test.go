@@ -1,0 +1,297 @@
+package ui
+
+import (
+	"context"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+
+	"fyne.io/fyne/v2"
+	"fyne.io/fyne/v2/container"
+	"fyne.io/fyne/v2/test"
+	"fyne.io/fyne/v2/widget"
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"upright/ui/model"
+	"upright/ui/units"
+)
+
+// Each pane is built here on its own, with stand-ins for the window: no
+// other pane and no Window exist in these tests.
+
+// stubStepper applies every edit to its state and records it.
+type stubStepper struct {
+	st    *State
+	steps []string // the what of each Edit and Step ("" when described later)
+	drags int      // changes made during drags
+	ends  int      // drags ended
+}
+
+func (s *stubStepper) Edit(what string, change func(sc *model.Scheme)) {
+	s.steps = append(s.steps, what)
+	s.st.Update(change)
+}
+
+func (s *stubStepper) Step(what string, apply func(st *State) Outcome) {
+	s.steps = append(s.steps, what)
+	apply(s.st)
+}
+
+func (s *stubStepper) Drag(apply func(st *State) Outcome) {
+	s.drags++
+	apply(s.st)
+}
+
+func (s *stubStepper) EndDrag() { s.ends++ }
+
+// now runs a function at once: the tests are the UI goroutine.
+func now(f func()) { f() }
+
+// snapshotOf evaluates a scheme as the engine would, with the trace of
+// selected (when not empty).
+func snapshotOf(t *testing.T, sc model.Scheme, selected string) *Snapshot {
+	t.Helper()
+	m, err := model.New(sc)
+	require.NoError(t, err)
+	res, err := m.Evaluate(context.Background(), sc.Setting)
+	require.NoError(t, err)
+	s := &Snapshot{Gen: 1, SchemeGen: 1, Model: m, Result: res}
+	if selected != "" {
+		fi, i, ok := m.Find(selected)
+		require.True(t, ok, selected)
+		d := m.Detail(fi, i, sc.Setting)
+		s.Detail, s.DetailOf = &d, selected
+	}
+	return s
+}
+
+// showAlone puts one pane's content in a test window of its own.
+func showAlone(t *testing.T, o fyne.CanvasObject, size fyne.Size) fyne.Window {
+	w := test.NewTempWindow(t, o)
+	w.Resize(size.Max(o.MinSize()))
+	return w
+}
+
+func TestInputsPaneAlone(t *testing.T) {
+	a := test.NewTempApp(t)
+	st := NewState(paneScheme())
+	ed := &stubStepper{st: st}
+	p := newInputsPane(st, ed, now, nil, a.Preferences())
+	p.sync()
+	showAlone(t, p.Object(), fyne.NewSize(320, 1200))
+
+	// A typed load, committed, is one step; a bare number takes the unit shown.
+	f := p.fs.byID["load"]
+	require.NotNil(t, f)
+	f.entry.SetText("900")
+	f.entry.commit()
+	require.Len(t, ed.steps, 1)
+	assert.InDelta(t, 900*4448.2216152605, st.Draft.Load.DirectN, 1, "900 kip (1 kip = 4448.2216152605 N, from the definition of the pound-force)")
+	assert.Equal(t, "900 kip", f.entry.Text, "the field shows the number with the unit it took")
+
+	// A sketch tapped changes the ends as one step; the pane sets no widget of its own as a change.
+	test.Tap(p.sketches[model.FixedFixed])
+	require.Len(t, ed.steps, 2)
+	assert.Equal(t, model.FixedFixed, st.Draft.Setting.Ends)
+	p.sync()
+	assert.Len(t, ed.steps, 2, "setting the widgets from the state is no edit")
+
+	// A problem is shown under its field.
+	f.entry.SetText("-5 kip")
+	f.entry.commit()
+	p.refresh()
+	assert.True(t, f.err.Visible(), "a negative load is refused under the field")
+	assert.NotEmpty(t, f.err.Text)
+
+	// The load summary follows the snapshot it is fed.
+	p.Show(snapshotOf(t, paneScheme(), ""))
+	assert.Contains(t, p.load.summary.Text, "Demand")
+}
+
+func TestChartPaneAlone(t *testing.T) {
+	test.NewTempApp(t)
+	sc := paneScheme()
+	st := NewState(sc)
+	ed := &stubStepper{st: st}
+	resized := 0
+	p := newChartPane(st, ed, now, nil, func() { resized++ })
+	p.refresh(true)
+	win := showAlone(t, container2(p.Object(), p.Controls()), fyne.NewSize(700, 400))
+	win.Canvas().Refresh(p.Object())
+	test.WidgetRenderer(p.slider) // lays the slider out
+
+	// A drag is changes through Drag, then one EndDrag: one undoable step.
+	// What the slider does while dragged: a change per move, one end.
+	for _, ft := range []float64{14.0, 15.02, 16.5} {
+		p.slider.Value = ft
+		p.slider.OnChanged(ft)
+	}
+	p.slider.OnChangeEnded(16.5)
+	assert.Equal(t, 3, ed.drags)
+	assert.Equal(t, 1, ed.ends)
+	assert.Empty(t, ed.steps, "a drag files no step of its own until it ends")
+	assert.InDelta(t, 16.5*304.8, st.Draft.Setting.LengthMM, 0.01, "16'-6\" (1 ft = 304.8 mm, exact)")
+
+	// The slider snaps to whole inches: 15.02 ft is 15'-0.24", taken as 15'-0".
+	assert.InDelta(t, 15*304.8, fromDisplay(p.slider.snap(15.02, st.Sys(), false), st.Sys()), 1e-9)
+
+	// The length field commits as one step and shows its unit.
+	f := p.fs.byID["length"]
+	f.entry.SetText("5.5m")
+	f.entry.commit()
+	assert.Equal(t, []string{""}, ed.steps)
+	assert.InDelta(t, 5500, st.Draft.Setting.LengthMM, 1e-9)
+	p.refresh(false)
+	assert.InDelta(t, 5500/304.8, p.slider.Value, 1e-9, "the slider follows the typed length")
+}
+
+// container2 stacks two objects for a pane shown alone.
+func container2(top, bottom fyne.CanvasObject) fyne.CanvasObject {
+	return container.New(&vStackLayout{}, top, bottom)
+}
+
+// vStackLayout gives the first object what the second leaves.
+type vStackLayout struct{}
+
+func (vStackLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	h := objs[1].MinSize().Height
+	objs[0].Move(fyne.NewPos(0, 0))
+	objs[0].Resize(fyne.NewSize(size.Width, size.Height-h))
+	objs[1].Move(fyne.NewPos(0, size.Height-h))
+	objs[1].Resize(fyne.NewSize(size.Width, h))
+}
+
+func (vStackLayout) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	a, b := objs[0].MinSize(), objs[1].MinSize()
+	return fyne.NewSize(max(a.Width, b.Width), a.Height+b.Height)
+}
+
+func TestResultsPaneAlone(t *testing.T) {
+	test.NewTempApp(t)
+	var picked []string
+	p := newResultsPane(func() (units.System, model.Method) { return units.US, model.LRFD }, func(d string) { picked = append(picked, d) })
+	showAlone(t, p.Object(), fyne.NewSize(900, 500))
+	s := snapshotOf(t, paneScheme(), "")
+	p.Show(s)
+	require.NotEmpty(t, p.rows)
+
+	// Whether a row works is a word or symbol in the Status column, never only a colour.
+	col := p.tableColOf("status")
+	require.Positive(t, col, "the Status column is shown")
+	for i := range p.rows {
+		txt := columns[columnIndex("status")].cell(&p.ctx, &p.rows[i])
+		assert.Equal(t, status(&p.rows[i]), txt)
+		assert.Contains(t, []string{StatusWorks, StatusFails, StatusNotPermitted}, txt, "a word with its mark")
+	}
+
+	// A row chosen is handed to the window; the pane does not select it itself.
+	p.table.Select(widget.TableCellID{Row: 0, Col: 1})
+	require.Len(t, picked, 1)
+	assert.Equal(t, p.rows[0].Static.Designation, picked[0])
+
+	// Sorting by weight puts the lightest first; again reverses it.
+	wc := columnIndex("weight")
+	p.SortBy(wc)
+	first := p.rows[0].Static.MassKgPerM
+	p.SortBy(wc)
+	assert.GreaterOrEqual(t, p.rows[0].Static.MassKgPerM, first)
+}
+
+func TestCalcPaneAlone(t *testing.T) {
+	test.NewTempApp(t)
+	pins, clears := 0, 0
+	p := newCalcPane(func() { pins++ }, func() { clears++ })
+	showAlone(t, p.Object(), fyne.NewSize(500, 600))
+	assert.True(t, p.pinButton.Disabled(), "nothing to pin before a row is chosen")
+
+	s := snapshotOf(t, paneScheme(), "")
+	d := s.Result.Families[0].Rows[0].Static.Designation
+	p.setPicks(d, nil)
+	assert.Contains(t, p.title.Text, "working")
+	p.Show(snapshotOf(t, paneScheme(), d))
+	assert.True(t, strings.HasPrefix(p.title.Text, d), p.title.Text)
+	assert.NotEmpty(t, p.stepRows, "the trace is listed")
+	assert.NotEmpty(t, p.loadRows, "the load takedown is listed")
+	for _, r := range p.loadRows {
+		if r.Unit == "N" {
+			assert.Equal(t, "kN", stepText(r, 2, units.SI), "SI forces are shown in kN")
+		}
+	}
+	test.Tap(p.pinButton)
+	assert.Equal(t, 1, pins)
+	p.setPicks(d, []string{d})
+	assert.Equal(t, "Unpin from chart", p.pinButton.Text)
+	test.Tap(p.clearPins)
+	assert.Equal(t, 1, clears)
+}
+
+func TestStatusPaneAlone(t *testing.T) {
+	test.NewTempApp(t)
+	p := newStatusPane()
+	showAlone(t, p.Object(), fyne.NewSize(1000, 80))
+	h := p.Object().MinSize().Height
+
+	p.setBanner("Fix the length.")
+	assert.Equal(t, "Fix the length.", p.BannerText())
+	p.setBanner("")
+	assert.Empty(t, p.BannerText(), "a cleared banner is hidden")
+
+	p.say(strings.Repeat("a long message that wraps at words ", 8))
+	assert.Equal(t, h, p.Object().MinSize().Height, "a long message moves nothing: the status line keeps its two lines")
+	p.Show(snapshotOf(t, paneScheme(), ""))
+	assert.Contains(t, p.status.Text, "a long message", "a kept message is not replaced by the evaluation summary")
+}
+
+// stubHost stands in for the window behind the files pane.
+type stubHost struct {
+	st     *State
+	loaded []model.Scheme
+	said   []string
+	titles int
+	menus  int
+}
+
+func (h *stubHost) LoadScheme(sc model.Scheme) { h.loaded = append(h.loaded, sc); h.st.Load(sc) }
+func (h *stubHost) exportInputs() (exportInputs, error) {
+	return exportInputs{sc: h.st.Valid, rng: h.st.Range, all: true}, nil
+}
+func (h *stubHost) notify(msg string) { h.said = append(h.said, msg) }
+func (h *stubHost) updateTitle()      { h.titles++ }
+func (h *stubHost) menuChanged()      { h.menus++ }
+func (h *stubHost) closed() bool      { return false }
+
+func TestFilesPaneAlone(t *testing.T) {
+	a := test.NewTempApp(t)
+	win := test.NewTempWindow(t, widget.NewLabel(""))
+	st := NewState(paneScheme())
+	host := &stubHost{st: st}
+	p := newFilesPane(win, a.Preferences(), st, host, now)
+	dir := t.TempDir()
+
+	path := filepath.Join(dir, "tower.upright.json")
+	require.NoError(t, p.SaveFile(path))
+	assert.False(t, p.Dirty())
+	assert.Equal(t, path, p.Path())
+	assert.Equal(t, []string{path}, p.RecentPaths())
+	assert.Positive(t, host.menus, "the recent list changed the menu")
+
+	// Opening goes through the host (one undoable step in the window).
+	require.NoError(t, p.OpenFile(path))
+	require.Len(t, host.loaded, 1)
+
+	// A corrupt file is refused, the scheme on screen stays and nothing is loaded.
+	bad := filepath.Join(dir, "bad.upright.json")
+	require.NoError(t, os.WriteFile(bad, []byte("{not json"), 0o644))
+	assert.Error(t, p.OpenFile(bad))
+	assert.Len(t, host.loaded, 1)
+	assert.Equal(t, path, p.Path(), "the scheme keeps its file")
+
+	// An export writes through the host's inputs.
+	csv := filepath.Join(dir, "table.csv")
+	require.NoError(t, p.ExportCSVFile(csv))
+	b, err := os.ReadFile(csv)
+	require.NoError(t, err)
+	assert.True(t, strings.Contains(string(b), model.Caution), "the CSV carries the caution")
+}

@@ -3,6 +3,7 @@ package ui
 import (
 	"time"
 
+	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/widget"
 )
 
@@ -75,3 +76,19 @@ func (e *commitEntry) FocusLost() {
 
 // Pending reports whether typed text waits to be committed.
 func (e *commitEntry) Pending() bool { return e.pending }
+
+// TypedShortcut undoes and redoes typing while there is typed text to
+// commit; once the text is committed, Ctrl+Z and Ctrl+Y undo and redo the
+// scheme's steps, as they do with any other widget focused.
+func (e *commitEntry) TypedShortcut(sc fyne.Shortcut) {
+	switch sc.(type) {
+	case *fyne.ShortcutUndo, *fyne.ShortcutRedo:
+		if !e.pending {
+			if c, ok := fyne.CurrentApp().Driver().CanvasForObject(e).(interface{ TypedShortcut(fyne.Shortcut) }); ok {
+				c.TypedShortcut(sc)
+				return
+			}
+		}
+	}
+	e.Entry.TypedShortcut(sc)
+}

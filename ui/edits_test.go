@@ -186,3 +186,35 @@ func TestKeyHelpSaysTheShownUnit(t *testing.T) {
 	assert.Contains(t, keyHelp(units.US), "by 1 in")
 	assert.Contains(t, keyHelp(units.US), "Ctrl+Z")
 }
+
+// A desktop driver sends Ctrl+Z and Ctrl+Y as the standard undo and redo
+// shortcuts, to the focused widget when it takes shortcuts: with nothing
+// focused, and with a field focused whose text is committed, they undo and
+// redo the scheme; while typed text waits, Ctrl+Z undoes the typing.
+func TestStandardUndoShortcutsReachTheScheme(t *testing.T) {
+	sc := DemoScheme()
+	h := newHarness(t, sc)
+	h.typeInto("length", "20 ft")
+	h.ui(func() {
+		c := h.w.win.Canvas()
+		c.Unfocus()
+		c.(interface{ TypedShortcut(fyne.Shortcut) }).TypedShortcut(&fyne.ShortcutUndo{})
+		assert.InDelta(t, sc.Setting.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Z with nothing focused")
+		c.(interface{ TypedShortcut(fyne.Shortcut) }).TypedShortcut(&fyne.ShortcutRedo{})
+		assert.InDelta(t, 20*units.MMPerFoot, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Y with nothing focused")
+
+		e := h.w.field("length").entry
+		c.Focus(e)
+		e.TypedShortcut(&fyne.ShortcutUndo{})
+		assert.InDelta(t, sc.Setting.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Z in a field whose text is committed undoes the step")
+		e.TypedShortcut(&fyne.ShortcutRedo{})
+		assert.InDelta(t, 20*units.MMPerFoot, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Y in it redoes it")
+
+		test.Type(e, "5")
+		require.True(t, e.Pending())
+		steps := len(h.w.ed.hist.undo)
+		e.TypedShortcut(&fyne.ShortcutUndo{})
+		assert.Equal(t, steps, len(h.w.ed.hist.undo), "with typing pending, Ctrl+Z is the field's own")
+		assert.InDelta(t, 20*units.MMPerFoot, h.w.st.Valid.Setting.LengthMM, 1e-6)
+	})
+}

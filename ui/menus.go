@@ -79,6 +79,10 @@ func (w *Window) addShortcuts() {
 	c.AddShortcut(shortcutUndo, func(fyne.Shortcut) { w.Undo() })
 	c.AddShortcut(shortcutRedo, func(fyne.Shortcut) { w.Redo() })
 	c.AddShortcut(shortcutRedoY, func(fyne.Shortcut) { w.Redo() })
+	// A desktop driver reports Ctrl+Z and Ctrl+Y as the standard undo and
+	// redo shortcuts rather than as key combinations.
+	c.AddShortcut(&fyne.ShortcutUndo{}, func(fyne.Shortcut) { w.Undo() })
+	c.AddShortcut(&fyne.ShortcutRedo{}, func(fyne.Shortcut) { w.Redo() })
 }
 
 // notAvailable tells the user a file action is not in this build.

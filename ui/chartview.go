@@ -165,6 +165,16 @@ func (p *chartPane) refresh(rebuild bool) {
 	p.syncSlider()
 }
 
+// sync sets the slider and the length field from the state, even a field
+// with the focus (an undo, a file opened).
+func (p *chartPane) sync() {
+	p.configureSlider()
+	for id, f := range p.fs.byID {
+		p.fs.setForce(f, p.st.Text(id))
+	}
+	p.fs.showErrors()
+}
+
 // size is the chart image size the pane asks the engine for.
 func (p *chartPane) size() (int, int) { return p.wantW, p.wantH }
 

@@ -207,6 +207,7 @@ func TestStandardUndoShortcutsReachTheScheme(t *testing.T) {
 		c.Focus(e)
 		e.TypedShortcut(&fyne.ShortcutUndo{})
 		assert.InDelta(t, sc.Setting.LengthMM, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Z in a field whose text is committed undoes the step")
+		assert.Equal(t, units.Length(sc.Setting.LengthMM, units.US), e.Text, "the focused field shows the length undone")
 		e.TypedShortcut(&fyne.ShortcutRedo{})
 		assert.InDelta(t, 20*units.MMPerFoot, h.w.st.Valid.Setting.LengthMM, 1e-6, "Ctrl+Y in it redoes it")
 

@@ -151,7 +151,7 @@ func (w *Window) focused() fyne.Focusable {
 // syncInputs sets every input widget from the state.
 func (w *Window) syncInputs() {
 	w.inputs.sync()
-	w.chart.refresh(true)
+	w.chart.sync()
 }
 
 // sys is the display system of the inputs.

@@ -14,13 +14,15 @@ import (
 	"upright/ui/model"
 )
 
-// Every export carries the caution: the CSV on stderr, the chart image as a
-// footer line along its bottom edge.
+// Every export carries the caution: the CSV in its last column (a row copied
+// out of the file keeps it) and on stderr, the chart image as a footer line
+// along its bottom edge.
 func TestExportsCarryTheCaution(t *testing.T) {
 	code, out, errOut := run("table", "--length", "4m", "--load", "1800kN")
 	require.Equal(t, 0, code, errOut)
 	assert.Contains(t, errOut, model.Caution)
-	assert.NotContains(t, out, "licensed", "the CSV itself stays data only")
+	assert.Contains(t, out, ",caution\r\n", "the header names the caution column")
+	assert.Contains(t, out, ","+model.Caution+"\r\n", "each row ends with the caution")
 
 	dir := t.TempDir()
 	code, _, errOut = run("table", "--length", "4m", "--load", "1800kN", "--csv", filepath.Join(dir, "t.csv"))

@@ -219,6 +219,9 @@ func parseNumber(flagName, s, accepted string, lo, hi float64) (float64, error) 
 
 func flagErr(flagName, value string, err error) error {
 	if pe, ok := err.(*units.ParseError); ok {
+		if pe.Reason != "" {
+			return usagef("--%s %s; give %s", flagName, pe.Why(), pe.Accepted)
+		}
 		return usagef("--%s %q: not accepted; give %s", flagName, value, pe.Accepted)
 	}
 	return usagef("--%s %q: %v", flagName, value, err)

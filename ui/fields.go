@@ -278,6 +278,9 @@ func (f *fieldSpec) parseText(text string, sys units.System) (float64, error) {
 	if err != nil {
 		var pe *units.ParseError
 		if errors.As(err, &pe) {
+			if pe.Reason != "" {
+				return 0, fmt.Errorf("%s; give %s", pe.Why(), f.accepted(sys))
+			}
 			return 0, bad()
 		}
 		return 0, err

@@ -63,7 +63,7 @@ func newSchemeFlags(name string, out io.Writer) *schemeFlags {
 	fs.StringVar(&f.ends, "ends", "", "end conditions: pinned-pinned, fixed-fixed, fixed-pinned, fixed-guided, pinned-guided, fixed-free")
 	fs.StringVar(&f.k, "k", "", "effective-length factor typed in (overrides --ends' recommended value)")
 	fs.StringVar(&f.weak, "weak-length", "", "weak-axis unbraced length (a brace); defaults to --length")
-	fs.StringVar(&f.load, "load", "", "axial load, e.g. 1800kN, 400kip (the governing factored load for LRFD, the service load for ASD)")
+	fs.StringVar(&f.load, "load", "", "axial load, e.g. 1800kN, 400kip, 180tonne; never a bare k or t, which could be kip or kN, tonne or US ton (the governing factored load for LRFD, the service load for ASD)")
 	fs.StringVar(&f.deadShare, "dead-share", "", "part of a typed load's service load that is dead, as a fraction or percent, e.g. 0.6, 60% or 2/3 (default 2/3); D, L and every combination follow from it")
 	fs.BoolVar(&f.twistBraced, "twist-braced", false, "the weak-axis braces also restrain twisting, so the steel torsional length Lcz is the weak-axis length (default: the full length)")
 	fs.StringVar(&f.method, "method", "", "lrfd or asd (default lrfd)")
@@ -219,6 +219,9 @@ func parseNumber(flagName, s, accepted string, lo, hi float64) (float64, error) 
 
 func flagErr(flagName, value string, err error) error {
 	if pe, ok := err.(*units.ParseError); ok {
+		if pe.Reason != "" {
+			return usagef("--%s %s; give %s", flagName, pe.Why(), pe.Accepted)
+		}
 		return usagef("--%s %q: not accepted; give %s", flagName, value, pe.Accepted)
 	}
 	return usagef("--%s %q: %v", flagName, value, err)

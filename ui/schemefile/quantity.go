@@ -84,6 +84,9 @@ func (k kind) read(s string) (float64, error) {
 	v, err := k.parse(s)
 	if err != nil {
 		if pe, ok := err.(*units.ParseError); ok {
+			if pe.Reason != "" {
+				return 0, fmt.Errorf("%s; give %s", pe.Why(), pe.Accepted)
+			}
 			return 0, fmt.Errorf("cannot read %q as %s; give %s", s, units.Article(k.name), pe.Accepted)
 		}
 		return 0, fmt.Errorf("cannot read %q as %s: %v", s, units.Article(k.name), err)

@@ -1,6 +1,7 @@
 package units
 
 import (
+	"fmt"
 	"math"
 	"strconv"
 )
@@ -16,9 +17,24 @@ var lineLoadUnits = map[string]float64{
 	"kip/ft": KNPerMPerKlf, "klf": KNPerMPerKlf, "lb/ft": KNPerMPerKlf / 1000, "plf": KNPerMPerKlf / 1000,
 }
 
+// perArea is why a pressure is refused where a load per length is asked.
+const perArea = "%[2]s is a load per area, not per length; write the load per length, e.g. %[1]s%[3]s"
+
+// lineLoadAmbiguous lists the load-per-length suffixes refused as ambiguous.
+var lineLoadAmbiguous = ambiguity{
+	"k/ft":   "k may mean kip or kN; write %[1]skip/ft",
+	"k/m":    "k may mean kip or kN; write %[1]skN/m",
+	"kn/m2":  fmt.Sprintf(perArea, "%[1]s", "kN/m2", "kN/m"),
+	"kn/m²":  fmt.Sprintf(perArea, "%[1]s", "kN/m²", "kN/m"),
+	"kpa":    fmt.Sprintf(perArea, "%[1]s", "kPa", "kN/m"),
+	"psf":    fmt.Sprintf(perArea, "%[1]s", "psf", "plf"),
+	"ksf":    fmt.Sprintf(perArea, "%[1]s", "ksf", "klf"),
+	"lb/ft2": fmt.Sprintf(perArea, "%[1]s", "lb/ft2", "lb/ft"),
+}
+
 // ParseLineLoad reads a load per length such as 8kN/m, 0.5kip/ft or 500plf and returns kN/m.
 func ParseLineLoad(s string) (float64, error) {
-	return parseWith("load per length", s, LineLoadForms, lineLoadUnits)
+	return parseWith("load per length", s, LineLoadForms, lineLoadUnits, lineLoadAmbiguous)
 }
 
 // LineLoad formats a load per length given in kN/m.

@@ -4,8 +4,8 @@ import "strings"
 
 // siUnits and usUnits are the unit suffixes, lower case, that belong to each system.
 var (
-	siUnits = []string{"mm", "cm", "m", "n", "kn", "mn", "t", "tonne", "kpa", "pa", "kn/m2", "kn/m²", "m2", "m²", "sqm", "mpa", "n/mm2"}
-	usUnits = []string{"in", "inch", "inches", `"`, "ft", "feet", "foot", "'", "kip", "kips", "k", "lb", "lbs", "lbf",
+	siUnits = []string{"mm", "cm", "m", "n", "kn", "mn", "tonne", "tonnes", "kpa", "pa", "kn/m2", "kn/m²", "m2", "m²", "sqm", "mpa", "n/mm2"}
+	usUnits = []string{"in", "inch", "inches", `"`, "ft", "feet", "foot", "'", "kip", "kips", "lb", "lbs", "lbf",
 		"psf", "lb/ft2", "ksf", "ft2", "ft²", "sf", "sqft", "ksi", "psi"}
 )
 
@@ -16,7 +16,7 @@ func SystemOf(s string) (sys System, ok bool) {
 	if ftIn.MatchString(t) {
 		return US, true
 	}
-	_, u, ok := splitNumber(t)
+	_, _, _, u, ok := splitNumber(t)
 	if !ok || u == "" {
 		return "", false
 	}

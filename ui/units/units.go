@@ -30,21 +30,48 @@ const (
 // ErrNoUnit is returned when a number is given without a unit.
 var ErrNoUnit = errors.New("a unit is required")
 
+// ErrAmbiguousUnit is what a *ParseError wraps when its unit could be read two ways.
+var ErrAmbiguousUnit = errors.New("ambiguous unit")
+
 // ParseError says what could not be read and what is accepted.
 type ParseError struct {
 	Kind     string // "length", "force", ...
 	Value    string
 	Accepted string
+	// Reason, when not empty, says why the unit is ambiguous and which
+	// unambiguous forms to write instead; the error then wraps ErrAmbiguousUnit.
+	Reason string
 }
 
 func (e *ParseError) Error() string {
+	if e.Reason != "" {
+		return fmt.Sprintf("%s; accepted: %s", e.Why(), e.Accepted)
+	}
 	return fmt.Sprintf("cannot read %q as %s; accepted: %s", e.Value, Article(e.Kind), e.Accepted)
+}
+
+// Why is the one sentence the window, the commands and scheme files show for
+// an ambiguous unit, e.g. `"1800k" is ambiguous: k may mean kip or kN; write 1800kip or 1800kN`;
+// it is empty when the unit is not ambiguous.
+func (e *ParseError) Why() string {
+	if e.Reason == "" {
+		return ""
+	}
+	return fmt.Sprintf("%q is ambiguous: %s", strings.TrimSpace(e.Value), e.Reason)
+}
+
+// Unwrap gives ErrAmbiguousUnit for an ambiguous unit, else nil.
+func (e *ParseError) Unwrap() error {
+	if e.Reason != "" {
+		return ErrAmbiguousUnit
+	}
+	return nil
 }
 
 // Accepted forms, shown in messages.
 const (
 	LengthForms   = `a length with a unit, e.g. 4.2m, 4200mm, 14ft, 14'-6", 168in`
-	ForceForms    = "a force with a unit, e.g. 1800kN, 400kip, 2.5MN, 90000lb"
+	ForceForms    = "a force with a unit, e.g. 1800kN, 400kip, 2.5MN, 90000lb, 180tonne"
 	PressureForms = "a pressure with a unit, e.g. 4.0kPa, 80psf, 0.1ksf"
 	AreaForms     = "an area with a unit, e.g. 60m2, 650ft2, 650sf"
 	StressForms   = "a stress with a unit, e.g. 35MPa, 5000psi, 5ksi"
@@ -52,42 +79,76 @@ const (
 
 var ftIn = regexp.MustCompile(`^([0-9]*\.?[0-9]+)\s*(?:'|ft|feet|foot)\s*-?\s*([0-9]*\.?[0-9]+)\s*(?:"|in|inch|inches)$`)
 
-// splitNumber separates a leading decimal number from its unit suffix.
-func splitNumber(s string) (float64, string, bool) {
+// splitNumber separates a leading decimal number from its unit suffix; it
+// returns the number, its text as typed, the unit as typed and the unit in
+// lower case.
+func splitNumber(s string) (v float64, num, raw, unit string, ok bool) {
 	s = strings.TrimSpace(s)
 	i := 0
 	for i < len(s) && (s[i] >= '0' && s[i] <= '9' || s[i] == '.' || s[i] == '-' || s[i] == '+' || s[i] == 'e' && i > 0 && i+1 < len(s) && (s[i+1] >= '0' && s[i+1] <= '9' || s[i+1] == '-')) {
 		i++
 	}
 	if i == 0 {
-		return 0, "", false
+		return 0, "", "", "", false
 	}
 	v, err := strconv.ParseFloat(s[:i], 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-		return 0, "", false
+		return 0, "", "", "", false
 	}
-	return v, strings.ToLower(strings.TrimSpace(s[i:])), true
+	raw = strings.TrimSpace(s[i:])
+	return v, s[:i], raw, strings.ToLower(raw), true
 }
 
-func parseWith(kind, s, accepted string, table map[string]float64) (float64, error) {
-	v, u, ok := splitNumber(s)
+// ambiguity maps a unit suffix that can be read two ways to why, as a
+// format with %[1]s standing for the number as typed. A key is first matched
+// as typed (so "M" can differ from "m"), then in lower case.
+type ambiguity map[string]string
+
+// reason gives why the suffix (as typed, and in lower case) is ambiguous, or "".
+func (a ambiguity) reason(num, raw, unit string) string {
+	f, ok := a[raw]
 	if !ok {
-		return 0, &ParseError{kind, s, accepted}
+		if _, known := a[unit]; !known {
+			return ""
+		}
+		f = a[unit]
+	}
+	return fmt.Sprintf(f, num)
+}
+
+func parseWith(kind, s, accepted string, table map[string]float64, amb ambiguity) (float64, error) {
+	v, num, raw, u, ok := splitNumber(s)
+	if !ok {
+		return 0, &ParseError{Kind: kind, Value: s, Accepted: accepted}
 	}
 	if u == "" {
-		return 0, &ParseError{kind, s, accepted + " (" + ErrNoUnit.Error() + ")"}
+		return 0, &ParseError{Kind: kind, Value: s, Accepted: accepted + " (" + ErrNoUnit.Error() + ")"}
 	}
-	f, ok := table[u]
-	if !ok {
-		return 0, &ParseError{kind, s, accepted}
+	if _, exact := amb[raw]; !exact {
+		if f, ok := table[u]; ok {
+			return v * f, nil
+		}
 	}
-	return v * f, nil
+	if r := amb.reason(num, raw, u); r != "" {
+		return 0, &ParseError{Kind: kind, Value: s, Accepted: accepted, Reason: r}
+	}
+	return 0, &ParseError{Kind: kind, Value: s, Accepted: accepted}
 }
 
 var lengthUnits = map[string]float64{
 	"mm": 1, "cm": 10, "m": 1000,
 	"in": MMPerInch, "inch": MMPerInch, "inches": MMPerInch, `"`: MMPerInch,
 	"ft": MMPerFoot, "feet": MMPerFoot, "foot": MMPerFoot, "'": MMPerFoot,
+}
+
+// ftBare matches feet followed by a number with no inch mark (14'6, 14ft 6),
+// which could be 14 ft 6 in or a mistyped decimal of a foot.
+var ftBare = regexp.MustCompile(`^([0-9]*\.?[0-9]+)\s*(?:'|ft|feet|foot)\s*-?\s*([0-9]*\.?[0-9]+)$`)
+
+// lengthAmbiguous lists the length suffixes refused as ambiguous.
+var lengthAmbiguous = ambiguity{
+	// Upper-case M: metres, or M for thousand as in US trade shorthand (common practice).
+	"M": "M may mean metres or a thousand (US shorthand); write %[1]sm for metres",
 }
 
 // ParseLength reads a length such as 4.2m, 4200mm, 14ft, 14'-6" or 168in and returns mm.
@@ -98,19 +159,35 @@ func ParseLength(s string) (float64, error) {
 		in, _ := strconv.ParseFloat(m[2], 64)
 		return ft*MMPerFoot + in*MMPerInch, nil
 	}
-	return parseWith("length", t, LengthForms, lengthUnits)
+	if m := ftBare.FindStringSubmatch(strings.ToLower(t)); m != nil {
+		return 0, &ParseError{Kind: "length", Value: s, Accepted: LengthForms,
+			Reason: fmt.Sprintf(`%[2]s has no unit (inches? a decimal of a foot?); write %[1]s'-%[2]s" or %[1]sft %[2]sin`, m[1], m[2])}
+	}
+	return parseWith("length", t, LengthForms, lengthUnits, lengthAmbiguous)
 }
 
 var forceUnits = map[string]float64{
 	"n": 1, "kn": 1e3, "mn": 1e6,
-	"kip": NPerKip, "kips": NPerKip, "k": NPerKip,
+	"kip": NPerKip, "kips": NPerKip,
 	"lb": NPerLbf, "lbs": NPerLbf, "lbf": NPerLbf,
-	"t": 9806.65, "tonne": 9806.65, // tonne-force
+	"tonne": NPerTonneF, "tonnes": NPerTonneF, // tonne-force: the metric tonne is never a US ton
 }
 
-// ParseForce reads a force such as 1800kN or 400kip and returns N.
+// NPerTonneF is one tonne-force in N: 1000 kg × standard gravity 9.80665 m/s² (exact by definition, CGPM 1901).
+const NPerTonneF = 9806.65
+
+// forceAmbiguous lists the force suffixes refused as ambiguous.
+var forceAmbiguous = ambiguity{
+	"k":    "k may mean kip or kN; write %[1]skip or %[1]skN",
+	"t":    "t may mean a metric tonne-force (9.807 kN) or a US short ton-force (2000 lb, 8.896 kN); write %[1]stonne, or the force in kN or kip",
+	"ton":  "a ton may be a metric tonne-force (9.807 kN), a US short ton-force (2000 lb, 8.896 kN) or a long ton (2240 lb); write %[1]stonne, or the force in kN or kip",
+	"tons": "a ton may be a metric tonne-force (9.807 kN), a US short ton-force (2000 lb, 8.896 kN) or a long ton (2240 lb); write %[1]stonne, or the force in kN or kip",
+	"#":    "# may mean pounds or a count; write %[1]slb",
+}
+
+// ParseForce reads a force such as 1800kN, 400kip or 180tonne and returns N.
 func ParseForce(s string) (float64, error) {
-	return parseWith("force", s, ForceForms, forceUnits)
+	return parseWith("force", s, ForceForms, forceUnits, forceAmbiguous)
 }
 
 var pressureUnits = map[string]float64{
@@ -118,9 +195,25 @@ var pressureUnits = map[string]float64{
 	"psf": KPaPerPsf, "lb/ft2": KPaPerPsf, "ksf": 1000 * KPaPerPsf,
 }
 
+// perLength is why a load per length is refused where a pressure is asked.
+const perLength = "%[2]s is a load per length, not per area (a missing 2?); write %[1]s%[3]s"
+
+// pressureAmbiguous lists the pressure suffixes refused as ambiguous.
+var pressureAmbiguous = ambiguity{
+	"kn/m":   fmt.Sprintf(perLength, "%[1]s", "kN/m", "kN/m2 or %[1]skPa"),
+	"n/m":    fmt.Sprintf(perLength, "%[1]s", "N/m", "N/m2 or %[1]sPa"),
+	"kip/ft": fmt.Sprintf(perLength, "%[1]s", "kip/ft", "ksf"),
+	"klf":    fmt.Sprintf(perLength, "%[1]s", "klf", "ksf"),
+	"lb/ft":  fmt.Sprintf(perLength, "%[1]s", "lb/ft", "psf or %[1]slb/ft2"),
+	"plf":    fmt.Sprintf(perLength, "%[1]s", "plf", "psf"),
+	"kg/m2":  "kg/m2 is a mass per area, not a pressure (kilogram-force per m2?); write the pressure in kPa or psf, not %[1]skg/m2",
+	"kg/m²":  "kg/m² is a mass per area, not a pressure (kilogram-force per m²?); write the pressure in kPa or psf, not %[1]skg/m²",
+	"k":      "k may mean kip per square foot or kPa; write %[1]sksf or %[1]skPa",
+}
+
 // ParsePressure reads an area load such as 4.0kPa or 80psf and returns kPa.
 func ParsePressure(s string) (float64, error) {
-	return parseWith("pressure", s, PressureForms, pressureUnits)
+	return parseWith("pressure", s, PressureForms, pressureUnits, pressureAmbiguous)
 }
 
 var areaUnits = map[string]float64{
@@ -128,18 +221,30 @@ var areaUnits = map[string]float64{
 	"ft2": M2PerFt2, "ft²": M2PerFt2, "sf": M2PerFt2, "sqft": M2PerFt2,
 }
 
+// areaAmbiguous lists the area suffixes refused as ambiguous: a length unit
+// where an area is asked (a missing 2).
+var areaAmbiguous = ambiguity{
+	"m":  "m is a length, not an area (a missing 2?); write %[1]sm2",
+	"ft": "ft is a length, not an area (a missing 2?); write %[1]sft2 or %[1]ssf",
+}
+
 // ParseArea reads an area such as 60m2 or 650ft2 and returns m².
 func ParseArea(s string) (float64, error) {
-	return parseWith("area", s, AreaForms, areaUnits)
+	return parseWith("area", s, AreaForms, areaUnits, areaAmbiguous)
 }
 
 var stressUnits = map[string]float64{
 	"mpa": 1, "n/mm2": 1, "ksi": MPaPerKsi, "psi": MPaPerKsi / 1000,
 }
 
+// stressAmbiguous lists the stress suffixes refused as ambiguous.
+var stressAmbiguous = ambiguity{
+	"k": "k names no stress unit (ksi? kPa?); write %[1]sksi",
+}
+
 // ParseStress reads a material strength such as 35MPa, 5000psi or 5ksi and returns MPa.
 func ParseStress(s string) (float64, error) {
-	return parseWith("stress", s, StressForms, stressUnits)
+	return parseWith("stress", s, StressForms, stressUnits, stressAmbiguous)
 }
 
 // System is the unit system used for display.

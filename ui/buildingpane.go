@@ -3,6 +3,7 @@ package ui
 import (
 	"bytes"
 	"encoding/json"
+	"errors"
 	"fmt"
 	"image"
 	"image/png"
@@ -95,7 +96,7 @@ func newBuildingPane(ed editor) *buildingPane {
 	p.facade = entry("0kN/m", func(s string) (string, func(b *model.Building), error) {
 		v, err := units.ParseLineLoad(s)
 		if err != nil {
-			err = fmt.Errorf("façade %q: give %s, from 0 to 100 kN/m (6.85 kip/ft)", s, units.LineLoadForms)
+			err = fmt.Errorf("façade %q: %sgive %s, from 0 to 100 kN/m (6.85 kip/ft)", s, ambiguousWhy(err), units.LineLoadForms)
 		}
 		return "façade " + s, func(b *model.Building) { b.FacadeKNPerM = v }, err
 	})
@@ -492,4 +493,14 @@ func addBuilding(sc *model.Scheme) {
 		b.StoreysMM = []float64{4876.8, 3962.4, 3962.4, 3962.4}
 	}
 	sc.Building = &b
+}
+
+// ambiguousWhy is the sentence saying why a unit was refused as ambiguous,
+// followed by a space, or "" for any other error.
+func ambiguousWhy(err error) string {
+	var pe *units.ParseError
+	if errors.As(err, &pe) && pe.Why() != "" {
+		return pe.Why() + "; "
+	}
+	return ""
 }

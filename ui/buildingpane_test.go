@@ -85,6 +85,10 @@ func TestBuildingPaneEditsThroughTheEditor(t *testing.T) {
 	fyne.DoAndWait(func() { p.baysX.OnSubmitted("9m,0m") })
 	assert.Len(t, ed.edits, before)
 	fyne.DoAndWait(func() { assert.Contains(t, p.status.Text, "bays-x") })
+	// An ambiguous façade unit is refused with why, as a field, a flag and a file refuse it.
+	fyne.DoAndWait(func() { p.facade.OnSubmitted("0.5k/ft") })
+	assert.Len(t, ed.edits, before)
+	fyne.DoAndWait(func() { assert.Contains(t, p.status.Text, "k may mean kip or kN") })
 	// A good one is one edit, on a copy: the shown scheme's building keeps its bays.
 	old := ed.sc.Building
 	fyne.DoAndWait(func() { p.baysX.OnSubmitted("8m,8m") })

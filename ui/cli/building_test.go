@@ -130,6 +130,7 @@ func TestBuildingBadFlags(t *testing.T) {
 		{[]string{"--bays-x", strings.Repeat("6m,", 40) + "6m"}, "1 to 40"},
 		{[]string{"--change-every", "0"}, "--change-every"},
 		{[]string{"--facade", "-2kN/m"}, "--facade"},
+		{[]string{"--facade", "0.5k/ft"}, "k may mean kip or kN"},
 		{[]string{"--load", "100kN"}, "--load"},
 		{[]string{"--dxf", "plan.dwg"}, "--dxf"},
 	}

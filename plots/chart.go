@@ -45,6 +45,9 @@ type Chart struct {
 	Title string
 	// XLabel and YLabel name the axes with their units.
 	XLabel, YLabel string
+	// YShort, when set, names the y axis where the plot is too short for
+	// YLabel along its height (e.g. "φPn (kip)").
+	YShort string
 	// Series holds the candidates' curves, in legend order within each group.
 	Series []Series
 	// Demand is the required strength along the length; empty draws no demand line.

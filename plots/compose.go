@@ -87,6 +87,7 @@ func (k *composer) draw(c draw.Canvas, ch *Chart, fill bool) {
 		area = draw.Crop(inner, 0, -(lw + vg.Points(legendSpacing)), 0, 0)
 	}
 
+	k.plot.Y.Label.Text = yLabelFor(k.plot, ch.YLabel, ch.YShort, area)
 	k.plot.Draw(area)
 
 	if len(k.legend.rows) > 0 {
@@ -98,6 +99,22 @@ func (k *composer) draw(c draw.Canvas, ch *Chart, fill bool) {
 	} else {
 		k.legendBox = vg.Rectangle{}
 	}
+}
+
+// yLabelFor returns the y-axis title that fits along the height of area:
+// long, or short (when given) where the plot is too short for long. Gonum
+// keeps a rotated axis title within the plot's height by shrinking the data
+// area, which on a short chart would leave almost nothing to read.
+func yLabelFor(p *plot.Plot, long, short string, area draw.Canvas) string {
+	if short == "" {
+		return long
+	}
+	x := &p.X
+	room := area.Max.Y - area.Min.Y - x.Tick.Length - x.Tick.Label.Height("0") - x.Label.TextStyle.Height(x.Label.Text) - x.Label.Padding
+	if p.Y.Label.TextStyle.Width(long) <= room {
+		return long
+	}
+	return short
 }
 
 // legendRoom returns the height the legend column has: from the top of the

@@ -142,6 +142,7 @@ func (k *mapComposer) draw(c draw.Canvas, m *Map, fill bool) {
 	s.edges(m)
 	p.X.Min, p.X.Max = s.ex[0], s.ex[len(s.ex)-1]
 	p.Y.Min, p.Y.Max = s.ey[0], s.ey[len(s.ey)-1]
+	p.Y.Label.Text = yLabelFor(p, m.YLabel, m.YShort, area)
 	p.Draw(area)
 
 	col := inner

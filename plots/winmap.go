@@ -33,6 +33,9 @@ type Map struct {
 	Title string
 	// XLabel and YLabel name the axes with their units.
 	XLabel, YLabel string
+	// YShort, when set, names the y axis where the map is too short for
+	// YLabel along its height (e.g. "Load (kip)").
+	YShort string
 	// X and Y are the cell centres in display units, each increasing, at least two.
 	X, Y []float64
 	// Cells[i*len(X)+j] is the key of row i (Y[i]) and column j (X[j]), or -1 where nothing works.

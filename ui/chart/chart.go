@@ -102,6 +102,16 @@ func Labels(m *model.Model) (x, y string) {
 	return fmt.Sprintf("Unbraced length (%s)", lu), fmt.Sprintf("Design strength φPn (%s)", fu)
 }
 
+// shortStrength is the y axis's short title, for a chart too short for
+// the long one: the strength's symbol with its unit.
+func shortStrength(m *model.Model) string {
+	_, fu := units.ForceValue(0, units.System(m.Scheme.Units))
+	if m.Scheme.Setting.Method == model.ASD {
+		return "Pn/Ω (" + fu + ")"
+	}
+	return "φPn (" + fu + ")"
+}
+
 // Chart builds the chart at a result: curves of the shown candidates, the
 // demand line, the marker at the result's length and the crossover marks.
 func (b *Builder) Chart(res *model.Result, opt Options) plots.Chart {
@@ -112,7 +122,7 @@ func (b *Builder) Chart(res *model.Result, opt Options) plots.Chart {
 		r = model.DefaultRange(m.Scheme.Setting.LengthMM, m.Scheme.Units)
 	}
 	xl, yl := Labels(m)
-	ch := plots.Chart{Title: opt.Title, XLabel: xl, YLabel: yl}
+	ch := plots.Chart{Title: opt.Title, XLabel: xl, YLabel: yl, YShort: shortStrength(m)}
 	pinned := map[Key]bool{}
 	for _, k := range opt.Pinned {
 		pinned[k] = true

@@ -8,6 +8,20 @@ import (
 	"upright/ui/units"
 )
 
+// mapShortY is the map's short y-axis title, for a map too short for the
+// long one.
+func mapShortY(sc *model.Scheme, axis model.MapAxis) string {
+	sys := units.System(sc.Units)
+	if axis == model.MapTributary {
+		if sys == units.SI {
+			return "Area (m²)"
+		}
+		return "Area (ft²)"
+	}
+	_, fu := units.ForceValue(0, sys)
+	return "Load (" + fu + ")"
+}
+
 // MapLabels returns the map's axis labels in the scheme's units: unbraced
 // length across, and the typed load (factored or service) or the tributary
 // area per floor up.
@@ -68,7 +82,7 @@ func MapKeyLabel(f model.MapFamily) string {
 func Map(g *model.WinMap, sc *model.Scheme, title string) plots.Map {
 	sys := units.System(sc.Units)
 	xl, yl := MapLabels(sc, g.Axis)
-	pm := plots.Map{Title: title, XLabel: xl, YLabel: yl, Heading: MapHeading(g.Metric), Caution: model.Caution}
+	pm := plots.Map{Title: title, XLabel: xl, YLabel: yl, YShort: mapShortY(sc, g.Axis), Heading: MapHeading(g.Metric), Caution: model.Caution}
 	for _, L := range g.LengthsMM {
 		v, _ := units.LengthValue(L, sys)
 		pm.X = append(pm.X, v)

@@ -142,7 +142,7 @@ func (p *resultsPane) build() fyne.CanvasObject {
 		if p.ctx.m != nil {
 			p.fitColumns(false)
 		}
-	}}, p.table)
+	}}, container.NewThemeOverride(p.table.Table, compactTheme{})) // rows 1 px apart, not the theme's padding
 	return container.NewBorder(head, nil, nil, nil, watch)
 }
 

@@ -136,8 +136,8 @@ func TestLaptopScreenShowsTheComparison(t *testing.T) {
 		for _, col := range w.results.fit.shown {
 			total += w.results.fit.natural[col] + theme.Padding()
 		}
-		assert.LessOrEqual(t, total, w.results.table.Size().Width, "the shown columns fit the table's width (%v)", shown)
-		assert.True(t, onScreen(c, w.results.table))
+		assert.LessOrEqual(t, total, w.results.table.Table.Size().Width, "the shown columns fit the table's width (%v)", shown)
+		assert.True(t, onScreen(c, w.results.table.Table))
 
 		// The caution and the crossover list are visible.
 		assert.True(t, onScreen(c, w.status.caution), "the caution is inside the window")
@@ -202,18 +202,18 @@ func TestFoldingTheInputsGivesTheTableTheRoom(t *testing.T) {
 	var before float32
 	var cols int
 	h.ui(func() {
-		before, cols = h.w.results.table.Size().Width, len(h.w.results.ShownColumns())
+		before, cols = h.w.results.table.Table.Size().Width, len(h.w.results.ShownColumns())
 		h.w.FoldInputs(true)
 	})
 	h.layOut()
 	h.ui(func() {
 		assert.True(t, h.w.InputsFolded())
-		assert.Greater(t, h.w.results.table.Size().Width, before+200, "the table takes the inputs' width")
+		assert.Greater(t, h.w.results.table.Table.Size().Width, before+200, "the table takes the inputs' width")
 		assert.Greater(t, len(h.w.results.ShownColumns()), cols, "and shows more columns")
 		h.w.FoldInputs(false)
 	})
 	h.layOut()
-	h.ui(func() { assert.InDelta(t, before, h.w.results.table.Size().Width, 2, "unfolding gives the width back") })
+	h.ui(func() { assert.InDelta(t, before, h.w.results.table.Table.Size().Width, 2, "unfolding gives the width back") })
 }
 
 func TestDividersAndFoldComeBackThroughPreferences(t *testing.T) {

@@ -19,7 +19,7 @@ func rowsShown(h *harness) int {
 			row = max(row, o.Size().Height)
 		}
 		row += h.w.results.table.Theme().Size(theme.SizeNamePadding) // the gap the table leaves between rows
-		n = int(h.w.results.table.Size().Height/row) - 1 // less the header row
+		n = int(h.w.results.table.Size().Height/row) - 1             // less the header row
 	})
 	return n
 }

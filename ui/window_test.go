@@ -695,7 +695,7 @@ func TestTabOrderRunsDownTheInputsThenToTheSlider(t *testing.T) {
 		k := index(h.w.field("K").entry)
 		slider := index(h.w.chart.slider)
 		length := index(h.w.field("length").entry)
-		table := index(h.w.results.table)
+		table := index(h.w.results.table.Table)
 		require.True(t, first >= 0 && k >= 0 && slider >= 0 && length >= 0, "all reachable by Tab: %d %d %d %d", first, k, slider, length)
 		assert.Less(t, first, k, "the end conditions come before K")
 		assert.Less(t, k, slider, "the inputs come before the slider")

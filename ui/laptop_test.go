@@ -213,7 +213,9 @@ func TestFoldingTheInputsGivesTheTableTheRoom(t *testing.T) {
 		h.w.FoldInputs(false)
 	})
 	h.layOut()
-	h.ui(func() { assert.InDelta(t, before, h.w.results.table.Table.Size().Width, 2, "unfolding gives the width back") })
+	h.ui(func() {
+		assert.InDelta(t, before, h.w.results.table.Table.Size().Width, 2, "unfolding gives the width back")
+	})
 }
 
 func TestDividersAndFoldComeBackThroughPreferences(t *testing.T) {

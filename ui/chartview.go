@@ -224,7 +224,9 @@ func (p *chartPane) build() {
 	p.rangeLabel = widget.NewLabel("")
 	p.rangeLabel.Importance = widget.LowImportance
 	entryBox := container.NewGridWrap(fyne.NewSize(150, length.entry.MinSize().Height), length.entry)
-	sliderRow := container.NewBorder(nil, length.err, p.sliderUnit, container.NewHBox(entryBox, p.rangeLabel, p.newRangeButton()), p.slider)
+	// The length's problem is said by the banner over the chart and the
+	// entry's red mark: a line under the slider would push the chart up.
+	sliderRow := container.NewBorder(nil, nil, p.sliderUnit, container.NewHBox(entryBox, p.rangeLabel, p.newRangeButton()), p.slider)
 
 	p.controls = container.NewPadded(sliderRow)
 }
@@ -339,7 +341,11 @@ func (p *chartPane) configureSlider() {
 
 // syncSlider moves the slider to the draft's length without firing it.
 func (p *chartPane) syncSlider() {
-	v := toDisplay(p.st.Draft.Setting.LengthMM, p.st.Sys())
+	mm := p.st.Draft.Setting.LengthMM
+	if p.st.FieldError("length") != "" {
+		mm = p.st.Valid.Setting.LengthMM // a refused length leaves the slider where the result on screen is
+	}
+	v := toDisplay(mm, p.st.Sys())
 	p.quiet++
 	v = min(max(v, p.slider.Min), p.slider.Max)
 	if v == p.slider.Value {

@@ -57,7 +57,7 @@ func TestTypingFiftyMetresNeverEvaluatesFive(t *testing.T) {
 		for _, mm := range seen {
 			assert.False(t, mm > 4999 && mm < 5001, "5 m was evaluated while 50m was typed")
 		}
-		assert.Contains(t, h.w.field("length").err.Text, "is not accepted", "50 m is beyond the accepted range")
+		assert.Contains(t, h.w.status.BannerText(), "is not accepted", "50 m is beyond the accepted range")
 	})
 	// A length that is accepted is applied once committed, never its prefix.
 	seen = nil

@@ -47,7 +47,7 @@ var splitDefaults = map[string]float64{
 
 // buildPanes arranges the window: the inputs (foldable) left of the chart
 // over the results, with the crossovers over the calculation on the right.
-func (w *Window) buildPanes(inputs, chartArea, results, xsPanel, calc, banner fyne.CanvasObject) fyne.CanvasObject {
+func (w *Window) buildPanes(inputs, chartArea, results, xsPanel, calc fyne.CanvasObject) fyne.CanvasObject {
 	p := &w.panes
 	p.centre = container.NewVSplit(chartArea, results)
 	p.right = container.NewVSplit(xsPanel, calc)
@@ -62,9 +62,7 @@ func (w *Window) buildPanes(inputs, chartArea, results, xsPanel, calc, banner fy
 	unfold.Importance = widget.LowImportance
 	p.rail = container.NewVBox(unfold)
 
-	// The banner floats over the top of the chart: showing or clearing it
-	// moves nothing else and leaves no band behind.
-	p.side = container.NewHSplit(p.inputs, container.NewStack(p.main, container.NewVBox(banner)))
+	p.side = container.NewHSplit(p.inputs, p.main)
 	w.restoreLayout(w.app.Preferences())
 	return container.New(&widthWatch{onChange: w.autoSplits}, p.side)
 }

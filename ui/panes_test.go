@@ -295,3 +295,24 @@ func TestFilesPaneAlone(t *testing.T) {
 	require.NoError(t, err)
 	assert.True(t, strings.Contains(string(b), model.Caution), "the CSV carries the caution")
 }
+
+// A refused length keeps the text as typed (its message quotes it), leaves
+// the weak-axis length alone and leaves the slider at the length of the
+// result on screen.
+func TestARefusedLengthMovesNothing(t *testing.T) {
+	test.NewTempApp(t)
+	st := NewState(paneScheme())
+	ed := &stubStepper{st: st}
+	p := newChartPane(st, ed, now, nil, func() {})
+	p.refresh(true)
+	slider, weak := p.slider.Value, st.Text("weak-axis length")
+	f := p.fs.byID["length"]
+	f.entry.SetText("-3 m")
+	f.entry.commit()
+	p.refresh(false)
+	assert.Equal(t, "-3 m", f.entry.Text, "the refused text stays as typed")
+	assert.Contains(t, st.FieldError("length"), `"-3 m"`)
+	assert.Equal(t, slider, p.slider.Value, "the slider stays at the valid length")
+	assert.Equal(t, weak, st.Text("weak-axis length"), "the weak-axis length is not moved by a refused length")
+	assert.InDelta(t, 4200, st.Valid.Setting.LengthMM, 1e-9)
+}

@@ -108,7 +108,7 @@ func (s *State) SetText(id, text string) Outcome {
 	}
 	delete(s.parseErr, id)
 	f.set(&s.Draft, v)
-	if id == "length" {
+	if id == "length" && v >= model.MinLengthMM && v <= model.MaxLengthMM {
 		if !s.WeakBraced {
 			s.Draft.Setting.WeakMM = s.Draft.Setting.LengthMM
 		}
@@ -388,11 +388,12 @@ func (s *State) Restore(sc model.Scheme, weakBraced bool) Outcome {
 }
 
 // Commit takes a field's text as committed (Enter, Tab, leaving the field
-// or a pause in typing) and, when it parses, rewrites it from the value in
-// the field's shown unit, so a bare number then shows the unit it took.
+// or a pause in typing) and, when its value is accepted, rewrites it from
+// the value in the field's shown unit, so a bare number then shows the unit
+// it took. A refused value keeps the text as typed, as its message quotes it.
 func (s *State) Commit(id, text string) Outcome {
 	out := s.SetText(id, text)
-	if _, bad := s.parseErr[id]; !bad && specByID(id) != nil {
+	if _, bad := s.parseErr[id]; !bad && specByID(id) != nil && s.FieldError(id) == "" {
 		s.reformat(id)
 	}
 	return out

@@ -17,6 +17,7 @@ import (
 // everything and the caution beside it. None of them moves another widget.
 type statusPane struct {
 	banner     *fyne.Container
+	holder     *fyne.Container // floats the banner under the view tabs' bar
 	bannerText *widget.Label
 	status     *widget.Label
 	caution    *widget.Label
@@ -56,11 +57,36 @@ func newStatusPane() *statusPane {
 }
 
 // Object returns the status line with the caution; the banner is placed
-// over the chart by the window (Banner).
+// over the views by the window (BannerUnder).
 func (p *statusPane) Object() fyne.CanvasObject { return p.bar }
 
-// Banner returns the banner, to float over the top of the chart.
-func (p *statusPane) Banner() fyne.CanvasObject { return p.banner }
+// BannerUnder returns the banner in a holder to be stacked over the view
+// tabs: it floats across the top of their content, just under the tab bar,
+// so the tabs stay usable and nothing moves when it shows or clears.
+func (p *statusPane) BannerUnder(tabs *container.AppTabs) fyne.CanvasObject {
+	p.holder = container.New(&underTabBar{tabs: tabs}, p.banner)
+	return p.holder
+}
+
+// underTabBar lays its objects across the top of a tab container's content,
+// each at the height its text needs; it asks for no room of its own.
+type underTabBar struct{ tabs *container.AppTabs }
+
+// Layout places each object under the tab bar, across the width.
+func (l *underTabBar) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	top := float32(0)
+	if it := l.tabs.Selected(); it != nil && it.Content != nil {
+		top = it.Content.Position().Y
+	}
+	for _, o := range objs {
+		o.Resize(fyne.NewSize(size.Width, o.Size().Height)) // the width first: wrapped text finds its height
+		o.Move(fyne.NewPos(0, top))
+		o.Resize(fyne.NewSize(size.Width, o.MinSize().Height))
+	}
+}
+
+// MinSize is nothing: the banner floats over what is under it.
+func (l *underTabBar) MinSize([]fyne.CanvasObject) fyne.Size { return fyne.Size{} }
 
 // Show sums up an evaluated snapshot in the status line, unless a message
 // is being kept there.
@@ -98,6 +124,9 @@ func (p *statusPane) setBanner(msg string) {
 		p.banner.Hide()
 	} else {
 		p.banner.Show()
+	}
+	if p.holder != nil {
+		p.holder.Refresh()
 	}
 }
 

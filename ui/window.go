@@ -135,8 +135,10 @@ func (w *Window) build() fyne.CanvasObject {
 
 	// One row of view tabs over the slider: Chart, Sections, Map, then the extra views.
 	views := w.withMapView(w.plotViews(w.chart.Object()))
-	chartArea := container.NewBorder(nil, w.chart.Controls(), nil, nil, views)
-	split := w.buildPanes(w.inputs.Object(), chartArea, w.results.Object(), w.xsp.Object(), w.calc.Object(), w.status.Banner())
+	// The banner floats over the views under their tab bar: showing or
+	// clearing it moves nothing and leaves no band behind.
+	chartArea := container.NewStack(container.NewBorder(nil, w.chart.Controls(), nil, nil, views), w.status.BannerUnder(w.viewTabs))
+	split := w.buildPanes(w.inputs.Object(), chartArea, w.results.Object(), w.xsp.Object(), w.calc.Object())
 	return container.NewBorder(nil, container.NewVBox(widget.NewSeparator(), w.status.Object()), nil, nil, split)
 }
 

@@ -31,10 +31,11 @@ type panes struct {
 	auto     bool
 	autoSide float64 // the side divider auto last set
 	autoMain float64 // the main divider auto last set
-	// mapRoom is set while the Map view has taken the centre's height;
-	// beforeMap is the chart–table divider it will give back.
-	mapRoom   bool
-	beforeMap float64
+	// viewRoom is set while a figure view (Map, Variants, Building) has
+	// taken the centre's height; beforeView is the chart–table divider it
+	// will give back.
+	viewRoom   bool
+	beforeView float64
 }
 
 // inputsWidth is the inputs pane's width on a first start.
@@ -156,8 +157,8 @@ func (w *Window) storeLayout(pr fyne.Preferences) {
 		pr.SetFloat(prefSplitMain, p.main.Offset)
 	}
 	centre := p.centre.Offset
-	if p.mapRoom && centre == mapShare {
-		centre = p.beforeMap // the map's share is not the user's divider
+	if p.viewRoom && centre == viewShare {
+		centre = p.beforeView // a view's share is not the user's divider
 	}
 	pr.SetFloat(prefSplitCentre, centre)
 	pr.SetFloat(prefSplitRight, p.right.Offset)

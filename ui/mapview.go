@@ -173,14 +173,25 @@ func (w *Window) withMapView(tabs *container.AppTabs) fyne.CanvasObject {
 		if prev != nil {
 			prev(t)
 		}
-		w.roomForMap(t == item)
 		mv.setVisible(t == item)
 	}
 	// UPRIGHT_VIEW=map opens on the Map view (screenshots, demonstrations).
+	w.addViews(tabs)
+	// The figure views take the centre's height while shown.
+	roomy := map[*container.TabItem]bool{item: true}
+	for i, v := range extraViews {
+		if v.room {
+			roomy[tabs.Items[len(tabs.Items)-len(extraViews)+i]] = true
+		}
+	}
+	shown := tabs.OnSelected
+	tabs.OnSelected = func(t *container.TabItem) {
+		shown(t)
+		w.roomForView(roomy[t])
+	}
 	if os.Getenv(mapViewEnv) == "map" {
 		tabs.Select(item)
 	}
-	w.addViews(tabs)
 	return tabs
 }
 
@@ -453,29 +464,30 @@ func (w *Window) moveMapPoint(lengthMM, load float64, axis model.MapAxis) {
 	w.notify("Map click set " + strings.TrimPrefix(what, "map point: ") + " (Ctrl+Z undoes it)")
 }
 
-// mapShare is the share of the centre column the Map view takes while it
-// shows: the map needs height to be read, the table folds to a few rows
-// below it (and comes back when another view is chosen).
-const mapShare = 0.74
+// viewShare is the share of the centre column a figure view (the Map, the
+// Variants, the Building) takes while it shows: a figure needs height to be
+// read; the table folds to a few rows below it and comes back when the
+// Chart or Sections tab is chosen.
+const viewShare = 0.74
 
-// roomForMap gives the Map view the centre's height while it shows and
+// roomForView gives a figure view the centre's height while it shows and
 // gives the table its rows back after; a divider the user dragged while
-// the map showed is kept.
-func (w *Window) roomForMap(on bool) {
+// the view showed is kept.
+func (w *Window) roomForView(on bool) {
 	c := w.panes.centre
 	if c == nil {
 		return
 	}
 	switch {
-	case on && !w.panes.mapRoom:
-		w.panes.beforeMap, w.panes.mapRoom = c.Offset, true
-		if c.Offset < mapShare {
-			c.SetOffset(mapShare)
+	case on && !w.panes.viewRoom:
+		w.panes.beforeView, w.panes.viewRoom = c.Offset, true
+		if c.Offset < viewShare {
+			c.SetOffset(viewShare)
 		}
-	case !on && w.panes.mapRoom:
-		w.panes.mapRoom = false
-		if c.Offset == mapShare {
-			c.SetOffset(w.panes.beforeMap)
+	case !on && w.panes.viewRoom:
+		w.panes.viewRoom = false
+		if c.Offset == viewShare {
+			c.SetOffset(w.panes.beforeView)
 		}
 	}
 }

@@ -36,6 +36,8 @@ var shotViews = []shotView{
 	{"variants", showVariantsDemo},
 	{"building", showBuilding},
 	{"file-menu", showFileMenu},
+	{"edit-menu", showEditMenu},
+	{"refused-input", showRefused},
 	{"inputs-folded", func(w *Window) func() { w.FoldInputs(true); return func() { w.FoldInputs(false) } }},
 	{"sections-folded", func(w *Window) func() {
 		w.inputs.FoldSection("Column", true)
@@ -81,6 +83,37 @@ func showFileMenu(w *Window) func() {
 	m := widget.NewPopUpMenu(w.win.MainMenu().Items[0], c)
 	m.ShowAtPosition(fyne.NewPos(4, top))
 	return m.Hide
+}
+
+// showEditMenu changes the length, as typing it would, and opens the Edit
+// menu naming the step undo would take.
+func showEditMenu(w *Window) func() {
+	if f := w.chart.fs.byID["length"]; f != nil {
+		f.entry.SetText("22 ft")
+		f.entry.typed()
+		f.entry.commit()
+	}
+	c := w.win.Canvas()
+	top := fyne.CurrentApp().Driver().AbsolutePositionForObject(w.win.Content()).Y
+	m := widget.NewPopUpMenu(w.win.MainMenu().Items[1], c)
+	m.ShowAtPosition(fyne.NewPos(44, top))
+	return func() {
+		m.Hide()
+		w.Undo()
+	}
+}
+
+// showRefused types a length the scheme refuses: the banner says why, the
+// result on screen stays the last valid one.
+func showRefused(w *Window) func() {
+	f := w.chart.fs.byID["length"]
+	if f == nil {
+		return func() {}
+	}
+	f.entry.SetText("-3 m")
+	f.entry.typed()
+	f.entry.commit()
+	return w.Undo
 }
 
 // tabber is a tab container: app tabs or document tabs.

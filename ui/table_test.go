@@ -65,16 +65,26 @@ func TestWheelScrollsTheTable(t *testing.T) {
 	})
 }
 
-// The Map view takes the centre's height while it shows and gives the
-// table its rows back when the chart is chosen again.
+// The figure views (Map, Variants, Building) take the centre's height while
+// they show and give the table its rows back when the chart is chosen again;
+// the Sections view, one row of plans, leaves the divider alone.
 func TestMapViewTakesTheRoomItNeeds(t *testing.T) {
 	h := newHarnessAt(t, DemoScheme(), fyne.NewSize(1366, 768))
 	h.layOut()
 	h.ui(func() {
 		before := h.w.panes.centre.Offset
-		h.w.viewTabs.SelectIndex(2) // Chart, Sections, Map
-		assert.GreaterOrEqual(t, h.w.panes.centre.Offset, mapShare)
-		h.w.viewTabs.SelectIndex(0)
-		assert.Equal(t, before, h.w.panes.centre.Offset)
+		for _, tab := range []string{"Map", "Variants", "Building"} {
+			for _, it := range h.w.viewTabs.Items {
+				if it.Text == tab {
+					h.w.viewTabs.Select(it)
+				}
+			}
+			assert.GreaterOrEqual(t, h.w.panes.centre.Offset, viewShare, tab)
+		}
+		h.w.viewTabs.SelectIndex(1) // Sections
+		assert.Equal(t, before, h.w.panes.centre.Offset, "Sections")
+		h.w.viewTabs.SelectIndex(2) // Map
+		h.w.viewTabs.SelectIndex(0) // Chart
+		assert.Equal(t, before, h.w.panes.centre.Offset, "Chart")
 	})
 }

@@ -15,6 +15,9 @@ type shownSetter interface {
 // and Map.
 type view struct {
 	title string
+	// room is set for a figure view that takes the centre's height while
+	// shown (the table folds to a few rows under it).
+	room bool
 	// make builds the view's pane; the window is its editor (w satisfies
 	// editor) and w.do runs a function on the UI goroutine.
 	make func(w *Window) pane
@@ -23,12 +26,12 @@ type view struct {
 // extraViews are the views added as tabs after Chart, Sections and Map, in
 // tab order. Adding a view is one line here, e.g.
 //
-//	{"Variants", func(w *Window) pane { return newVariantsPane(w) }},
+//	{"Variants", true, func(w *Window) pane { return newVariantsPane(w) }},
 //
 // plus one line in shotViews (ui/shots.go) for its screenshot.
 var extraViews = []view{
-	{"Variants", func(w *Window) pane { return newVariantsPane(w, w.do) }},
-	{"Building", func(w *Window) pane { return newBuildingPane(w) }},
+	{"Variants", true, func(w *Window) pane { return newVariantsPane(w, w.do) }},
+	{"Building", true, func(w *Window) pane { return newBuildingPane(w) }},
 }
 
 // addViews appends the extra views to the view tabs and feeds them the

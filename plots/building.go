@@ -151,8 +151,9 @@ func footer(c draw.Canvas, w vg.Length, note, caution string) vg.Length {
 	var lines []string
 	var styles []text.Style
 	if caution != "" {
-		for _, l := range wrapText(bold, caution, w) {
-			lines, styles = append(lines, l), append(styles, bold)
+		cl := wrapText(bold, caution, w) // drawn upwards: the last line first
+		for k := len(cl) - 1; k >= 0; k-- {
+			lines, styles = append(lines, cl[k]), append(styles, bold)
 		}
 	}
 	if note != "" {
@@ -168,6 +169,19 @@ func footer(c draw.Canvas, w vg.Length, note, caution string) vg.Length {
 	return y - c.Min.Y
 }
 
+// drawTitle writes a title from top down, wrapped at words to width, and
+// returns the top left for what follows it; an empty title takes no room.
+func drawTitle(c draw.Canvas, sty text.Style, title string, x, top, width vg.Length) vg.Length {
+	if title == "" {
+		return top
+	}
+	for _, l := range wrapText(sty, title, width) {
+		c.FillText(sty, vg.Point{X: x, Y: top}, l)
+		top -= vg.Points(bldTitle * 1.3)
+	}
+	return top - vg.Points(bldTitle*0.3)
+}
+
 // drawPlan paints the floor plan on c.
 func (p *FloorPlan) draw(c draw.Canvas, fill bool) {
 	if fill {
@@ -177,11 +191,8 @@ func (p *FloorPlan) draw(c draw.Canvas, fill bool) {
 	m := vg.Points(bldMargin)
 	titleSty := aligned(textStyle(faceBold, vg.Points(bldTitle), inkText), draw.XLeft, draw.YTop)
 	top := c.Max.Y - m
-	if p.Title != "" {
-		c.FillText(titleSty, vg.Point{X: c.Min.X + m, Y: top}, p.Title)
-		top -= vg.Points(bldTitle * 1.6)
-	}
 	w := c.Max.X - c.Min.X - 2*m
+	top = drawTitle(c, titleSty, p.Title, c.Min.X+m, top, w)
 	bottom := c.Min.Y + footer(c, w, p.Note, p.Caution)
 	labSty := aligned(textStyle(faceRegular, vg.Points(bldLabel), inkText), draw.XLeft, draw.YBottom)
 	bottom += vg.Points(bldLabel*1.3) * vg.Length(len(p.Legend))
@@ -274,11 +285,8 @@ func (e *Elevation) draw(c draw.Canvas, fill bool) {
 	m := vg.Points(bldMargin)
 	titleSty := aligned(textStyle(faceBold, vg.Points(bldTitle), inkText), draw.XLeft, draw.YTop)
 	top := c.Max.Y - m
-	if e.Title != "" {
-		c.FillText(titleSty, vg.Point{X: c.Min.X + m, Y: top}, e.Title)
-		top -= vg.Points(bldTitle * 1.6)
-	}
 	w := c.Max.X - c.Min.X - 2*m
+	top = drawTitle(c, titleSty, e.Title, c.Min.X+m, top, w)
 	bottom := c.Min.Y + footer(c, w, e.Note, e.Caution) + vg.Points(bldLabel*1.5)
 	levelSty := aligned(textStyle(faceRegular, vg.Points(bldSmall), inkMuted), draw.XLeft, draw.YCenter)
 	nameSty := aligned(textStyle(faceBold, vg.Points(bldLabel), inkText), draw.XCenter, draw.YTop)

@@ -53,6 +53,8 @@ type buildingPane struct {
 	mu      sync.Mutex
 	pending *model.Scheme // the next scheme to size; nil when none
 	busy    bool          // a sizing goroutine is running
+	size    plots.Size    // the drawings' size: the view's, so their text is read at its own size
+	sized   model.Scheme  // the scheme last handed to submit, drawn again when the view's size changes
 }
 
 // Building view limits of the storey-height slider, mm.
@@ -180,7 +182,9 @@ func newBuildingPane(ed editor) *buildingPane {
 	choice.Horizontal = true
 	choice.Required = true
 	choice.SetSelected("Plan")
-	drawings := container.NewBorder(choice, nil, nil, nil, container.NewStack(p.plan, p.elev, totals))
+	p.size = buildingViewSize
+	figures := container.New(&sizeWatch{onChange: p.resized}, container.NewStack(p.plan, p.elev, totals))
+	drawings := container.NewBorder(choice, nil, nil, nil, figures)
 	split := container.NewHSplit(left, drawings)
 	split.Offset = 0.34
 	p.body = split
@@ -324,8 +328,34 @@ func lengthList(mm []float64, sys units.System) string {
 	return strings.Join(parts, ",")
 }
 
+// resized draws the figures again at the view's new size (in points, at
+// the screen's resolution), once the change is more than a few per cent.
+func (p *buildingPane) resized(sz fyne.Size) {
+	scale := float32(1)
+	if a := fyne.CurrentApp(); a != nil && a.Driver() != nil {
+		if c := a.Driver().CanvasForObject(p.plan); c != nil {
+			scale = c.Scale()
+		}
+	}
+	want := plots.Size{Width: float64(sz.Width) * 0.75, Height: float64(sz.Height) * 0.75, DPI: int(math.Round(96 * float64(scale)))}
+	if want.Width < 240 || want.Height < 160 {
+		want = buildingViewSize // too small to lay a plan out: the page, scaled down
+	}
+	p.mu.Lock()
+	old := p.size
+	same := math.Abs(want.Width-old.Width) < 0.04*old.Width && math.Abs(want.Height-old.Height) < 0.04*old.Height && want.DPI == old.DPI
+	if !same {
+		p.size = want
+	}
+	p.mu.Unlock()
+	if !same && p.sched != nil {
+		p.submit(p.sized)
+	}
+}
+
 // submit sizes sc on a goroutine, keeping only the latest scheme asked for.
 func (p *buildingPane) submit(sc model.Scheme) {
+	p.sized = sc
 	p.mu.Lock()
 	p.pending = &sc
 	start := !p.busy
@@ -348,7 +378,7 @@ type buildingOut struct {
 func (p *buildingPane) work() {
 	for {
 		p.mu.Lock()
-		sc := p.pending
+		sc, size := p.pending, p.size
 		p.pending = nil
 		if sc == nil {
 			p.busy = false
@@ -356,16 +386,17 @@ func (p *buildingPane) work() {
 			return
 		}
 		p.mu.Unlock()
-		out := sizeBuilding(*sc)
+		out := sizeBuilding(*sc, size)
 		fyne.Do(func() { p.apply(out) })
 	}
 }
 
-// buildingViewSize is the drawings' size in the view: 10 × 7 inches at 96 DPI.
+// buildingViewSize is the drawings' size until the view has one: 10 × 7
+// inches at 96 DPI.
 var buildingViewSize = plots.Size{Width: 720, Height: 504, DPI: 96}
 
 // sizeBuilding works out the schedule of sc and draws its plan and stacks.
-func sizeBuilding(sc model.Scheme) buildingOut {
+func sizeBuilding(sc model.Scheme, size plots.Size) buildingOut {
 	out := buildingOut{key: buildingKey(sc)}
 	s, err := model.NewSchedule(sc)
 	if err != nil {
@@ -391,9 +422,9 @@ func sizeBuilding(sc model.Scheme) buildingOut {
 		return img
 	}
 	pl := chart.FloorPlan(s, fi, chart.PlanStorey(s))
-	out.plan = draw(func(b *bytes.Buffer) error { return plots.WriteFloorPlan(b, plots.PNG, &pl, buildingViewSize) })
+	out.plan = draw(func(b *bytes.Buffer) error { return plots.WriteFloorPlan(b, plots.PNG, &pl, size) })
 	el := chart.Elevation(s, fi)
-	out.elev = draw(func(b *bytes.Buffer) error { return plots.WriteElevation(b, plots.PNG, &el, buildingViewSize) })
+	out.elev = draw(func(b *bytes.Buffer) error { return plots.WriteElevation(b, plots.PNG, &el, size) })
 	return out
 }
 
@@ -503,4 +534,33 @@ func ambiguousWhy(err error) string {
 		return pe.Why() + "; "
 	}
 	return ""
+}
+
+// sizeWatch lays one object over its whole area and reports size changes.
+type sizeWatch struct {
+	last     fyne.Size
+	onChange func(fyne.Size)
+}
+
+// Layout fills the area with each object and reports a new size.
+func (l *sizeWatch) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+	for _, o := range objs {
+		o.Move(fyne.NewPos(0, 0))
+		o.Resize(size)
+	}
+	if size != l.last {
+		l.last = size
+		if l.onChange != nil {
+			l.onChange(size)
+		}
+	}
+}
+
+// MinSize is the largest minimum size of the objects.
+func (l *sizeWatch) MinSize(objs []fyne.CanvasObject) fyne.Size {
+	var s fyne.Size
+	for _, o := range objs {
+		s = s.Max(o.MinSize())
+	}
+	return s
 }

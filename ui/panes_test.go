@@ -5,7 +5,10 @@ import (
 	"os"
 	"path/filepath"
 	"strings"
+	"sync"
+	"sync/atomic"
 	"testing"
+	"time"
 
 	"fyne.io/fyne/v2"
 	"fyne.io/fyne/v2/container"
@@ -315,4 +318,85 @@ func TestARefusedLengthMovesNothing(t *testing.T) {
 	assert.Equal(t, slider, p.slider.Value, "the slider stays at the valid length")
 	assert.Equal(t, weak, st.Text("weak-axis length"), "the weak-axis length is not moved by a refused length")
 	assert.InDelta(t, 4200, st.Valid.Setting.LengthMM, 1e-9)
+}
+
+// lockLink is a drawLink for a view shown alone: a lock stands in for the
+// UI goroutine, shared with the test's own reads.
+type lockLink struct {
+	mu      sync.Mutex
+	closing atomic.Bool
+}
+
+func (l *lockLink) link() drawLink {
+	do := func(f func()) { l.mu.Lock(); defer l.mu.Unlock(); f() }
+	return drawLink{do: do, doWait: do, closing: &l.closing}
+}
+
+// within polls cond under the lock for up to a minute.
+func (l *lockLink) within(t *testing.T, what string, cond func() bool) {
+	t.Helper()
+	for end := time.Now().Add(time.Minute); time.Now().Before(end); time.Sleep(10 * time.Millisecond) {
+		l.mu.Lock()
+		ok := cond()
+		l.mu.Unlock()
+		if ok {
+			return
+		}
+	}
+	t.Fatalf("timed out: %s", what)
+}
+
+func TestSectionsViewAlone(t *testing.T) {
+	test.NewTempApp(t)
+	l := &lockLink{}
+	var picked []string
+	v := newSectionsView(l.link(), func() string { return "" }, func(d string) { picked = append(picked, d) })
+	t.Cleanup(v.close)
+	l.mu.Lock()
+	v.wantW, v.wantH = 1200, 500
+	v.setVisible(true)
+	v.show(snapshotOf(t, paneScheme(), ""))
+	l.mu.Unlock()
+	l.within(t, "the plan sections drawn", func() bool { return v.front != nil && len(v.shown) > 0 })
+
+	l.mu.Lock()
+	size := fyne.NewSize(600, 250) // half the image: window units are image pixels / 2
+	v.area.Resize(size)
+	b := v.layout.Sections[0]
+	v.area.Tapped(&fyne.PointEvent{Position: fyne.NewPos(float32((b.X+b.W/2)/2), float32((b.Y+b.H/2)/2))})
+	want := v.shown[0]
+	l.mu.Unlock()
+	assert.Equal(t, []string{want}, picked, "a section tapped is handed to the window")
+}
+
+func TestMapViewAlone(t *testing.T) {
+	test.NewTempApp(t)
+	l := &lockLink{}
+	sc := paneScheme()
+	st := NewState(sc)
+	ed := &stubStepper{st: st}
+	type point struct{ mm, load float64 }
+	var points []point
+	exports := 0
+	mv := newMapView(l.link(), st, ed, func(mm, load float64, _ model.MapAxis) { points = append(points, point{mm, load}) }, func() { exports++ })
+	t.Cleanup(mv.close)
+	showAlone(t, mv.view, fyne.NewSize(700, 400))
+	l.mu.Lock()
+	mv.wantW, mv.wantH = 800, 480
+	mv.setVisible(true)
+	l.mu.Unlock()
+	l.within(t, "the map drawn", func() bool { return mv.frames.Load() >= 1 })
+
+	l.mu.Lock()
+	geo := mv.shown
+	require.True(t, geo.ok)
+	a := geo.area
+	px, py := float64(a.Min.X)+float64(a.Dx())/2, float64(a.Min.Y)+float64(a.Dy())/2
+	mv.tapped(fyne.NewPos(float32(px)/2, float32(py)/2), fyne.NewSize(float32(geo.imgW)/2, float32(geo.imgH)/2))
+	test.Tap(mv.inReport)
+	l.mu.Unlock()
+	require.Len(t, points, 1, "a cell tapped is handed to the window")
+	assert.Equal(t, model.MapLoad, geo.axis, "a typed load: the map's rows are loads")
+	assert.Equal(t, []string{"map in the report"}, ed.steps, "the report check box edits through the editor")
+	assert.True(t, st.Draft.ReportMap)
 }

@@ -3,7 +3,6 @@ package ui
 import (
 	"bytes"
 	"encoding/json"
-	"errors"
 	"fmt"
 	"image"
 	"image/png"
@@ -98,7 +97,11 @@ func newBuildingPane(ed editor) *buildingPane {
 	p.facade = entry("0kN/m", func(s string) (string, func(b *model.Building), error) {
 		v, err := units.ParseLineLoad(s)
 		if err != nil {
-			err = fmt.Errorf("façade %q: %sgive %s, from 0 to 100 kN/m (6.85 kip/ft)", s, ambiguousWhy(err), units.LineLoadForms)
+			why := units.WhyAmbiguous(err)
+			if why != "" {
+				why += "; "
+			}
+			err = fmt.Errorf("façade %q: %sgive %s, from 0 to 100 kN/m (6.85 kip/ft)", s, why, units.LineLoadForms)
 		}
 		return "façade " + s, func(b *model.Building) { b.FacadeKNPerM = v }, err
 	})
@@ -524,16 +527,6 @@ func addBuilding(sc *model.Scheme) {
 		b.StoreysMM = []float64{4876.8, 3962.4, 3962.4, 3962.4}
 	}
 	sc.Building = &b
-}
-
-// ambiguousWhy is the sentence saying why a unit was refused as ambiguous,
-// followed by a space, or "" for any other error.
-func ambiguousWhy(err error) string {
-	var pe *units.ParseError
-	if errors.As(err, &pe) && pe.Why() != "" {
-		return pe.Why() + "; "
-	}
-	return ""
 }
 
 // sizeWatch lays one object over its whole area and reports size changes.

@@ -183,10 +183,9 @@ func buildingScheme(f *schemeFlags, bf *buildingFlags, args []string) (model.Sch
 	if f.set("facade") {
 		v, err := units.ParseLineLoad(bf.facade)
 		if err != nil || v < 0 || v > model.MaxFacadeKNM {
-			why := ""
-			var pe *units.ParseError
-			if errors.As(err, &pe) && pe.Why() != "" {
-				why = pe.Why() + "; "
+			why := units.WhyAmbiguous(err)
+			if why != "" {
+				why += "; "
 			}
 			return base, usagef("--facade %q: not accepted; %sgive a façade dead load per metre of edge from 0 to 100 kN/m (0 to 6.85 kip/ft), e.g. 8kN/m or 0.5kip/ft", bf.facade, why)
 		}

@@ -60,6 +60,16 @@ func (e *ParseError) Why() string {
 	return fmt.Sprintf("%q is ambiguous: %s", strings.TrimSpace(e.Value), e.Reason)
 }
 
+// WhyAmbiguous returns the sentence saying why err refused an ambiguous
+// unit ("\"0.5k/ft\" is ambiguous: …"), or "" for any other error.
+func WhyAmbiguous(err error) string {
+	var pe *ParseError
+	if errors.As(err, &pe) {
+		return pe.Why()
+	}
+	return ""
+}
+
 // Unwrap gives ErrAmbiguousUnit for an ambiguous unit, else nil.
 func (e *ParseError) Unwrap() error {
 	if e.Reason != "" {

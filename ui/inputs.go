@@ -127,6 +127,7 @@ type inputsPane struct {
 	fire       fireWidgets
 	inSections []*inputSection // the foldable sections
 	box        *fyne.Container
+	summaryOf  uint64 // the scheme generation the load summary was written for
 }
 
 // loadWidgets are the inputs of the load: typed, or taken down from the
@@ -158,8 +159,15 @@ func newInputsPane(st *State, ed stepper, do func(func()), focused func() fyne.F
 // Object returns the inputs, foldable by section (the window scrolls them).
 func (p *inputsPane) Object() fyne.CanvasObject { return p.box }
 
-// Show says what demand the snapshot's load gives.
-func (p *inputsPane) Show(s *Snapshot) { p.updateLoadSummary(s) }
+// Show says what demand the snapshot's load gives, once per scheme: a new
+// length alone does not change it.
+func (p *inputsPane) Show(s *Snapshot) {
+	if s.SchemeGen != 0 && s.SchemeGen == p.summaryOf {
+		return
+	}
+	p.summaryOf = s.SchemeGen
+	p.updateLoadSummary(s)
+}
 
 // refresh shows the state's texts and problems after a change made anywhere.
 func (p *inputsPane) refresh() {

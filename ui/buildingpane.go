@@ -186,7 +186,7 @@ func newBuildingPane(ed editor) *buildingPane {
 	choice.Required = true
 	choice.SetSelected("Plan")
 	p.size = buildingViewSize
-	figures := container.New(&sizeWatch{onChange: p.resized}, container.NewStack(p.plan, p.elev, totals))
+	figures := container.New(&sizeWatch{onSize: p.resized}, container.NewStack(p.plan, p.elev, totals))
 	drawings := container.NewBorder(choice, nil, nil, nil, figures)
 	split := container.NewHSplit(left, drawings)
 	split.Offset = 0.34
@@ -527,33 +527,4 @@ func addBuilding(sc *model.Scheme) {
 		b.StoreysMM = []float64{4876.8, 3962.4, 3962.4, 3962.4}
 	}
 	sc.Building = &b
-}
-
-// sizeWatch lays one object over its whole area and reports size changes.
-type sizeWatch struct {
-	last     fyne.Size
-	onChange func(fyne.Size)
-}
-
-// Layout fills the area with each object and reports a new size.
-func (l *sizeWatch) Layout(objs []fyne.CanvasObject, size fyne.Size) {
-	for _, o := range objs {
-		o.Move(fyne.NewPos(0, 0))
-		o.Resize(size)
-	}
-	if size != l.last {
-		l.last = size
-		if l.onChange != nil {
-			l.onChange(size)
-		}
-	}
-}
-
-// MinSize is the largest minimum size of the objects.
-func (l *sizeWatch) MinSize(objs []fyne.CanvasObject) fyne.Size {
-	var s fyne.Size
-	for _, o := range objs {
-		s = s.Max(o.MinSize())
-	}
-	return s
 }

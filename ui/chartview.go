@@ -100,7 +100,8 @@ func fromDisplay(v float64, sys units.System) float64 {
 // chartPane is the chart of design strength against unbraced length with
 // the current-length marker over it, and under it the length slider with
 // the length field and the range. The engine draws the chart off the UI
-// goroutine; the pane shows each frame and asks for the size it has.
+// goroutine; the pane is fed its frames (takeFrame) rather than the
+// snapshots, and asks for the size it has.
 type chartPane struct {
 	st     *State  // read only: changes go through ed
 	ed     stepper // the one edit path
@@ -149,9 +150,6 @@ func (p *chartPane) Object() fyne.CanvasObject { return p.plot }
 
 // Controls returns the slider row: the slider, the length field and the range.
 func (p *chartPane) Controls() fyne.CanvasObject { return p.controls }
-
-// Show places the marker for a snapshot's length (the engine sends the chart itself).
-func (p *chartPane) Show(*Snapshot) { p.placeMarker() }
 
 // refresh shows the state's length in the field and on the slider after a
 // change made anywhere, and configures the slider again when the units or

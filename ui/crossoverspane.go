@@ -76,7 +76,7 @@ func newCrossoversPane(ed editor, sys func() units.System, rng func() model.Rang
 	head := container.NewVBox(
 		widget.NewLabelWithStyle("Crossovers", fyne.TextAlignLeading, fyne.TextStyle{Bold: true}),
 		p.status, p.allCheck)
-	p.obj = container.NewBorder(head, nil, nil, nil, container.New(&widthWatch{onChange: func(float32) { p.fitHeights() }}, p.view))
+	p.obj = container.NewBorder(head, nil, nil, nil, container.New(&sizeWatch{onWidth: func(float32) { p.fitHeights() }}, p.view))
 	return p
 }
 

@@ -28,7 +28,6 @@ type fieldSet struct {
 	focused func() fyne.Focusable // the widget with the keyboard focus, if any
 	quiet   int                   // >0 while the pane sets its entries itself
 	byID    map[string]*field     // the fields, by the state's field id
-	after   func(id string)       // called after a field's text is applied, when set
 }
 
 // newFieldSet makes an empty set of fields reading st and editing through ed.
@@ -71,9 +70,6 @@ func (fs *fieldSet) add(id string) *field {
 func (fs *fieldSet) commit(id, text string) {
 	fs.ed.Step("", func(st *State) Outcome { return st.Commit(id, text) })
 	fs.setForce(fs.byID[id], fs.st.Text(id))
-	if fs.after != nil {
-		fs.after(id)
-	}
 }
 
 // refresh shows the state's text in every field but the one being typed in.

@@ -65,7 +65,7 @@ func (w *Window) buildPanes(inputs, chartArea, results, xsPanel, calc fyne.Canva
 
 	p.side = container.NewHSplit(p.inputs, p.main)
 	w.restoreLayout(w.app.Preferences())
-	return container.New(&widthWatch{onChange: w.autoSplits}, p.side)
+	return container.New(&sizeWatch{onWidth: w.autoSplits}, p.side)
 }
 
 // autoSplits sets the side dividers for a window width while they follow it.

@@ -176,13 +176,10 @@ func (w *Window) withMapView(tabs *container.AppTabs) fyne.CanvasObject {
 		mv.setVisible(t == item)
 	}
 	// UPRIGHT_VIEW=map opens on the Map view (screenshots, demonstrations).
-	w.addViews(tabs)
 	// The figure views take the centre's height while shown.
 	roomy := map[*container.TabItem]bool{item: true}
-	for i, v := range extraViews {
-		if v.room {
-			roomy[tabs.Items[len(tabs.Items)-len(extraViews)+i]] = true
-		}
+	for _, it := range w.addViews(tabs) {
+		roomy[it] = true
 	}
 	shown := tabs.OnSelected
 	tabs.OnSelected = func(t *container.TabItem) {

@@ -121,7 +121,7 @@ func TestChartPaneAlone(t *testing.T) {
 	resized := 0
 	p := newChartPane(st, ed, now, nil, func() { resized++ })
 	p.refresh(true)
-	win := showAlone(t, container2(p.Object(), p.Controls()), fyne.NewSize(700, 400))
+	win := showAlone(t, container.NewBorder(nil, p.Controls(), nil, nil, p.Object()), fyne.NewSize(700, 400))
 	win.Canvas().Refresh(p.Object())
 	test.WidgetRenderer(p.slider) // lays the slider out
 
@@ -148,27 +148,6 @@ func TestChartPaneAlone(t *testing.T) {
 	assert.InDelta(t, 5500, st.Draft.Setting.LengthMM, 1e-9)
 	p.refresh(false)
 	assert.InDelta(t, 5500/304.8, p.slider.Value, 1e-9, "the slider follows the typed length")
-}
-
-// container2 stacks two objects for a pane shown alone.
-func container2(top, bottom fyne.CanvasObject) fyne.CanvasObject {
-	return container.New(&vStackLayout{}, top, bottom)
-}
-
-// vStackLayout gives the first object what the second leaves.
-type vStackLayout struct{}
-
-func (vStackLayout) Layout(objs []fyne.CanvasObject, size fyne.Size) {
-	h := objs[1].MinSize().Height
-	objs[0].Move(fyne.NewPos(0, 0))
-	objs[0].Resize(fyne.NewSize(size.Width, size.Height-h))
-	objs[1].Move(fyne.NewPos(0, size.Height-h))
-	objs[1].Resize(fyne.NewSize(size.Width, h))
-}
-
-func (vStackLayout) MinSize(objs []fyne.CanvasObject) fyne.Size {
-	a, b := objs[0].MinSize(), objs[1].MinSize()
-	return fyne.NewSize(max(a.Width, b.Width), a.Height+b.Height)
 }
 
 func TestResultsPaneAlone(t *testing.T) {

@@ -135,7 +135,7 @@ func (p *resultsPane) build() fyne.CanvasObject {
 	p.tableFireNote.Hide()
 	title := widget.NewLabelWithStyle("Results", fyne.TextAlignLeading, fyne.TextStyle{Bold: true})
 	head := container.NewVBox(container.NewBorder(nil, nil, title, container.NewHBox(p.showAllChk, p.allColsChk)), p.tableNote, p.tableFireNote)
-	watch := container.New(&widthWatch{onChange: func(width float32) {
+	watch := container.New(&sizeWatch{onWidth: func(width float32) {
 		p.fit.width = width
 		refitText(p.tableNote)
 		refitText(p.tableFireNote)

@@ -88,11 +88,7 @@ func showFileMenu(w *Window) func() {
 // showEditMenu changes the length, as typing it would, and opens the Edit
 // menu naming the step undo would take.
 func showEditMenu(w *Window) func() {
-	if f := w.chart.fs.byID["length"]; f != nil {
-		f.entry.SetText("22 ft")
-		f.entry.typed()
-		f.entry.commit()
-	}
+	typeLength(w, "22 ft")
 	c := w.win.Canvas()
 	top := fyne.CurrentApp().Driver().AbsolutePositionForObject(w.win.Content()).Y
 	m := widget.NewPopUpMenu(w.win.MainMenu().Items[1], c)
@@ -106,14 +102,16 @@ func showEditMenu(w *Window) func() {
 // showRefused types a length the scheme refuses: the banner says why, the
 // result on screen stays the last valid one.
 func showRefused(w *Window) func() {
+	typeLength(w, "-3 m")
+	return w.Undo
+}
+
+// typeLength types text into the length field and commits it, as Enter does.
+func typeLength(w *Window, text string) {
 	f := w.chart.fs.byID["length"]
-	if f == nil {
-		return func() {}
-	}
-	f.entry.SetText("-3 m")
+	f.entry.SetText(text)
 	f.entry.typed()
 	f.entry.commit()
-	return w.Undo
 }
 
 // tabber is a tab container: app tabs or document tabs.

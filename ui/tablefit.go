@@ -215,28 +215,35 @@ func (f *tableFit) choose() []int {
 	return out
 }
 
-// widthWatch lays out one object over its whole area and reports width changes.
-type widthWatch struct {
-	last     float32
-	onChange func(width float32)
+// sizeWatch lays out one object over its whole area and reports changes of
+// its width (onWidth) and of its size (onSize), each when set.
+type sizeWatch struct {
+	last    fyne.Size
+	onWidth func(width float32)
+	onSize  func(size fyne.Size)
 }
 
-// Layout fills the area with each object and reports a new width.
-func (l *widthWatch) Layout(objs []fyne.CanvasObject, size fyne.Size) {
+// Layout fills the area with each object and reports a new width or size.
+func (l *sizeWatch) Layout(objs []fyne.CanvasObject, size fyne.Size) {
 	for _, o := range objs {
 		o.Move(fyne.NewPos(0, 0))
 		o.Resize(size)
 	}
-	if size.Width != l.last {
-		l.last = size.Width
-		if l.onChange != nil {
-			l.onChange(size.Width)
-		}
+	if size == l.last {
+		return
+	}
+	widthChanged := size.Width != l.last.Width
+	l.last = size
+	if widthChanged && l.onWidth != nil {
+		l.onWidth(size.Width)
+	}
+	if l.onSize != nil {
+		l.onSize(size)
 	}
 }
 
 // MinSize is the largest minimum size of the objects.
-func (l *widthWatch) MinSize(objs []fyne.CanvasObject) fyne.Size {
+func (l *sizeWatch) MinSize(objs []fyne.CanvasObject) fyne.Size {
 	var s fyne.Size
 	for _, o := range objs {
 		s = s.Max(o.MinSize())

@@ -35,8 +35,9 @@ var extraViews = []view{
 }
 
 // addViews appends the extra views to the view tabs and feeds them the
-// snapshots; selecting a tab tells each view whether it shows.
-func (w *Window) addViews(tabs *container.AppTabs) {
+// snapshots; selecting a tab tells each view whether it shows. It returns
+// the tabs of the views that take the centre's height (view.room).
+func (w *Window) addViews(tabs *container.AppTabs) (roomy []*container.TabItem) {
 	type shown struct {
 		item *container.TabItem
 		p    pane
@@ -50,9 +51,12 @@ func (w *Window) addViews(tabs *container.AppTabs) {
 		tabs.Append(item)
 		w.fed = append(w.fed, p)
 		views = append(views, shown{item, p})
+		if v.room {
+			roomy = append(roomy, item)
+		}
 	}
 	if len(views) == 0 {
-		return
+		return nil
 	}
 	prev := tabs.OnSelected
 	tabs.OnSelected = func(t *container.TabItem) {
@@ -65,6 +69,7 @@ func (w *Window) addViews(tabs *container.AppTabs) {
 			}
 		}
 	}
+	return roomy
 }
 
 // feed hands a snapshot to every pane that follows the snapshots.

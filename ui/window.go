@@ -131,7 +131,7 @@ func (w *Window) build() fyne.CanvasObject {
 	w.results = newResultsPane(func() (units.System, model.Method) { return w.sys(), w.st.Valid.Setting.Method }, w.Select)
 	w.calc = newCalcPane(w.TogglePin, w.clearPins)
 	w.status = newStatusPane()
-	w.fed = append(w.fed, w.inputs, w.chart, w.results, w.calc, w.status)
+	w.fed = append(w.fed, w.inputs, w.results, w.calc, w.status) // the chart is fed frames (takeFrame)
 
 	// One row of view tabs over the slider: Chart, Sections, Map, then the extra views.
 	views := w.withMapView(w.plotViews(w.chart.Object()))
